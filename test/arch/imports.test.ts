@@ -1,0 +1,72 @@
+/**
+ * Dependency direction (DEVELOPERS.md, "Architecture"): core imports nothing outside core (and no
+ * node: or package imports); templates never import db or server; db never imports server or
+ * templates; nothing imports server except server itself, tests and bench.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative, resolve, dirname, sep } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const root = resolve(import.meta.dirname, '..', '..');
+
+function files(dir: string): string[] {
+  const out: string[] = [];
+  for (const name of readdirSync(join(root, dir))) {
+    const p = join(dir, name);
+    if (statSync(join(root, p)).isDirectory()) out.push(...files(p));
+    else if (/\.(ts|tsx)$/.test(name)) out.push(p);
+  }
+  return out;
+}
+
+const IMPORT_RE = /(?:import|export)\s[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|^\s*import\s*['"]([^'"]+)['"]/gm;
+
+function specifiers(file: string): string[] {
+  const src = readFileSync(join(root, file), 'utf8');
+  return [...src.matchAll(IMPORT_RE)].map((m) => m[1] ?? m[2] ?? m[3]!).filter(Boolean);
+}
+
+/** Top-level folder a relative import lands in, or the package name for bare imports. */
+function target(file: string, spec: string): { folder?: string; pkg?: string } {
+  if (!spec.startsWith('.')) return { pkg: spec };
+  const abs = resolve(root, dirname(file), spec);
+  return { folder: relative(root, abs).split(sep)[0] };
+}
+
+function violations(folder: string, rule: (t: { folder?: string; pkg?: string }) => string | undefined): string[] {
+  const out: string[] = [];
+  for (const f of files(folder)) {
+    for (const s of specifiers(f)) {
+      const why = rule(target(f, s));
+      if (why) out.push(`${f}: imports '${s}' (${why})`);
+    }
+  }
+  return out;
+}
+
+const CORE_ALLOWED_PACKAGES = new Set(['csv-parse/sync']);
+
+describe('dependency direction (DEVELOPERS.md)', () => {
+  it('core imports only core (plus the CSV parser for climate files)', () => {
+    expect(
+      violations('core', (t) =>
+        t.pkg !== undefined
+          ? CORE_ALLOWED_PACKAGES.has(t.pkg) ? undefined : 'core stays pure: no packages or node: modules'
+          : t.folder !== 'core' ? 'core imports nothing outside core' : undefined,
+      ),
+    ).toEqual([]);
+  });
+
+  for (const folder of ['db', 'templates']) {
+    it(`${folder} does not import server${folder === 'templates' ? ' or db' : ' or templates'}`, () => {
+      const banned = folder === 'templates' ? ['server', 'db'] : ['server', 'templates'];
+      expect(violations(folder, (t) => (t.folder && banned.includes(t.folder) ? `${folder} must not import ${t.folder}` : undefined))).toEqual([]);
+    });
+  }
+
+  it('the rule checker finds a forbidden import when one exists', () => {
+    // A check that can fail: this very test file imports node:fs, which the core rule rejects.
+    const v = violations('test/arch', (t) => (t.pkg?.startsWith('node:') ? 'node module' : undefined));
+    expect(v.length).toBeGreaterThan(0);
+  });
+});

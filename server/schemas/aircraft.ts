@@ -1,0 +1,92 @@
+/**
+ * zod schema of an aircraft profile, built from the field table in core/aircraft.ts so that ranges and
+ * units live in one place. Conditional fields (turbofan, propeller, multi-engine, tailwheel) are checked
+ * after the shape; cross-field rules come from core's validateAircraft.
+ */
+import { z } from 'zod';
+import {
+  AIRCRAFT_FIELDS, CERTIFICATION_BASES, CRUISE_FIELDS, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
+  InputDomainError, validateAircraft, type AircraftProfile, type FieldSpec,
+} from '../../core/index.js';
+import { ident, num, oneOf, text } from './common.js';
+
+function shapeOf(fields: readonly FieldSpec[]): Record<string, z.ZodType> {
+  const shape: Record<string, z.ZodType> = {};
+  for (const f of fields) {
+    const n = f.key === 'engineCount' ? num(f.min, f.max, f.unit).refine(Number.isInteger, { error: 'a whole number' }) : num(f.min, f.max, f.unit);
+    shape[f.key] = f.when === 'always' ? n : n.optional();
+  }
+  return shape;
+}
+
+const axis = (min: number, max: number, unit: string) => z.array(num(min, max, unit)).min(1).max(20);
+
+export const referenceTableSchema = z.strictObject({
+  mass_kg: axis(300, 600000, 'kg'),
+  elevation_m: axis(-400, 4500, 'm'),
+  temperature_c: axis(-40, 55, '°C'),
+  length_m: z.array(z.array(z.array(num(100, 6000, 'm')))),
+});
+
+export const referenceSchema = z.strictObject({
+  takeoff_m: num(100, 5000, 'm').optional(),
+  landing_m: num(100, 5000, 'm').optional(),
+  table: referenceTableSchema.optional(),
+});
+
+export const cruiseSchema = z.strictObject(shapeOf(CRUISE_FIELDS));
+
+const baseShape = {
+  id: ident,
+  name: text(120),
+  group: text(64).optional(),
+  certification: oneOf(CERTIFICATION_BASES as unknown as readonly [string, ...string[]]),
+  engineType: oneOf(ENGINE_TYPES as unknown as readonly [string, ...string[]]),
+  gear: oneOf(GEAR_LAYOUTS as unknown as readonly [string, ...string[]]),
+  thrustLapse: oneOf(THRUST_LAPSE_MODELS as unknown as readonly [string, ...string[]]).optional(),
+  ...shapeOf(AIRCRAFT_FIELDS),
+  cruise: cruiseSchema.optional(),
+  reference: referenceSchema.optional(),
+};
+
+function conditionalRequired(spec: FieldSpec, a: Record<string, unknown>): boolean {
+  switch (spec.when) {
+    case 'turbofan': return a.engineType === 'turbofan';
+    case 'propeller': return a.engineType === 'turboprop' || a.engineType === 'piston';
+    case 'multiEngine': return typeof a.engineCount === 'number' && a.engineCount > 1;
+    case 'tailwheel': return a.gear === 'tailwheel';
+    default: return false;
+  }
+}
+
+/** The aircraft profile as it appears in study files, workspace files and the JSON API. */
+export const aircraftSchema = z.strictObject(baseShape).superRefine((a, ctx) => {
+  const rec = a as Record<string, unknown>;
+  let missing = false;
+  for (const spec of AIRCRAFT_FIELDS) {
+    if (rec[spec.key] === undefined && conditionalRequired(spec, rec)) {
+      missing = true;
+      ctx.addIssue({ code: 'custom', path: [spec.key], input: undefined, message: `missing; required for this aircraft (${spec.when}); allowed ${spec.min} to ${spec.max}${spec.unit ? ' ' + spec.unit : ''}` });
+    }
+  }
+  const cruise = rec.cruise as Record<string, unknown> | undefined;
+  if (cruise) {
+    for (const spec of CRUISE_FIELDS) {
+      if (cruise[spec.key] === undefined && conditionalRequired(spec, rec)) {
+        missing = true;
+        ctx.addIssue({ code: 'custom', path: ['cruise', spec.key], input: undefined, message: `missing; required for this engine type; allowed ${spec.min} to ${spec.max}${spec.unit ? ' ' + spec.unit : ''}` });
+      }
+    }
+  }
+  if (missing) return;
+  try {
+    validateAircraft(a as unknown as AircraftProfile, '');
+  } catch (e) {
+    if (!(e instanceof InputDomainError)) throw e;
+    const path = e.field.replace(/^\./, '').split('.').flatMap((k) => {
+      const m = /^(.*?)\[(\d+)\]/.exec(k);
+      return m ? [m[1]!, Number(m[2])] : [k];
+    });
+    ctx.addIssue({ code: 'custom', path, input: e.value, message: `${String(e.value)} is not allowed; expected ${e.allowed}` });
+  }
+}) as unknown as z.ZodType<AircraftProfile>;

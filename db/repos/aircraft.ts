@@ -1,0 +1,284 @@
+/**
+ * Aircraft catalogue repository: plain functions over a drizzle database (or transaction).
+ *
+ * Profiles are validated with core's `validateAircraft` before they are written (InputDomainError
+ * names field, value and range). Multi-row writes run in one synchronous transaction. Deleting an
+ * aircraft that a fleet row uses is refused with `AircraftInUseError`, which names the scenarios.
+ * Renaming an aircraft (updating with a new id) carries the new id into fleet rows (ON UPDATE CASCADE);
+ * saved results keep the input they were computed from and never change.
+ */
+import { asc, eq, getTableColumns, inArray, sql } from 'drizzle-orm';
+import { validateAircraft, type AircraftProfile, type CruiseData, type ReferenceLengths, type ReferenceTable } from '../../core/index.js';
+import { AircraftInUseError, DuplicateIdError, NotFoundError, type ScenarioUse } from '../errors.js';
+import { aircraft, fleetRows, scenarios, studies } from '../schema.js';
+import { transaction } from '../transaction.js';
+import type { Db } from '../types.js';
+
+type AircraftRow = typeof aircraft.$inferSelect;
+type AircraftInsert = typeof aircraft.$inferInsert;
+
+/** Converts a profile to its table row (cruise and reference fields flattened, the table as JSON). */
+export function aircraftToRow(a: AircraftProfile): AircraftInsert {
+  const c = a.cruise;
+  const r = a.reference;
+  return {
+    id: a.id,
+    name: a.name,
+    group: a.group ?? null,
+    certification: a.certification,
+    engineType: a.engineType,
+    engineCount: a.engineCount,
+    gear: a.gear,
+    mtow_kg: a.mtow_kg,
+    mlw_kg: a.mlw_kg,
+    oew_kg: a.oew_kg,
+    maxPayload_kg: a.maxPayload_kg,
+    maxFuel_kg: a.maxFuel_kg,
+    wingArea_m2: a.wingArea_m2,
+    wingspan_m: a.wingspan_m,
+    wingHeight_m: a.wingHeight_m,
+    tailHeight_m: a.tailHeight_m,
+    mainGearSpan_m: a.mainGearSpan_m,
+    clMaxTakeoff: a.clMaxTakeoff,
+    clMaxLanding: a.clMaxLanding,
+    clGround: a.clGround,
+    cd0Takeoff: a.cd0Takeoff,
+    cd0Landing: a.cd0Landing,
+    oswald: a.oswald,
+    engineOutDrag: a.engineOutDrag,
+    staticThrust_N: a.staticThrust_N ?? null,
+    bypassRatio: a.bypassRatio ?? null,
+    flatRatingTemp_c: a.flatRatingTemp_c ?? null,
+    thrustLapse: a.thrustLapse ?? null,
+    shaftPower_W: a.shaftPower_W ?? null,
+    propDiameter_m: a.propDiameter_m ?? null,
+    propEfficiency: a.propEfficiency ?? null,
+    idleThrustFraction: a.idleThrustFraction,
+    rollingFriction: a.rollingFriction,
+    brakingFrictionDry: a.brakingFrictionDry,
+    brakingFrictionWet: a.brakingFrictionWet,
+    vrFactor: a.vrFactor,
+    vlofFactor: a.vlofFactor,
+    v2Factor: a.v2Factor,
+    vrefFactor: a.vrefFactor,
+    vmcg_mps: a.vmcg_mps ?? null,
+    rotationTime_s: a.rotationTime_s,
+    recognitionTime_s: a.recognitionTime_s,
+    freeRollTime_s: a.freeRollTime_s,
+    tailUpSpeed_mps: a.tailUpSpeed_mps ?? null,
+    threePointCl: a.threePointCl ?? null,
+    lightAircraftFactor: a.lightAircraftFactor ?? null,
+    cruiseSpeed_mps: c?.speed_mps ?? null,
+    cruiseAltitude_m: c?.altitude_m ?? null,
+    cruiseLiftToDrag: c?.liftToDrag ?? null,
+    cruiseHoldLiftToDrag: c?.holdLiftToDrag ?? null,
+    cruiseTsfc_perh: c?.tsfc_perh ?? null,
+    cruiseBsfc_kgPerKwh: c?.bsfc_kgPerKwh ?? null,
+    cruisePropEfficiency: c?.cruisePropEfficiency ?? null,
+    cruiseTaxiFuel_kg: c?.taxiFuel_kg ?? null,
+    cruiseContingencyFraction: c?.contingencyFraction ?? null,
+    referenceTakeoff_m: r?.takeoff_m ?? null,
+    referenceLanding_m: r?.landing_m ?? null,
+    referenceTableJson: r?.table === undefined ? null : JSON.stringify(r.table),
+  };
+}
+
+/** `{ [key]: v }` when v is not null, else `{}`: optional fields are absent, never null. */
+function opt<K extends string, V>(key: K, v: V | null): { [P in K]?: V } {
+  return (v === null ? {} : { [key]: v }) as { [P in K]?: V };
+}
+
+function need(v: number | null, column: string, id: string): number {
+  if (v === null) throw new Error(`internal: aircraft ${id} has no ${column} although it has cruise data`);
+  return v;
+}
+
+/** Converts a table row back to a profile. Keys come in one fixed order, optional ones only when set. */
+export function rowToAircraft(r: AircraftRow): AircraftProfile {
+  let cruise: CruiseData | undefined;
+  if (r.cruiseSpeed_mps !== null) {
+    cruise = {
+      speed_mps: r.cruiseSpeed_mps,
+      altitude_m: need(r.cruiseAltitude_m, 'cruise_altitude_m', r.id),
+      liftToDrag: need(r.cruiseLiftToDrag, 'cruise_lift_to_drag', r.id),
+      holdLiftToDrag: need(r.cruiseHoldLiftToDrag, 'cruise_hold_lift_to_drag', r.id),
+      ...opt('tsfc_perh', r.cruiseTsfc_perh),
+      ...opt('bsfc_kgPerKwh', r.cruiseBsfc_kgPerKwh),
+      ...opt('cruisePropEfficiency', r.cruisePropEfficiency),
+      taxiFuel_kg: need(r.cruiseTaxiFuel_kg, 'cruise_taxi_fuel_kg', r.id),
+      contingencyFraction: need(r.cruiseContingencyFraction, 'cruise_contingency_fraction', r.id),
+    };
+  }
+  let reference: ReferenceLengths | undefined;
+  if (r.referenceTakeoff_m !== null || r.referenceLanding_m !== null || r.referenceTableJson !== null) {
+    reference = {
+      ...opt('takeoff_m', r.referenceTakeoff_m),
+      ...opt('landing_m', r.referenceLanding_m),
+      ...opt('table', r.referenceTableJson === null ? null : (JSON.parse(r.referenceTableJson) as ReferenceTable)),
+    };
+  }
+  return {
+    id: r.id,
+    name: r.name,
+    ...opt('group', r.group),
+    certification: r.certification,
+    engineType: r.engineType,
+    engineCount: r.engineCount,
+    gear: r.gear,
+    mtow_kg: r.mtow_kg,
+    mlw_kg: r.mlw_kg,
+    oew_kg: r.oew_kg,
+    maxPayload_kg: r.maxPayload_kg,
+    maxFuel_kg: r.maxFuel_kg,
+    wingArea_m2: r.wingArea_m2,
+    wingspan_m: r.wingspan_m,
+    wingHeight_m: r.wingHeight_m,
+    tailHeight_m: r.tailHeight_m,
+    mainGearSpan_m: r.mainGearSpan_m,
+    clMaxTakeoff: r.clMaxTakeoff,
+    clMaxLanding: r.clMaxLanding,
+    clGround: r.clGround,
+    cd0Takeoff: r.cd0Takeoff,
+    cd0Landing: r.cd0Landing,
+    oswald: r.oswald,
+    engineOutDrag: r.engineOutDrag,
+    ...opt('staticThrust_N', r.staticThrust_N),
+    ...opt('bypassRatio', r.bypassRatio),
+    ...opt('flatRatingTemp_c', r.flatRatingTemp_c),
+    ...opt('thrustLapse', r.thrustLapse),
+    ...opt('shaftPower_W', r.shaftPower_W),
+    ...opt('propDiameter_m', r.propDiameter_m),
+    ...opt('propEfficiency', r.propEfficiency),
+    idleThrustFraction: r.idleThrustFraction,
+    rollingFriction: r.rollingFriction,
+    brakingFrictionDry: r.brakingFrictionDry,
+    brakingFrictionWet: r.brakingFrictionWet,
+    vrFactor: r.vrFactor,
+    vlofFactor: r.vlofFactor,
+    v2Factor: r.v2Factor,
+    vrefFactor: r.vrefFactor,
+    ...opt('vmcg_mps', r.vmcg_mps),
+    rotationTime_s: r.rotationTime_s,
+    recognitionTime_s: r.recognitionTime_s,
+    freeRollTime_s: r.freeRollTime_s,
+    ...opt('tailUpSpeed_mps', r.tailUpSpeed_mps),
+    ...opt('threePointCl', r.threePointCl),
+    ...opt('lightAircraftFactor', r.lightAircraftFactor),
+    ...(cruise === undefined ? {} : { cruise }),
+    ...(reference === undefined ? {} : { reference }),
+  };
+}
+
+/** Every aircraft, ordered by name then id. */
+export function listAircraft(db: Db): AircraftProfile[] {
+  return db.select().from(aircraft).orderBy(asc(aircraft.name), asc(aircraft.id)).all().map(rowToAircraft);
+}
+
+/** The aircraft with this id, or undefined. */
+export function getAircraft(db: Db, id: string): AircraftProfile | undefined {
+  const row = db.select().from(aircraft).where(eq(aircraft.id, id)).get();
+  return row === undefined ? undefined : rowToAircraft(row);
+}
+
+/** Ids of the given list that exist in the catalogue. */
+export function existingAircraftIds(db: Db, ids: readonly string[]): Set<string> {
+  const out = new Set<string>();
+  const unique = [...new Set(ids)];
+  for (let i = 0; i < unique.length; i += 500) {
+    const chunk = unique.slice(i, i + 500);
+    for (const r of db.select({ id: aircraft.id }).from(aircraft).where(inArray(aircraft.id, chunk)).all()) out.add(r.id);
+  }
+  return out;
+}
+
+/** Validates and inserts a new aircraft; throws DuplicateIdError when the id exists. */
+export function createAircraft(db: Db, profile: AircraftProfile): AircraftProfile {
+  return createAircraftMany(db, [profile])[0]!;
+}
+
+/** Every column of the aircraft table bound to a named placeholder of the same name. */
+const INSERT_PLACEHOLDERS = Object.fromEntries(
+  Object.keys(getTableColumns(aircraft)).map((k) => [k, sql.placeholder(k)]),
+) as unknown as AircraftInsert;
+
+/**
+ * Validates and inserts several aircraft in one transaction: all of them, or none (the first invalid
+ * profile or existing id throws and nothing is written).
+ */
+export function createAircraftMany(db: Db, profiles: readonly AircraftProfile[]): AircraftProfile[] {
+  profiles.forEach((p, i) => validateAircraft(p, profiles.length === 1 ? 'aircraft' : `aircraft[${i}]`));
+  const seen = new Set<string>();
+  for (const p of profiles) {
+    if (seen.has(p.id)) throw new DuplicateIdError('aircraft', p.id);
+    seen.add(p.id);
+  }
+  return transaction(db, (tx) => {
+    const existing = existingAircraftIds(tx, profiles.map((p) => p.id));
+    const clash = profiles.find((p) => existing.has(p.id));
+    if (clash) throw new DuplicateIdError('aircraft', clash.id);
+    if (profiles.length === 1) tx.insert(aircraft).values(aircraftToRow(profiles[0]!)).run();
+    else if (profiles.length > 1) {
+      // One prepared statement for the batch: building the SQL once per row dominates large imports.
+      const insert = tx.insert(aircraft).values(INSERT_PLACEHOLDERS).prepare();
+      for (const p of profiles) insert.run(aircraftToRow(p));
+    }
+    return profiles.map((p) => rowToAircraft(aircraftToRow(p) as AircraftRow));
+  });
+}
+
+/**
+ * Replaces the aircraft `id` with `profile` (validated). When `profile.id` differs, the aircraft is
+ * renamed and fleet rows follow; throws NotFoundError or DuplicateIdError.
+ */
+export function updateAircraft(db: Db, id: string, profile: AircraftProfile): AircraftProfile {
+  validateAircraft(profile);
+  return transaction(db, (tx) => {
+    if (!tx.select({ id: aircraft.id }).from(aircraft).where(eq(aircraft.id, id)).get()) throw new NotFoundError('aircraft', id);
+    if (profile.id !== id && tx.select({ id: aircraft.id }).from(aircraft).where(eq(aircraft.id, profile.id)).get()) {
+      throw new DuplicateIdError('aircraft', profile.id);
+    }
+    tx.update(aircraft).set(aircraftToRow(profile)).where(eq(aircraft.id, id)).run();
+    return getAircraft(tx, profile.id)!;
+  });
+}
+
+/** Copies aircraft `sourceId` under a new id (and name, by default "<name> (copy)"). */
+export function duplicateAircraft(db: Db, sourceId: string, copy: { readonly id: string; readonly name?: string }): AircraftProfile {
+  return transaction(db, (tx) => {
+    const src = getAircraft(tx, sourceId);
+    if (!src) throw new NotFoundError('aircraft', sourceId);
+    const name = copy.name ?? `${src.name} (copy)`;
+    return createAircraft(tx, { ...src, id: copy.id, name: name.length > 120 ? name.slice(0, 120) : name });
+  });
+}
+
+/** Scenarios whose fleet uses aircraft `id`, ordered by study then scenario. */
+export function aircraftUses(db: Db, id: string): ScenarioUse[] {
+  return db
+    .selectDistinct({ studyId: studies.id, studyName: studies.name, scenarioId: scenarios.id, scenarioName: scenarios.name, position: scenarios.position })
+    .from(fleetRows)
+    .innerJoin(scenarios, eq(fleetRows.scenarioId, scenarios.id))
+    .innerJoin(studies, eq(scenarios.studyId, studies.id))
+    .where(eq(fleetRows.aircraftId, id))
+    .orderBy(asc(studies.name), asc(studies.id), asc(scenarios.position))
+    .all()
+    .map(({ studyId, studyName, scenarioId, scenarioName }) => ({ studyId, studyName, scenarioId, scenarioName }));
+}
+
+/**
+ * Deletes aircraft `id`. Refused with AircraftInUseError (naming the scenarios) while a fleet row uses
+ * it; NotFoundError when it does not exist.
+ */
+export function deleteAircraft(db: Db, id: string): void {
+  transaction(db, (tx) => {
+    if (!tx.select({ id: aircraft.id }).from(aircraft).where(eq(aircraft.id, id)).get()) throw new NotFoundError('aircraft', id);
+    const uses = aircraftUses(tx, id);
+    if (uses.length > 0) throw new AircraftInUseError(id, uses);
+    tx.delete(aircraft).where(eq(aircraft.id, id)).run();
+  });
+}
+
+/** Number of aircraft in the catalogue. */
+export function countAircraft(db: Db): number {
+  return db.select({ n: sql<number>`count(*)` }).from(aircraft).get()!.n;
+}

@@ -5,7 +5,9 @@
  */
 import type { AircraftProfile } from '../core/aircraft.js';
 import { analyseLanding } from '../core/landing.js';
-import demoFleet from '../examples/demo-fleet.json' with { type: 'json' };
+import demoStudy from '../examples/demo-study.json' with { type: 'json' };
+
+const demoFleet = demoStudy.aircraft;
 import { ratePerSecond, type BenchModule } from './harness.js';
 
 const fleet = demoFleet as unknown as AircraftProfile[];

@@ -7,7 +7,7 @@ import type { AircraftProfile } from '../core/aircraft.js';
 import { designTakeoffMass, payloadRangeDiagram } from '../core/route/index.js';
 import { ratePerSecond, type BenchModule } from './harness.js';
 
-const fleet = JSON.parse(readFileSync(new URL('../examples/demo-fleet.json', import.meta.url), 'utf8')) as AircraftProfile[];
+const fleet = JSON.parse(readFileSync(new URL('../examples/demo-study.json', import.meta.url), 'utf8')).aircraft as AircraftProfile[];
 const tern = fleet.find((a) => a.id === 'tern-rj90')!;
 
 const mod: BenchModule = {

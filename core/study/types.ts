@@ -107,3 +107,235 @@ export interface StudyInput {
   readonly scenarios: readonly ScenarioInput[];
   readonly options: StudyOptions;
 }
+
+// ---------------------------------------------------------------------------------------------
+// Results
+// ---------------------------------------------------------------------------------------------
+
+export interface TraceItem {
+  readonly label: string;
+  readonly value: number;
+  readonly unit: string;
+}
+
+export interface ClimateSummary {
+  readonly source: string;
+  readonly years?: number;
+  /** Hottest month by mean temperature (Annex 14 criterion), 1–12. */
+  readonly hottestMonth: number;
+  /** Mean daily maximum of that month: the aerodrome reference temperature, °C. */
+  readonly art_c: number;
+  /** Month with the highest mean daily maximum, 1–12. */
+  readonly maxMeanMaxMonth: number;
+  readonly maxMeanMax_c: number;
+  /** True when the two criteria pick different months. */
+  readonly monthsDiffer: boolean;
+  /** Older formula Ta + (Tm − Ta)/3 on the hottest month, °C. */
+  readonly olderFormula_c?: number;
+}
+
+export interface RunwayDirectionSummary extends RunwayDirectionInput {
+  readonly stopway_m: number;
+  readonly clearway_m: number;
+  /** Average slope in this takeoff direction (+ uphill), ratio. */
+  readonly slope: number;
+}
+
+export interface RunwaySummary {
+  readonly name: string;
+  readonly pavement: Pavement;
+  readonly length_m: number;
+  /** Effective gradient (high − low) / length, ratio. */
+  readonly effectiveGradient: number;
+  readonly elevationDifference_m: number;
+  readonly highPoint_m: number;
+  readonly lowPoint_m: number;
+  readonly directions: readonly RunwayDirectionSummary[];
+  readonly warnings: readonly string[];
+}
+
+export interface SiteConditions {
+  readonly name: string;
+  readonly elevation_m: number;
+  /** Pressure altitude used for design (= elevation), m. */
+  readonly pressureAltitude_m: number;
+  readonly designTemperature_c: number;
+  readonly designTemperatureSource: 'given' | 'climate';
+  readonly climate?: ClimateSummary;
+  /** ISA temperature at the elevation, °C. */
+  readonly standardTemperature_c: number;
+  readonly isaDeviation_c: number;
+  readonly density_kgm3: number;
+  readonly densityAltitude_m: number;
+  readonly runways: readonly RunwaySummary[];
+  /** Runway whose effective gradient the design case uses (the first listed). */
+  readonly designRunway: string;
+  /** Uphill slope applied to the design takeoff case (the design runway's effective gradient), ratio. */
+  readonly designSlope: number;
+  readonly warnings: readonly string[];
+}
+
+export interface AircraftClassificationSummary {
+  readonly aerodromeCode: string;
+  readonly approachCategory: string;
+  readonly designGroup: string;
+  readonly runwayDesignCode: string;
+  /** Aeroplane reference field length used for the code number, m. */
+  readonly arfl_m: number;
+  /** VREF at MLW, sea level, ISA, m/s. */
+  readonly vref_mps: number;
+}
+
+export interface TakeoffSummary {
+  readonly method: StudyMethod;
+  readonly required_m: number;
+  readonly governing: string;
+  /** Named components for the results table and the appendix (SI). */
+  readonly components: readonly TraceItem[];
+  readonly v1_mps?: number;
+  readonly vr_mps?: number;
+  readonly v2_mps?: number;
+  readonly climbGradient?: number;
+  readonly climbMinimum?: number;
+  readonly climbLimited: boolean;
+  readonly climbMaxMass_kg?: number;
+  /** The physics model's requirement, when it was computed beside another method, m. */
+  readonly physics_m?: number;
+  /** Reference length + corrections, when the aircraft carries reference data, m. */
+  readonly reference_m?: number;
+  /** Calibration factor applied (calibrated method). */
+  readonly calibrationFactor?: number;
+  /** Indicative empirical cross-checks, m. */
+  readonly torenbeek_m?: number;
+  readonly roskam_m?: number;
+}
+
+export interface LandingSummary {
+  readonly mass_kg: number;
+  readonly distance_m: number;
+  readonly required_m: number;
+  readonly rule: string;
+  readonly factor: number;
+  readonly vref_mps: number;
+  readonly components: readonly TraceItem[];
+}
+
+export interface RouteSummary {
+  readonly status: string;
+  readonly reason?: string;
+  readonly stageLength_km: number;
+  readonly payload_kg: number;
+  /** Payload that must stay behind to fly the stage within the limits, kg. */
+  readonly payloadLeftBehind_kg: number;
+  readonly takeoffMass_kg: number;
+  readonly arrivalMass_kg: number;
+  readonly tripFuel_kg: number;
+  readonly reserveFuel_kg: number;
+}
+
+export interface ExistingRunwayCheck {
+  readonly runway: string;
+  readonly designator: string;
+  /** Needs at the design takeoff mass against the declared distances, m. */
+  readonly takeoffRunNeeded_m: number;
+  readonly takeoffDistanceNeeded_m: number;
+  readonly accelerateStopNeeded_m?: number;
+  readonly landingNeeded_m: number;
+  readonly tora_m: number;
+  readonly toda_m: number;
+  readonly asda_m: number;
+  readonly lda_m: number;
+  readonly takeoffOk: boolean;
+  readonly landingOk: boolean;
+  /** Greatest takeoff mass the declared distances allow at design conditions, kg. */
+  readonly maxTakeoffMass_kg?: number;
+  /** What limits it: 'TORA' | 'TODA' | 'ASDA' | 'climb' | 'MTOW' | 'none'. */
+  readonly limitedBy: string;
+  /** Payload that can fly the design stage at that mass, and the penalty against the design payload. */
+  readonly payloadAtMax_kg?: number;
+  readonly payloadPenalty_kg?: number;
+  readonly passengersPenalty?: number;
+  /** Range with the design payload at that mass, and the penalty against the design stage. */
+  readonly rangeAtMax_km?: number;
+  readonly rangePenalty_km?: number;
+  /** Greatest landing mass the LDA allows, kg. */
+  readonly maxLandingMass_kg?: number;
+  readonly note?: string;
+}
+
+export interface RowResult {
+  readonly aircraft: string;
+  readonly aircraftName: string;
+  readonly group: string;
+  readonly annualOperations: number;
+  /** Operations of the aircraft's group in this scenario (what regular use is judged on). */
+  readonly groupOperations: number;
+  readonly regularUse: boolean;
+  readonly status: 'ok' | 'cannot-operate';
+  /** Why the aircraft cannot operate here (status 'cannot-operate'). */
+  readonly reason?: string;
+  readonly takeoffMass_kg: number;
+  readonly requiredTakeoff_m: number;
+  readonly requiredLanding_m: number;
+  readonly required_m: number;
+  readonly governing: 'takeoff' | 'landing';
+  readonly route: RouteSummary;
+  readonly takeoff?: TakeoffSummary;
+  readonly landing?: LandingSummary;
+  readonly classification: AircraftClassificationSummary;
+  readonly existing: readonly ExistingRunwayCheck[];
+  readonly warnings: readonly string[];
+}
+
+export interface OperationsServedPoint {
+  readonly length_m: number;
+  /** Share of the scenario's annual operations whose requirement fits, 0–1. */
+  readonly share: number;
+}
+
+export interface ScenarioResult {
+  readonly name: string;
+  readonly rows: readonly RowResult[];
+  /** Id of the critical aircraft, or null when no regular-use aircraft can operate. */
+  readonly criticalAircraft: string | null;
+  readonly criticalAircraftName: string | null;
+  /** Requirement of the critical aircraft before rounding, m. */
+  readonly criticalRequired_m: number | null;
+  /** Rounded up to the planning increment, m. */
+  readonly recommendedLength_m: number | null;
+  readonly governing: 'takeoff' | 'landing' | null;
+  readonly runwayDesignCode: string | null;
+  readonly totalOperations: number;
+  readonly operationsServed: readonly OperationsServedPoint[];
+  readonly excluded: readonly { readonly aircraft: string; readonly reason: string }[];
+  readonly warnings: readonly string[];
+}
+
+export interface SensitivityCurve {
+  readonly aircraft: string;
+  readonly aircraftName: string;
+  /** Mass used (the greatest design takeoff mass of the aircraft across scenarios), kg. */
+  readonly mass_kg: number;
+  readonly temperature: readonly { readonly temperature_c: number; readonly required_m: number | null }[];
+  readonly elevation: readonly { readonly elevation_m: number; readonly required_m: number | null }[];
+}
+
+export interface StudyResult {
+  readonly methodVersion: string;
+  readonly name: string;
+  readonly cautions: readonly string[];
+  readonly options: StudyOptions;
+  readonly site: SiteConditions;
+  readonly scenarios: readonly ScenarioResult[];
+  readonly comparison: readonly {
+    readonly scenario: string;
+    readonly criticalAircraft: string | null;
+    readonly criticalAircraftName: string | null;
+    readonly recommendedLength_m: number | null;
+    readonly governing: 'takeoff' | 'landing' | null;
+    readonly runwayDesignCode: string | null;
+    readonly regularUseAircraft: number;
+  }[];
+  readonly sensitivity: readonly SensitivityCurve[];
+  readonly warnings: readonly string[];
+}

@@ -6,7 +6,9 @@ import {
 import { InputDomainError } from '../../core/errors.js';
 import { referenceLandingSpeed } from '../../core/landing.js';
 import { ftToM, ktToMps, mpsToKt } from '../../core/units.js';
-import demoFleet from '../../examples/demo-fleet.json' with { type: 'json' };
+import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
+
+const demoFleet = demoStudy.aircraft;
 
 const fleet = demoFleet as unknown as AircraftProfile[];
 const byId = (id: string): AircraftProfile => fleet.find((a) => a.id === id)!;

@@ -9,7 +9,9 @@ import {
 } from '../../core/landing.js';
 import { requiredLength } from '../../core/requirement.js';
 import { SURFACES } from '../../core/surface.js';
-import demoFleet from '../../examples/demo-fleet.json' with { type: 'json' };
+import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
+
+const demoFleet = demoStudy.aircraft;
 import { expectClose } from '../helpers/close.js';
 
 const fleet = demoFleet as unknown as AircraftProfile[];

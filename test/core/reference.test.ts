@@ -5,7 +5,9 @@ import { InputDomainError } from '../../core/errors.js';
 import {
   interpolateReferenceTable, referenceLengthAtSite, referenceTableAtSite, type ReferenceSite,
 } from '../../core/reference.js';
-import demoFleet from '../../examples/demo-fleet.json' with { type: 'json' };
+import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
+
+const demoFleet = demoStudy.aircraft;
 import { expectClose } from '../helpers/close.js';
 
 const fleet = demoFleet as unknown as AircraftProfile[];

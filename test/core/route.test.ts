@@ -5,7 +5,7 @@
  * Check values: domain-reference.md §9.1 prop example and §11 case 32 (both derived, [D]); the design
  * masses and corner stage lengths were derived by an independent forward evaluation of §9.3 in Python
  * (fixed-point iteration for the contingency, bisection for the corners — no closed-form inverses),
- * quoted below with the inputs; the aircraft are the invented types of examples/demo-fleet.json.
+ * quoted below with the inputs; the aircraft are the invented types of examples/demo-study.json.
  */
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
@@ -20,7 +20,7 @@ import {
 } from '../../core/route/index.js';
 import { expectClose } from '../helpers/close.js';
 
-const FLEET = JSON.parse(readFileSync(new URL('../../examples/demo-fleet.json', import.meta.url), 'utf8')) as AircraftProfile[];
+const FLEET = JSON.parse(readFileSync(new URL('../../examples/demo-study.json', import.meta.url), 'utf8')).aircraft as AircraftProfile[];
 const byId = (id: string): AircraftProfile => {
   const a = FLEET.find((x) => x.id === id);
   if (!a) throw new Error(`demo aircraft ${id} missing`);

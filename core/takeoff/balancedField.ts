@@ -1,0 +1,111 @@
+/**
+ * Engine failure on the takeoff run: continued takeoff, accelerate-stop and the balanced V1.
+ *
+ * For a decision speed V1 (groundspeed inside; domain reference §6.3, 14 CFR 25.107, 25.109):
+ *   VEF: the engine-failure speed from which the engine-out acceleration reaches V1 in the
+ *        recognition time (t_OEI(V1) − t_OEI(VEF) = t_rec);
+ *   go:   s_AEO(VEF) + [s_OEI(VR) − s_OEI(VEF)] + engine-out rotation + engine-out airborne distance;
+ *   stop (25.109(a)(1)): s_AEO(VEF) + [s_OEI(V1) − s_OEI(VEF)] + braking from V1 with idle thrust on the
+ *        operating engines (failed engine zero) + 2 s × V1;
+ *   stop (25.109(a)(2)): s_AEO(V1) + braking from V1 with all engines idle + 2 s × V1;
+ *   accelerate-stop = the greater of the two stops.
+ * Each s(·) is the cumulative distance of a ground run as a function of speed (quadrature.ts), shared
+ * by every candidate V1. go(V1) falls and stop(V1) rises, so the balanced V1 (go = stop) is the root of
+ * a smooth monotone function, found by Brent's method. V1 is bounded below by the speed reached when
+ * the engine fails at VMCG (VEF ≥ VMCG, 25.107(a)) and above by VR (25.107(e)); when a bound binds,
+ * the field length is the greater of go and stop there (unbalanced).
+ *
+ * Validity: engine-out acceleration above MIN_ACCELERATION_MPS2 from VEF to VLOF; stop tables to VR.
+ */
+import { brentRoot } from './roots.js';
+import { distanceAt, speedAtTime, timeAt, type SpeedTable } from './quadrature.js';
+import { STOP_ALLOWANCE_S } from './regulations.js';
+import type { V1Basis } from './types.js';
+
+/** Tolerance (m/s) and iteration cap of the balanced-V1 solve. */
+export const V1_TOL_MPS = 1e-7;
+export const V1_MAX_ITERATIONS = 100;
+
+export interface FailureModel {
+  readonly aeo: SpeedTable;
+  readonly oei: SpeedTable;
+  readonly stopOei: SpeedTable;
+  readonly stopAeo: SpeedTable;
+  readonly recognition_s: number;
+  /** Groundspeed at VR, m/s. */
+  readonly vrG: number;
+  /** Lowest engine-failure groundspeed (VMCG), m/s. */
+  readonly vefMinG: number;
+  /** Engine-out rotation plus airborne distance (independent of V1), m. */
+  readonly goTail_m: number;
+}
+
+export interface FailurePoint {
+  readonly vefG: number;
+  readonly v1G: number;
+  readonly go_m: number;
+  /** Engine-out ground run from brake release to VR, m. */
+  readonly goGround_m: number;
+  readonly stopEngineOut_m: number;
+  readonly stopAllEngines_m: number;
+  readonly stop_m: number;
+}
+
+/** Engine-failure groundspeed matching a V1 groundspeed. */
+export function vefForV1(m: FailureModel, v1G: number): number {
+  const t = timeAt(m.oei, v1G) - m.recognition_s;
+  if (t <= 0) return 0;
+  return speedAtTime(m.oei, t) ?? v1G;
+}
+
+/** Go and stop distances for a V1 groundspeed (0 < V1 ≤ VR). */
+export function failurePoint(m: FailureModel, v1G: number): FailurePoint {
+  const vef = vefForV1(m, v1G);
+  const sEf = distanceAt(m.aeo, vef);
+  const sOefBase = distanceAt(m.oei, vef);
+  const goGround = sEf + distanceAt(m.oei, m.vrG) - sOefBase;
+  const go = goGround + m.goTail_m;
+  const allowance = STOP_ALLOWANCE_S * v1G;
+  const stopOei = sEf + distanceAt(m.oei, v1G) - sOefBase + distanceAt(m.stopOei, v1G) + allowance;
+  const stopAeo = distanceAt(m.aeo, v1G) + distanceAt(m.stopAeo, v1G) + allowance;
+  return {
+    vefG: vef, v1G, go_m: go, goGround_m: goGround,
+    stopEngineOut_m: stopOei, stopAllEngines_m: stopAeo, stop_m: Math.max(stopOei, stopAeo),
+  };
+}
+
+export type V1Window =
+  | { readonly ok: true; readonly lo: number; readonly hi: number }
+  | { readonly ok: false; readonly v1Min: number | undefined };
+
+/** Allowed V1 groundspeeds: [V1 reached after failure at VMCG, VR]. */
+export function v1Window(m: FailureModel): V1Window {
+  const t = timeAt(m.oei, m.vefMinG) + m.recognition_s;
+  const v1Min = speedAtTime(m.oei, t);
+  if (v1Min === undefined || v1Min > m.vrG) return { ok: false, v1Min };
+  return { ok: true, lo: v1Min, hi: m.vrG };
+}
+
+export interface Balanced {
+  readonly point: FailurePoint;
+  readonly basis: V1Basis;
+  /** max(go, stop) at the chosen V1, m. */
+  readonly field_m: number;
+  readonly iterations: number;
+}
+
+/** Balanced V1 inside [lo, hi], or the limiting bound. */
+export function balance(m: FailureModel, lo: number, hi: number): Balanced {
+  const pLo = failurePoint(m, lo);
+  const fLo = pLo.go_m - pLo.stop_m;
+  if (fLo <= 0) return { point: pLo, basis: 'vmcg', field_m: Math.max(pLo.go_m, pLo.stop_m), iterations: 0 };
+  const pHi = failurePoint(m, hi);
+  const fHi = pHi.go_m - pHi.stop_m;
+  if (fHi >= 0) return { point: pHi, basis: 'vr', field_m: Math.max(pHi.go_m, pHi.stop_m), iterations: 0 };
+  const r = brentRoot({
+    name: 'balanced V1', f: (v) => { const p = failurePoint(m, v); return p.go_m - p.stop_m; },
+    lo, hi, fLo, fHi, xTol: V1_TOL_MPS, maxIterations: V1_MAX_ITERATIONS,
+  });
+  const p = failurePoint(m, r.x);
+  return { point: p, basis: 'balanced', field_m: Math.max(p.go_m, p.stop_m), iterations: r.iterations };
+}

@@ -149,7 +149,7 @@ export interface AircraftProfile {
 
 export type QuantityKind =
   | 'length' | 'shortLength' | 'mass' | 'area' | 'force' | 'power' | 'speed' | 'temperature'
-  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude';
+  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude' | 'distance';
 
 export type FieldGroup =
   | 'identity' | 'weights' | 'geometry' | 'aerodynamics' | 'propulsion' | 'ground' | 'speeds'

@@ -17,3 +17,5 @@ export * from './takeoff/index.js';
 export * from './caution.js';
 export * from './study/types.js';
 export * from './report/chart.js';
+export * from './study/run.js';
+export * from './report/charts.js';

@@ -185,6 +185,7 @@ export const studies = sqliteTable(
     reserveContingencyFraction: real('reserve_contingency_fraction'),
     passengerMass_kg: real('passenger_mass_kg').notNull(),
     landingTemperature: text('landing_temperature', { enum: ['isa', 'design'] }).notNull(),
+    landingMass: text('landing_mass', { enum: ['mlw', 'route'] }).notNull().default('mlw'),
   },
   (t) => [index('studies_site').on(t.siteId)],
 );

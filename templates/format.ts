@@ -3,7 +3,13 @@
  * the unit system is the study's or the user's choice. Nothing non-finite is ever printed: a missing
  * or non-finite value shows as an em dash.
  */
-import { FT, HP, KT, LB, LBF, cToF, type QuantityKind, type UnitSystem } from '../core/index.js';
+import { FT, HP, KT, LB, LBF, NM, cToF, type QuantityKind, type UnitSystem } from '../core/index.js';
+
+/**
+ * Display kinds: core's quantity kinds plus route distance (km / NM) and slopes shown in percent.
+ * Route distances are SI metres on the way in (a `_km` value is multiplied by 1000 first).
+ */
+export type DisplayKind = QuantityKind | 'distance' | 'slopePct';
 
 export interface UnitDef {
   readonly symbol: string;
@@ -22,7 +28,7 @@ const lin = (symbol: string, factor: number, digits: number): UnitDef => ({
   digits,
 });
 
-const UNITS: Record<UnitSystem, Record<QuantityKind, UnitDef>> = {
+const UNITS: Record<UnitSystem, Record<DisplayKind, UnitDef>> = {
   si: {
     length: lin('m', 1, 0),
     shortLength: lin('m', 1, 2),
@@ -38,6 +44,8 @@ const UNITS: Record<UnitSystem, Record<QuantityKind, UnitDef>> = {
     count: lin('', 1, 0),
     tsfc: lin('1/h', 1, 3),
     bsfc: lin('kg/kWh', 1, 3),
+    distance: lin('km', 1000, 0),
+    slopePct: lin('%', 0.01, 2),
   },
   us: {
     length: lin('ft', FT, 0),
@@ -54,15 +62,17 @@ const UNITS: Record<UnitSystem, Record<QuantityKind, UnitDef>> = {
     count: lin('', 1, 0),
     tsfc: lin('1/h', 1, 3),
     bsfc: lin('lb/(hp·h)', LB / (HP / 1000), 3),
+    distance: lin('NM', NM, 0),
+    slopePct: lin('%', 0.01, 2),
   },
 };
 
-export function unitOf(kind: QuantityKind, system: UnitSystem): UnitDef {
+export function unitOf(kind: DisplayKind, system: UnitSystem): UnitDef {
   return UNITS[system][kind];
 }
 
 /** Display number (no unit) with the kind's rounding; "—" for missing or non-finite values. */
-export function fmtNumber(si: number | undefined | null, kind: QuantityKind, system: UnitSystem, digits?: number): string {
+export function fmtNumber(si: number | undefined | null, kind: DisplayKind, system: UnitSystem, digits?: number): string {
   if (si === undefined || si === null || !Number.isFinite(si)) return '—';
   const u = unitOf(kind, system);
   const d = digits ?? u.digits;
@@ -71,7 +81,7 @@ export function fmtNumber(si: number | undefined | null, kind: QuantityKind, sys
 }
 
 /** Display number with its unit symbol. */
-export function fmt(si: number | undefined | null, kind: QuantityKind, system: UnitSystem, digits?: number): string {
+export function fmt(si: number | undefined | null, kind: DisplayKind, system: UnitSystem, digits?: number): string {
   const n = fmtNumber(si, kind, system, digits);
   const sym = unitOf(kind, system).symbol;
   return n === '—' || !sym ? n : `${n} ${sym}`;
@@ -89,3 +99,45 @@ export function fmtPct(ratio: number | undefined | null, digits = 1): string {
   if (ratio === undefined || ratio === null || !Number.isFinite(ratio)) return '—';
   return `${(ratio * 100).toFixed(digits)} %`;
 }
+
+/**
+ * Value for a prefilled form input in the display unit: not rounded to the display digits (nine
+ * significant digits), so that saving a form unchanged gives back the stored SI value to within
+ * 1e-9 relative. Blank for a missing value.
+ */
+export function fmtInput(si: number | undefined | null, kind: DisplayKind, system: UnitSystem): string {
+  if (si === undefined || si === null || !Number.isFinite(si)) return '';
+  const v = unitOf(kind, system).from(si);
+  return String(Number(v.toPrecision(9)));
+}
+
+/** A limit of a range in the display unit, rounded to one digit more than the kind shows. */
+export function fmtLimit(si: number, kind: DisplayKind, system: UnitSystem): string {
+  const u = unitOf(kind, system);
+  const v = u.from(si);
+  const d = Math.min(6, u.digits + 1);
+  return String(Number(v.toFixed(d)));
+}
+
+/** Unit symbol of a kind in a system ('' for ratios and counts). */
+export function unitSymbol(kind: DisplayKind, system: UnitSystem): string {
+  return unitOf(kind, system).symbol;
+}
+
+/** A label with its unit in parentheses, e.g. "Elevation (ft)"; the label alone when unitless. */
+export function withUnit(label: string, kind: DisplayKind, system: UnitSystem): string {
+  const s = unitSymbol(kind, system);
+  return s ? `${label} (${s})` : label;
+}
+
+/** Signed ratio as a percentage with two decimals, e.g. "+0.29 %". */
+export function fmtSlope(ratio: number | undefined | null): string {
+  if (ratio === undefined || ratio === null || !Number.isFinite(ratio)) return '—';
+  const v = ratio * 100;
+  return `${v > 0 ? '+' : v < 0 ? '−' : ''}${Math.abs(v).toFixed(2)} %`;
+}
+
+export const UNIT_SYSTEM_LABELS: Readonly<Record<UnitSystem, string>> = {
+  si: 'SI (m, kg, °C)',
+  us: 'US customary (ft, lb, °F)',
+};

@@ -12,8 +12,11 @@ export interface ChartPoint {
 export interface ChartSeries {
   readonly name: string;
   readonly points: readonly ChartPoint[];
-  /** 'line' joins points; 'step' draws a step function (after); 'points' draws markers only. */
-  readonly style: 'line' | 'step' | 'points';
+  /**
+   * 'line' joins points; 'step' draws a step function (after); 'points' draws markers only; 'bar' draws
+   * a bar per point at category index x (see ChartModel.categories), grouped by series.
+   */
+  readonly style: 'line' | 'step' | 'points' | 'bar';
   /** Drawn heavier (e.g. the critical aircraft). */
   readonly emphasis?: boolean;
 }
@@ -39,4 +42,6 @@ export interface ChartModel {
   readonly yDomain?: readonly [number, number];
   /** Draw the y axis from zero. */
   readonly yFromZero?: boolean;
+  /** Category names for bar charts: point x = index into this list. */
+  readonly categories?: readonly string[];
 }

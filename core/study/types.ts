@@ -98,6 +98,8 @@ export interface StudyOptions {
   readonly passengerMass_kg: number;
   /** Landing temperature: ISA at the field (certified data basis, default) or the design temperature. */
   readonly landingTemperature: 'isa' | 'design';
+  /** Landing mass: maximum landing mass (default, conservative) or the arrival mass of the design route. */
+  readonly landingMass: 'mlw' | 'route';
 }
 
 export interface StudyInput {
@@ -236,11 +238,14 @@ export interface RouteSummary {
 export interface ExistingRunwayCheck {
   readonly runway: string;
   readonly designator: string;
-  /** Needs at the design takeoff mass against the declared distances, m. */
-  readonly takeoffRunNeeded_m: number;
-  readonly takeoffDistanceNeeded_m: number;
+  /**
+   * Needs at the design takeoff mass against the declared distances, m (core/runwayCheck.ts);
+   * absent when the takeoff (or the landing) is not possible at all at that mass.
+   */
+  readonly takeoffRunNeeded_m?: number;
+  readonly takeoffDistanceNeeded_m?: number;
   readonly accelerateStopNeeded_m?: number;
-  readonly landingNeeded_m: number;
+  readonly landingNeeded_m?: number;
   readonly tora_m: number;
   readonly toda_m: number;
   readonly asda_m: number;
@@ -249,7 +254,7 @@ export interface ExistingRunwayCheck {
   readonly landingOk: boolean;
   /** Greatest takeoff mass the declared distances allow at design conditions, kg. */
   readonly maxTakeoffMass_kg?: number;
-  /** What limits it: 'TORA' | 'TODA' | 'ASDA' | 'climb' | 'MTOW' | 'none'. */
+  /** What limits it: 'TORA' | 'TODA' | 'ASDA' | 'climb' | 'MTOW' | 'none-feasible' (TakeoffMassLimit in core/runwayCheck.ts). */
   readonly limitedBy: string;
   /** Payload that can fly the design stage at that mass, and the penalty against the design payload. */
   readonly payloadAtMax_kg?: number;

@@ -76,6 +76,7 @@ function optionsToColumns(o: StudyOptions) {
     reserveContingencyFraction: o.reserves.contingencyFraction ?? null,
     passengerMass_kg: o.passengerMass_kg,
     landingTemperature: o.landingTemperature,
+    landingMass: o.landingMass,
   };
 }
 
@@ -94,6 +95,7 @@ function columnsToOptions(r: StudyRow): StudyOptions {
     },
     passengerMass_kg: r.passengerMass_kg,
     landingTemperature: r.landingTemperature,
+    landingMass: r.landingMass,
   };
 }
 

@@ -79,6 +79,12 @@ export const aircraftSchema = z.strictObject(baseShape).superRefine((a, ctx) => 
     }
   }
   if (missing) return;
+  // Range problems are already reported field by field; the cross-field rules only make sense after them.
+  const outOfRange = AIRCRAFT_FIELDS.some((f) => {
+    const v = rec[f.key];
+    return v !== undefined && (typeof v !== 'number' || !(v >= f.min && v <= f.max));
+  });
+  if (outOfRange) return;
   try {
     validateAircraft(a as unknown as AircraftProfile, '');
   } catch (e) {

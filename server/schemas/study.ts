@@ -74,13 +74,15 @@ export const reservesSchema = z.strictObject({
 
 export const optionsSchema = z.strictObject({
   regularUseThreshold: int(1, 100000, 'operations/year').default(500),
-  roundingIncrement_m: num(1, 500, 'm').default(50),
+  /** Default 50 m, or 100 ft (30.48 m) when the study is in US units (resolved in studyInputOf). */
+  roundingIncrement_m: num(1, 500, 'm').optional(),
   surface: oneOf(SURFACES as unknown as readonly [string, ...string[]]).default('dry'),
   method: oneOf(['physics', 'reference-icao', 'reference-authority', 'calibrated']).default('physics'),
   units: oneOf(['si', 'us']).default('si'),
   reserves: reservesSchema.default({ policy: 'cruise-45min' }),
   passengerMass_kg: num(50, 200, 'kg').default(95),
   landingTemperature: oneOf(['isa', 'design']).default('isa'),
+  landingMass: oneOf(['mlw', 'route']).default('mlw'),
 });
 
 export const studyFileSchema = z.strictObject({
@@ -92,24 +94,46 @@ export const studyFileSchema = z.strictObject({
   scenarios: z.array(scenarioSchema).min(1, { error: 'at least one scenario' }).max(50),
   options: optionsSchema.default(optionsSchema.parse({})),
 }).superRefine((s, ctx) => {
-  const ids = new Map<string, number>();
-  s.aircraft.forEach((a, i) => {
-    if (ids.has(a.id)) ctx.addIssue({ code: 'custom', path: ['aircraft', i, 'id'], input: a.id, message: `duplicate aircraft id "${a.id}" (also aircraft[${ids.get(a.id)}])` });
-    else ids.set(a.id, i);
-  });
-  s.scenarios.forEach((sc, i) =>
-    sc.fleet.forEach((row, j) => {
-      if (!ids.has(row.aircraft)) {
-        ctx.addIssue({ code: 'custom', path: ['scenarios', i, 'fleet', j, 'aircraft'], input: row.aircraft, message: `unknown aircraft "${row.aircraft}"; one of ${[...ids.keys()].join(', ')}` });
-      }
-    }),
-  );
+  for (const p of studyCrossProblems(s)) ctx.addIssue({ code: 'custom', path: p.path, input: p.value, message: p.message });
 });
+
+/**
+ * Cross-reference problems (duplicate aircraft ids, fleet rows naming unknown aircraft), read
+ * defensively from a raw document so they are listed even when other fields fail validation.
+ */
+export function studyCrossProblems(raw: unknown): { path: (string | number)[]; value: unknown; message: string }[] {
+  const out: { path: (string | number)[]; value: unknown; message: string }[] = [];
+  const doc = raw as { aircraft?: unknown; scenarios?: unknown } | null;
+  if (!doc || typeof doc !== 'object') return out;
+  const ids = new Map<string, number>();
+  if (Array.isArray(doc.aircraft)) {
+    doc.aircraft.forEach((a: unknown, i) => {
+      const id = (a as { id?: unknown } | null)?.id;
+      if (typeof id !== 'string') return;
+      if (ids.has(id)) out.push({ path: ['aircraft', i, 'id'], value: id, message: `duplicate aircraft id "${id}" (also aircraft[${ids.get(id)}])` });
+      else ids.set(id, i);
+    });
+  }
+  if (Array.isArray(doc.scenarios)) {
+    doc.scenarios.forEach((sc: unknown, i) => {
+      const fleet = (sc as { fleet?: unknown } | null)?.fleet;
+      if (!Array.isArray(fleet)) return;
+      fleet.forEach((row: unknown, j) => {
+        const ref = (row as { aircraft?: unknown } | null)?.aircraft;
+        if (typeof ref === 'string' && !ids.has(ref)) {
+          out.push({ path: ['scenarios', i, 'fleet', j, 'aircraft'], value: ref, message: `unknown aircraft "${ref}"; one of ${[...ids.keys()].join(', ')}` });
+        }
+      });
+    });
+  }
+  return out;
+}
 
 export type StudyFile = z.output<typeof studyFileSchema>;
 
 /** The core input of a validated study file (the file-level `format` and `version` dropped). */
 export function studyInputOf(file: StudyFile): StudyInput {
   const { format: _f, version: _v, ...input } = file;
-  return input as unknown as StudyInput;
+  const increment = input.options.roundingIncrement_m ?? (input.options.units === 'us' ? 30.48 : 50);
+  return { ...input, options: { ...input.options, roundingIncrement_m: increment } } as unknown as StudyInput;
 }

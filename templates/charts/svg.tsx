@@ -20,21 +20,24 @@ export function ChartSvg(props: { model: ChartModel; units: UnitSystem }) {
         {c.xTicks.map((t) => (
           <g>
             <line x1={t.pos} x2={t.pos} y1={plot.y0} y2={plot.y0 + 4} stroke="#8a96a3" />
-            <text x={t.pos} y={plot.y0 + 16} text-anchor="middle" class="tick">{t.label}</text>
+            {c.categorical
+              ? <text x={t.pos} y={plot.y0 + 14} text-anchor="end" class="tick" transform={`rotate(-30 ${t.pos} ${plot.y0 + 14})`}>{t.label}</text>
+              : <text x={t.pos} y={plot.y0 + 16} text-anchor="middle" class="tick">{t.label}</text>}
           </g>
         ))}
-        <text x={(plot.x0 + plot.x1) / 2} y={plot.y0 + 32} text-anchor="middle" class="axis-label">{c.xLabel}</text>
+        {c.categorical ? null : <text x={(plot.x0 + plot.x1) / 2} y={plot.y0 + 32} text-anchor="middle" class="axis-label">{c.xLabel}</text>}
         <text x={14} y={(plot.y0 + plot.y1) / 2} text-anchor="middle" class="axis-label" transform={`rotate(-90 14 ${(plot.y0 + plot.y1) / 2})`}>{c.yLabel}</text>
         {c.rules.map((r) => (
           <g>
             <line x1={r.x1} y1={r.y1} x2={r.x2} y2={r.y2} stroke="#444" stroke-dasharray="4 3" />
-            <text x={r.lx} y={r.ly} class="rule-label">{r.label}</text>
+            <text x={r.lx} y={r.ly} text-anchor={r.anchor} class="rule-label">{r.label}</text>
           </g>
         ))}
         {c.series.map((s) => (
           <g>
             {s.path ? <path d={s.path} fill="none" stroke={s.colour} stroke-width={s.emphasis ? 3 : 1.6} stroke-dasharray={s.dash || undefined} /> : null}
             {s.markers.map((m) => <circle cx={m.x} cy={m.y} r={s.emphasis ? 3.5 : 2.5} fill={s.colour} />)}
+            {s.bars.map((b) => <rect x={b.x} y={b.y} width={b.width} height={b.height} fill={s.colour} />)}
           </g>
         ))}
       </svg>

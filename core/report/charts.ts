@@ -1,0 +1,160 @@
+/**
+ * Chart models of a study result (SI values; the renderers convert for display):
+ * - required length against temperature, per aircraft (the sensitivity sweep), with the design
+ *   temperature and the longest existing takeoff run marked;
+ * - takeoff and landing requirements of each aircraft of a scenario against the existing runway;
+ * - operations served against runway length, one step curve per scenario;
+ * - payload-range of each critical aircraft, with the curve the existing runway allows.
+ * The web page (SVG) and the PDF draw exactly these models.
+ */
+import type { AircraftProfile } from '../aircraft.js';
+import { payloadForRange, payloadRangeDiagram, type ReservePolicy } from '../route/index.js';
+import type { StudyInput, StudyResult, ScenarioResult } from '../study/types.js';
+import type { ChartModel, ChartPoint, ChartSeries } from './chart.js';
+
+/** Number of samples of the runway-limited payload-range curve. */
+export const RUNWAY_LIMITED_SAMPLES = 40;
+
+function longestTakeoffRun(result: StudyResult): { length_m: number; label: string } | undefined {
+  let best: { length_m: number; label: string } | undefined;
+  for (const r of result.site.runways) {
+    for (const d of r.directions) {
+      if (!best || d.tora_m > best.length_m) best = { length_m: d.tora_m, label: `Existing TORA, runway ${d.designator}` };
+    }
+  }
+  return best;
+}
+
+export function temperatureChart(result: StudyResult): ChartModel {
+  const critical = new Set(result.scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null));
+  const series: ChartSeries[] = result.sensitivity.map((c) => ({
+    name: c.aircraftName,
+    style: 'line',
+    emphasis: critical.has(c.aircraft),
+    points: c.temperature.filter((p) => p.required_m !== null).map((p) => ({ x: p.temperature_c, y: p.required_m! })),
+  }));
+  const tora = longestTakeoffRun(result);
+  return {
+    id: 'temperature',
+    title: `Required length against temperature at ${result.site.name}`,
+    xLabel: 'Air temperature',
+    yLabel: 'Required runway length',
+    xKind: 'temperature',
+    yKind: 'length',
+    series,
+    rules: [
+      { axis: 'x', value: result.site.designTemperature_c, label: 'Design temperature' },
+      ...(tora ? [{ axis: 'y' as const, value: tora.length_m, label: tora.label }] : []),
+    ],
+    yFromZero: true,
+  };
+}
+
+export function existingRunwayChart(result: StudyResult, scenario: ScenarioResult, index: number): ChartModel {
+  const rows = scenario.rows.filter((r) => r.status === 'ok');
+  const takeoff: ChartPoint[] = rows.map((r, i) => ({ x: i, y: r.requiredTakeoff_m }));
+  const landing: ChartPoint[] = rows.map((r, i) => ({ x: i, y: r.requiredLanding_m }));
+  const design = result.site.runways[0]!;
+  const d0 = design.directions[0]!;
+  return {
+    id: `existing-${index}`,
+    title: `${scenario.name}: requirements against runway ${design.name}`,
+    xLabel: 'Aircraft',
+    yLabel: 'Length',
+    xKind: 'count',
+    yKind: 'length',
+    categories: rows.map((r) => (r.regularUse ? r.aircraftName : `${r.aircraftName} (not regular)`)),
+    series: [
+      { name: 'Takeoff requirement', style: 'bar', points: takeoff },
+      { name: 'Landing requirement', style: 'bar', points: landing },
+    ],
+    rules: [
+      { axis: 'y', value: d0.tora_m, label: `TORA ${d0.designator}` },
+      { axis: 'y', value: d0.lda_m, label: `LDA ${d0.designator}` },
+    ],
+    yFromZero: true,
+  };
+}
+
+export function operationsServedChart(result: StudyResult): ChartModel {
+  const tora = longestTakeoffRun(result);
+  return {
+    id: 'operations-served',
+    title: 'Share of annual operations served against runway length',
+    xLabel: 'Runway length',
+    yLabel: 'Operations served',
+    xKind: 'length',
+    yKind: 'percent',
+    series: result.scenarios.map((s) => ({
+      name: s.name,
+      style: 'step',
+      points: s.operationsServed.map((p) => ({ x: p.length_m, y: p.share })),
+    })),
+    rules: tora ? [{ axis: 'x', value: tora.length_m, label: tora.label }] : [],
+    yDomain: [0, 1],
+  };
+}
+
+function reservesOf(input: StudyInput): ReservePolicy {
+  const r = input.options.reserves;
+  const alt = r.alternate_km === undefined ? {} : { alternateDistance_m: r.alternate_km * 1000 };
+  if (r.policy === 'cruise-45min') return { kind: 'cruise-45min', ...alt };
+  if (r.policy === 'international') return { kind: 'international', ...alt, ...(r.holding_min === undefined ? {} : { holdMinutes: r.holding_min }) };
+  return { kind: 'custom', alternateDistance_m: (r.alternate_km ?? 0) * 1000, holdMinutes: r.holding_min ?? 45, ...(r.contingencyFraction === undefined ? {} : { contingencyFraction: r.contingencyFraction }) };
+}
+
+export function payloadRangeChart(result: StudyResult, input: StudyInput, aircraft: AircraftProfile): ChartModel | undefined {
+  if (!aircraft.cruise) return undefined;
+  const reserves = reservesOf(input);
+  const diagram = payloadRangeDiagram({ aircraft, reserves });
+  if (diagram.status !== 'ok') return undefined;
+  const series: ChartSeries[] = [
+    { name: `${aircraft.name}: payload-range (MTOW)`, style: 'line', points: diagram.points.map((p) => ({ x: p.stageLength_m, y: p.payload_kg })) },
+  ];
+  // The greatest takeoff mass any existing runway direction allows at design conditions.
+  let limit: number | undefined;
+  let stage: number | undefined;
+  for (const s of result.scenarios) {
+    for (const r of s.rows) {
+      if (r.aircraft !== aircraft.id) continue;
+      stage = Math.max(stage ?? 0, r.route.stageLength_km * 1000);
+      for (const e of r.existing) if (e.maxTakeoffMass_kg !== undefined) limit = Math.max(limit ?? 0, e.maxTakeoffMass_kg);
+    }
+  }
+  if (limit !== undefined && limit < aircraft.mtow_kg - 1) {
+    const pts: ChartPoint[] = [];
+    const far = diagram.ferryRange_m;
+    for (let k = 0; k <= RUNWAY_LIMITED_SAMPLES; k++) {
+      const x = Math.max(1000, (far * k) / RUNWAY_LIMITED_SAMPLES);
+      const p = payloadForRange({ aircraft, takeoffMass_kg: limit, stageLength_m: x, reserves });
+      if (p.status !== 'ok') break;
+      pts.push({ x, y: p.payload_kg });
+    }
+    series.push({ name: `Existing runway: takeoff mass limited to ${Math.floor(limit)} kg`, style: 'line', emphasis: true, points: pts });
+  }
+  return {
+    id: `payload-range-${aircraft.id}`,
+    title: `${aircraft.name}: payload against range`,
+    xLabel: 'Stage length',
+    yLabel: 'Payload',
+    xKind: 'distance',
+    yKind: 'mass',
+    series,
+    rules: stage === undefined ? [] : [{ axis: 'x', value: stage, label: 'Design stage' }],
+    yFromZero: true,
+  };
+}
+
+/** Every chart of a study, in report order. */
+export function studyCharts(result: StudyResult, input: StudyInput): ChartModel[] {
+  const charts: ChartModel[] = [temperatureChart(result)];
+  result.scenarios.forEach((s, i) => charts.push(existingRunwayChart(result, s, i)));
+  charts.push(operationsServedChart(result));
+  const critical = [...new Set(result.scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null))];
+  for (const id of critical) {
+    const a = input.aircraft.find((x) => x.id === id);
+    const c = a ? payloadRangeChart(result, input, a) : undefined;
+    if (c) charts.push(c);
+  }
+  return charts;
+}

@@ -1,0 +1,739 @@
+/**
+ * Study appendix model: what the appendix of a master plan or facility-requirements report says, built
+ * from a study's input and result. Pure: values stay SI with a quantity kind; renderers (the PDF in
+ * server/pdf/, the web page) format them through templates/format.ts, so both round identically.
+ *
+ * Content: title block; purpose and cautions; site and design conditions (with the derivation of the
+ * design temperature); fleet scenarios; method (core/report/methods.ts, with a references list);
+ * results per scenario with their components; scenario comparison and recommendation; existing-runway
+ * assessment; charts (ChartModel, drawn by the renderer); assumptions and warnings; a listing of every
+ * input value and the SHA-256 digest of the canonical input, so that the appendix can be regenerated.
+ *
+ * Nothing is computed here beyond selecting, ordering and labelling values of the result: views never
+ * recompute (house style). The digest, the date and the program version come in as inputs (core has no
+ * I/O and no clock).
+ */
+import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type QuantityKind } from '../aircraft.js';
+import { CAUTION_TEXT, CAUTION_TITLE } from '../caution.js';
+import { SURFACE_LABELS } from '../surface.js';
+import type {
+  RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
+} from '../study/types.js';
+import type { ChartModel } from './chart.js';
+import { METHOD_ENTRIES, STUDY_METHOD_LABEL, referencesFor } from './methods.js';
+
+// ---------------------------------------------------------------------------------------------
+// Model types
+// ---------------------------------------------------------------------------------------------
+
+/**
+ * How a renderer formats a value: a quantity kind (SI value; 'distance' is a route distance in metres,
+ * shown in km or NM), a slope ratio shown in percent ('slopePct'), a share shown as a percentage
+ * ('percent'), or a runway length in both unit systems ('lengthBoth').
+ */
+export type ValueKind = QuantityKind | 'slopePct' | 'percent' | 'lengthBoth';
+
+/**
+ * One value: text, or an SI number with its kind. `listing` asks for every significant digit (input
+ * listing) instead of the kind's display rounding. `unit` (with kind absent) is an SI unit the
+ * formatter has no kind for; the renderer prints the SI value with that unit.
+ */
+export type Cell =
+  | { readonly text: string; readonly bold?: boolean }
+  | { readonly si: number | null | undefined; readonly kind: ValueKind; readonly listing?: boolean; readonly digits?: number }
+  | { readonly si: number; readonly unit: string }
+  /** Needed / available pair of the same kind, shown "a / b". */
+  | { readonly pair: readonly [number | null | undefined, number | null | undefined]; readonly kind: QuantityKind; readonly bold?: boolean };
+
+export interface Column {
+  readonly title: string;
+  /** When set, the header shows the unit symbol and cells show bare numbers. */
+  readonly kind?: ValueKind;
+  readonly align?: 'left' | 'right';
+  /** Relative width (default 1). */
+  readonly width?: number;
+}
+
+/** A table row; `group` rows span every column and introduce the rows below them. */
+export type Row =
+  | { readonly cells: readonly Cell[] }
+  | { readonly group: string };
+
+export interface Fact {
+  readonly label: string;
+  readonly value: Cell;
+}
+
+export type Block =
+  | { readonly type: 'paragraph'; readonly text: string; readonly style?: 'normal' | 'note' | 'caution' | 'strong' }
+  | { readonly type: 'subheading'; readonly text: string }
+  | { readonly type: 'facts'; readonly items: readonly Fact[] }
+  | { readonly type: 'table'; readonly caption: string; readonly columns: readonly Column[]; readonly rows: readonly Row[]; readonly note?: string }
+  | { readonly type: 'formulas'; readonly lines: readonly string[] }
+  | { readonly type: 'list'; readonly items: readonly string[]; readonly ordered?: boolean }
+  | { readonly type: 'chart'; readonly chart: ChartModel; readonly caption?: string };
+
+export interface ReportSection {
+  /** Stable id (anchor). */
+  readonly id: string;
+  /** "3" or "5.2". */
+  readonly number: string;
+  readonly title: string;
+  readonly level: 1 | 2;
+  /** Start this section on a new page. */
+  readonly newPage?: boolean;
+  readonly blocks: readonly Block[];
+}
+
+export interface AppendixTitle {
+  readonly heading: string;
+  readonly study: string;
+  readonly site: string;
+  /** Issue date, YYYY-MM-DD (from the injected clock). */
+  readonly date: string;
+  readonly version: string;
+  readonly methodVersion: string;
+  readonly units: 'si' | 'us';
+  readonly inputDigest: string;
+}
+
+/** One scenario's finding, as the appendix states it (tests and pages read the same values). */
+export interface AppendixRecommendation {
+  readonly scenario: string;
+  readonly criticalAircraft: string | null;
+  readonly criticalAircraftName: string | null;
+  readonly recommendedLength_m: number | null;
+  readonly required_m: number | null;
+  readonly governing: 'takeoff' | 'landing' | null;
+}
+
+export interface AppendixModel {
+  readonly title: AppendixTitle;
+  readonly caution: { readonly title: string; readonly text: string };
+  readonly units: 'si' | 'us';
+  readonly recommendations: readonly AppendixRecommendation[];
+  readonly sections: readonly ReportSection[];
+}
+
+export interface AppendixModelInput {
+  readonly input: StudyInput;
+  readonly result: StudyResult;
+  /** Chart models drawn from the result (core/report/charts.ts), in the order they appear. */
+  readonly charts: readonly ChartModel[];
+  /** SHA-256 (hex) of the canonical JSON of the input. */
+  readonly inputDigest: string;
+  /** Issue date, YYYY-MM-DD. */
+  readonly date: string;
+  /** Runwright version. */
+  readonly version: string;
+  /** The command that regenerates the appendix from the study file (shown in the listing). */
+  readonly regenerateCommand?: string;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Cell helpers
+// ---------------------------------------------------------------------------------------------
+
+const t = (text: string, bold = false): Cell => (bold ? { text, bold } : { text });
+const q = (si: number | null | undefined, kind: ValueKind, digits?: number): Cell =>
+  digits === undefined ? { si, kind } : { si, kind, digits };
+const exact = (si: number | null | undefined, kind: QuantityKind): Cell => ({ si, kind, listing: true });
+const row = (...cells: Cell[]): Row => ({ cells });
+
+const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+export const monthName = (m: number): string => MONTHS[m - 1] ?? `month ${m}`;
+const yesNo = (b: boolean): string => (b ? 'yes' : 'no');
+
+/** Kind of a trace item from its SI unit; undefined when the formatter has no kind for it. */
+export function kindOfUnit(unit: string): QuantityKind | 'percent' | undefined {
+  switch (unit) {
+    case 'm': return 'length';
+    case 'kg': return 'mass';
+    case 'm/s': return 'speed';
+    case 's': return 'time';
+    case 'N': return 'force';
+    case 'W': return 'power';
+    case '°C': case 'degC': return 'temperature';
+    case '': case 'ratio': case '-': return 'ratio';
+    case '%': return 'percent';
+    case 'm²': case 'm2': return 'area';
+    default: return undefined;
+  }
+}
+
+function traceCell(item: TraceItem): Cell {
+  const k = kindOfUnit(item.unit);
+  if (k === 'percent') return { si: item.value / 100, kind: 'slopePct' };
+  return k ? q(item.value, k) : { si: item.value, unit: item.unit };
+}
+
+const GOVERNING_LABEL: Readonly<Record<string, string>> = {
+  'all-engines-factored': '1.15 x all engines',
+  'all-engines': 'all engines',
+  'balanced-field': 'balanced field',
+  'engine-out': 'engine out',
+  'accelerate-stop': 'accelerate-stop',
+};
+
+/** Plain label of a takeoff governing case name from the result (names already in words pass through). */
+export const governingLabel = (name: string): string => GOVERNING_LABEL[name] ?? name;
+
+// ---------------------------------------------------------------------------------------------
+// Builder
+// ---------------------------------------------------------------------------------------------
+
+export function buildAppendixModel(args: AppendixModelInput): AppendixModel {
+  const { input, result } = args;
+  const units = result.options.units;
+  const sections: ReportSection[] = [];
+  let n = 0;
+  const top = (id: string, title: string, blocks: Block[], newPage = false): void => {
+    n += 1;
+    sections.push({ id, number: String(n), title, level: 1, blocks, newPage });
+  };
+  const sub = (id: string, title: string, blocks: Block[], index: number, newPage = false): void => {
+    sections.push({ id, number: `${n}.${index}`, title, level: 2, blocks, newPage });
+  };
+
+  const byId = new Map(input.aircraft.map((a) => [a.id, a] as const));
+
+  // 1. Purpose and cautions
+  top('purpose', 'Purpose and cautions', purposeBlocks(result));
+
+  // 2. Site and design conditions
+  top('site', 'Site and design conditions', siteBlocks(input, result), true);
+
+  // 3. Fleet scenarios
+  top('fleet', 'Fleet scenarios', fleetBlocks(input, result, byId), true);
+
+  // 4. Method
+  const entries = METHOD_ENTRIES;
+  top('method', 'Method', methodIntroBlocks(result), true);
+  entries.forEach((e, i) => {
+    const blocks: Block[] = [{ type: 'paragraph', text: e.summary }, { type: 'formulas', lines: e.formulas }];
+    if (e.symbols) blocks.push({ type: 'paragraph', text: e.symbols, style: 'note' });
+    if (e.limits) blocks.push({ type: 'paragraph', text: `Validity and limits: ${e.limits}`, style: 'note' });
+    blocks.push({ type: 'paragraph', text: `Sources: ${e.sources.map((s) => `[${s}]`).join(', ')}. Full write-up: docs/methods/${e.doc}.`, style: 'note' });
+    sub(`method-${e.id}`, e.title, blocks, i + 1);
+  });
+  sub('references', 'References', [
+    { type: 'list', items: referencesFor(entries).map((r) => `[${r.id}] ${r.text}`) },
+  ], entries.length + 1);
+
+  // 5. Results per scenario
+  top('results', 'Results per scenario', [
+    { type: 'paragraph', text: 'For each scenario: every fleet row with its design takeoff mass, takeoff and landing requirements, the governing case, the required length and the classification; then the components of each requirement. The critical aircraft is the regular-use aircraft with the greatest required length; the recommended length is its requirement rounded up to the planning increment.' },
+  ], true);
+  result.scenarios.forEach((s, i) => sub(`results-${i + 1}`, `Scenario: ${s.name}`, scenarioBlocks(s, result, input, byId), i + 1, i > 0));
+
+  // 6. Comparison and recommendation
+  top('comparison', 'Scenario comparison and recommendation', comparisonBlocks(result), true);
+
+  // 7. Existing runway
+  top('existing', 'Existing runway assessment', existingIntroBlocks(result), true);
+  result.scenarios.forEach((s, i) => sub(`existing-${i + 1}`, `Existing runway: ${s.name}`, existingBlocks(s, result), i + 1));
+
+  // 8. Charts
+  top('charts', 'Charts', chartBlocks(args.charts), true);
+
+  // 9. Assumptions and warnings
+  top('assumptions', 'Assumptions and warnings', assumptionBlocks(input, result), true);
+
+  // 10. Input listing
+  top('inputs', 'Input listing and digest', listingBlocks(args), true);
+
+  return {
+    title: {
+      heading: 'Runway length study: appendix',
+      study: result.name,
+      site: result.site.name,
+      date: args.date,
+      version: args.version,
+      methodVersion: result.methodVersion,
+      units,
+      inputDigest: args.inputDigest,
+    },
+    caution: { title: CAUTION_TITLE, text: CAUTION_TEXT },
+    units,
+    recommendations: result.scenarios.map((s) => ({
+      scenario: s.name,
+      criticalAircraft: s.criticalAircraft,
+      criticalAircraftName: s.criticalAircraftName,
+      recommendedLength_m: s.recommendedLength_m,
+      required_m: s.criticalRequired_m,
+      governing: s.governing,
+    })),
+    sections,
+  };
+}
+
+function purposeBlocks(result: StudyResult): Block[] {
+  const cautions = result.cautions.length > 0 ? result.cautions : [CAUTION_TEXT];
+  return [
+    { type: 'paragraph', text: `This appendix documents the runway length requirement study "${result.name}" for ${result.site.name}. It sets out the site and design conditions, the fleet scenarios, the methods and their sources, the results with their components, the assessment of the existing runway, the assumptions and warnings, and every input value, so that a reviewer can check and reproduce each number.` },
+    ...cautions.map((c): Block => ({ type: 'paragraph', text: c, style: 'caution' })),
+    { type: 'list', items: [
+      'The lengths are a preliminary planning estimate for a master plan or facility-requirements study.',
+      "Final runway lengths follow the aircraft manufacturer's planning data, the advisory guidance of the aviation authority with jurisdiction, and review by a licensed engineer.",
+      'This appendix is not for flight planning or dispatch.',
+    ] },
+  ];
+}
+
+function siteBlocks(input: StudyInput, result: StudyResult): Block[] {
+  const s = result.site;
+  const blocks: Block[] = [];
+  blocks.push({ type: 'facts', items: [
+    { label: 'Site', value: t(s.name) },
+    { label: 'Aerodrome elevation', value: q(s.elevation_m, 'altitude') },
+    { label: 'Pressure altitude used', value: q(s.pressureAltitude_m, 'altitude') },
+    { label: 'Design temperature', value: q(s.designTemperature_c, 'temperature') },
+    { label: 'Standard (ISA) temperature at the elevation', value: q(s.standardTemperature_c, 'temperature') },
+    { label: 'Deviation from ISA', value: q(s.isaDeviation_c, 'temperature') },
+    { label: 'Air density at design conditions', value: { si: s.density_kgm3, unit: 'kg/m³' } },
+    { label: 'Density altitude', value: q(s.densityAltitude_m, 'altitude') },
+    { label: 'Design runway (gradient used for takeoff)', value: t(s.designRunway) },
+    { label: 'Uphill slope applied to the design takeoff', value: q(s.designSlope, 'slopePct') },
+  ] });
+
+  blocks.push({ type: 'subheading', text: 'How the design temperature was derived' });
+  if (s.designTemperatureSource === 'given' || !s.climate) {
+    blocks.push({ type: 'paragraph', text: 'The design temperature was entered with the study; it was not derived from climate data here. The reviewer should check its source.' });
+  } else {
+    const c = s.climate;
+    const years = c.years !== undefined ? `${c.years} years of record` : 'number of years not stated';
+    blocks.push({ type: 'facts', items: [
+      { label: 'Data source', value: t(c.source) },
+      { label: 'Years used', value: t(years) },
+      { label: 'Hottest month by mean temperature (Annex 14 criterion)', value: t(monthName(c.hottestMonth)) },
+      { label: 'Its mean daily maximum: aerodrome reference temperature', value: q(c.art_c, 'temperature') },
+      { label: 'Month with the highest mean daily maximum', value: t(monthName(c.maxMeanMaxMonth)) },
+      { label: 'Its mean daily maximum', value: q(c.maxMeanMax_c, 'temperature') },
+      { label: 'The two criteria pick', value: t(c.monthsDiffer ? 'different months (see warnings)' : 'the same month') },
+      ...(c.olderFormula_c !== undefined ? [{ label: 'Older formula Ta + (Tm - Ta)/3, for comparison', value: q(c.olderFormula_c, 'temperature') }] : []),
+    ] });
+    blocks.push({ type: 'paragraph', text: 'The design temperature is the aerodrome reference temperature: the monthly mean of the daily maximum temperatures of the hottest month, the hottest month being the one with the highest monthly mean temperature. The month with the highest mean daily maximum is shown beside it because runway-length guidance is also read that way.', style: 'note' });
+    const monthly = input.site.climate?.monthly ?? [];
+    if (monthly.length > 0) {
+      blocks.push({
+        type: 'table', caption: 'Monthly climate values used',
+        columns: [{ title: 'Month', width: 1.4 }, { title: 'Mean daily max', kind: 'temperature' }, { title: 'Mean daily min', kind: 'temperature' }, { title: 'Mean', kind: 'temperature' }],
+        rows: [...monthly].sort((a, b) => a.month - b.month).map((m) => row(
+          t(monthName(m.month), m.month === c.hottestMonth),
+          q(m.meanMax_c, 'temperature'),
+          q(m.meanMin_c, 'temperature'),
+          q(m.mean_c ?? (m.meanMin_c !== undefined ? (m.meanMax_c + m.meanMin_c) / 2 : undefined), 'temperature'),
+        )),
+        note: 'Mean = given mean, else (max + min)/2. The hottest month is in bold.',
+      });
+    }
+  }
+
+  blocks.push({ type: 'subheading', text: 'Runway profile and effective gradient' });
+  blocks.push({
+    type: 'table', caption: 'Runways',
+    columns: [{ title: 'Runway' }, { title: 'Pavement' }, { title: 'Length', kind: 'length' }, { title: 'High point', kind: 'altitude' }, { title: 'Low point', kind: 'altitude' }, { title: 'Difference', kind: 'shortLength' }, { title: 'Effective gradient', kind: 'slopePct' }],
+    rows: s.runways.map((r) => row(t(r.name), t(r.pavement), q(r.length_m, 'length'), q(r.highPoint_m, 'altitude'), q(r.lowPoint_m, 'altitude'), q(r.elevationDifference_m, 'shortLength'), q(r.effectiveGradient, 'slopePct'))),
+    note: 'Effective gradient = (highest - lowest centreline elevation) / runway length.',
+  });
+  blocks.push({
+    type: 'table', caption: 'Declared distances',
+    columns: [{ title: 'Runway' }, { title: 'Direction' }, { title: 'TORA', kind: 'length' }, { title: 'TODA', kind: 'length' }, { title: 'ASDA', kind: 'length' }, { title: 'LDA', kind: 'length' }, { title: 'Stopway', kind: 'length' }, { title: 'Clearway', kind: 'length' }, { title: 'Takeoff slope', kind: 'slopePct' }],
+    rows: s.runways.flatMap((r) => r.directions.map((d) => row(t(r.name), t(d.designator), q(d.tora_m, 'length'), q(d.toda_m, 'length'), q(d.asda_m, 'length'), q(d.lda_m, 'length'), q(d.stopway_m, 'length'), q(d.clearway_m, 'length'), q(d.slope, 'slopePct')))),
+    note: 'Takeoff slope: average slope in the takeoff direction, positive uphill.',
+  });
+  return blocks;
+}
+
+function fleetBlocks(input: StudyInput, result: StudyResult, byId: ReadonlyMap<string, AircraftProfile>): Block[] {
+  const blocks: Block[] = [
+    { type: 'paragraph', text: `Regular use: an aircraft group with at least ${result.options.regularUseThreshold} annual operations (takeoffs and landings each count one). Each row gives the longest regular route (design stage length) and the payload flown on it; the design takeoff mass follows from them.` },
+  ];
+  const used = new Set(input.scenarios.flatMap((s) => s.fleet.map((r) => r.aircraft)));
+  blocks.push({
+    type: 'table', caption: 'Aircraft in the study',
+    columns: [{ title: 'Aircraft', width: 1.8 }, { title: 'Id', width: 1.4 }, { title: 'Basis' }, { title: 'Engines', width: 1.2 }, { title: 'MTOW', kind: 'mass' }, { title: 'MLW', kind: 'mass' }, { title: 'Group', width: 1.2 }],
+    rows: input.aircraft.filter((a) => used.has(a.id)).map((a) => row(t(a.name), t(a.id), t(a.certification), t(`${a.engineCount} x ${a.engineType}`), q(a.mtow_kg, 'mass'), q(a.mlw_kg, 'mass'), t(a.group ?? a.id))),
+  });
+  result.scenarios.forEach((s) => {
+    blocks.push({
+      type: 'table', caption: `Scenario "${s.name}": ${s.totalOperations.toLocaleString('en-US')} annual operations`,
+      columns: [{ title: 'Aircraft', width: 2 }, { title: 'Operations', kind: 'count' }, { title: 'Group operations', kind: 'count' }, { title: 'Regular use' }, { title: 'Stage length', kind: 'distance' }, { title: 'Payload', kind: 'mass' }],
+      rows: s.rows.map((r) => row(t(byId.get(r.aircraft)?.name ?? r.aircraftName), q(r.annualOperations, 'count'), q(r.groupOperations, 'count'), t(yesNo(r.regularUse)), q(r.route.stageLength_km * 1000, 'distance'), q(r.route.payload_kg, 'mass'))),
+    });
+  });
+  return blocks;
+}
+
+function methodIntroBlocks(result: StudyResult): Block[] {
+  const o = result.options;
+  const reserves = o.reserves.policy === 'custom'
+    ? `custom (alternate ${o.reserves.alternate_km ?? 0} km, ${o.reserves.holding_min ?? 0} min)`
+    : o.reserves.policy === 'international' ? 'international (10 % trip time, alternate, 30 min hold)' : 'cruise plus 45 minutes';
+  return [
+    { type: 'paragraph', text: `Method version ${result.methodVersion}. Each aircraft is sized at the site's design conditions from first-principles performance models and published correction methods; this section states the models, their formulas and their published sources. The references are listed at the end of the section.` },
+    { type: 'facts', items: [
+      { label: 'Primary takeoff method', value: t(STUDY_METHOD_LABEL[o.method]) },
+      { label: 'Runway surface for the design case', value: t(SURFACE_LABELS[o.surface]) },
+      { label: 'Landing temperature', value: t(o.landingTemperature === 'isa' ? 'ISA at the field (certified data basis)' : 'design temperature') },
+      { label: 'Fuel reserves for the design takeoff mass', value: t(reserves) },
+      { label: 'Regular-use threshold', value: t(`${o.regularUseThreshold.toLocaleString('en-US')} annual operations`) },
+      { label: 'Planning increment for the recommended length', value: q(o.roundingIncrement_m, 'length') },
+      { label: 'Mass per passenger (payload penalties)', value: q(o.passengerMass_kg, 'mass') },
+    ] },
+  ];
+}
+
+function takeoffCaseText(r: RowResult): string {
+  if (r.status !== 'ok') return 'cannot operate';
+  const g = r.governing === 'takeoff' && r.takeoff ? `takeoff (${governingLabel(r.takeoff.governing)})` : r.governing;
+  return r.takeoff?.climbLimited ? `${g}; climb-limited` : g;
+}
+
+function scenarioBlocks(s: ScenarioResult, result: StudyResult, input: StudyInput, byId: ReadonlyMap<string, AircraftProfile>): Block[] {
+  const blocks: Block[] = [];
+  blocks.push({ type: 'facts', items: [
+    { label: 'Critical aircraft', value: t(s.criticalAircraftName ?? 'none (no regular-use aircraft can operate)', true) },
+    { label: 'Recommended runway length', value: { si: s.recommendedLength_m, kind: 'lengthBoth' } },
+    { label: 'Requirement of the critical aircraft (before rounding)', value: q(s.criticalRequired_m, 'length') },
+    { label: 'Governing case', value: t(s.governing ?? '—') },
+    { label: 'Runway design code', value: t(s.runwayDesignCode ?? '—') },
+    { label: 'Annual operations in the scenario', value: q(s.totalOperations, 'count') },
+  ] });
+  blocks.push({
+    type: 'table', caption: `Requirements per aircraft: ${s.name}`,
+    columns: [
+      { title: 'Aircraft', width: 2 }, { title: 'Regular use', width: 0.8 }, { title: 'Takeoff mass', kind: 'mass', width: 1.1 },
+      { title: 'Takeoff', kind: 'length' }, { title: 'Landing', kind: 'length' }, { title: 'Governing case', width: 1.8 },
+      { title: 'Required', kind: 'length' }, { title: 'ICAO code', width: 0.8 }, { title: 'RDC', width: 0.7 },
+    ],
+    rows: s.rows.map((r) => row(
+      t(r.aircraftName, r.aircraft === s.criticalAircraft),
+      t(yesNo(r.regularUse)),
+      q(r.takeoffMass_kg, 'mass'),
+      q(r.status === 'ok' ? r.requiredTakeoff_m : null, 'length'),
+      q(r.status === 'ok' ? r.requiredLanding_m : null, 'length'),
+      t(takeoffCaseText(r)),
+      q(r.status === 'ok' ? r.required_m : null, 'length', undefined),
+      t(r.classification.aerodromeCode),
+      t(r.classification.runwayDesignCode),
+    )),
+    note: 'The critical aircraft is in bold. RDC: runway design code (approach category and design group).',
+  });
+  const unable = s.rows.filter((r) => r.status !== 'ok');
+  if (unable.length > 0) {
+    blocks.push({ type: 'list', items: unable.map((r) => `${r.aircraftName}: cannot operate here. ${r.reason ?? ''}`.trim()) });
+  }
+  if (s.excluded.length > 0) {
+    blocks.push({ type: 'paragraph', text: `Not eligible as critical aircraft: ${s.excluded.map((e) => `${byId.get(e.aircraft)?.name ?? e.aircraft} (${e.reason})`).join('; ')}.`, style: 'note' });
+  }
+
+  // Components per aircraft
+  const rows: Row[] = [];
+  for (const r of s.rows) {
+    rows.push({ group: `${r.aircraftName} (${r.annualOperations.toLocaleString('en-US')} operations/year${r.regularUse ? ', regular use' : ''})` });
+    const rt = r.route;
+    rows.push(row(t('Design stage length'), q(rt.stageLength_km * 1000, 'distance')));
+    rows.push(row(t('Route status'), t(rt.reason ? `${rt.status}: ${rt.reason}` : rt.status)));
+    rows.push(row(t('Design takeoff mass'), q(r.takeoffMass_kg, 'mass')));
+    rows.push(row(t('Payload requested'), q(rt.payload_kg, 'mass')));
+    if (rt.payloadLeftBehind_kg > 0) rows.push(row(t('Payload left behind'), q(rt.payloadLeftBehind_kg, 'mass')));
+    rows.push(row(t('Trip fuel'), q(rt.tripFuel_kg, 'mass')));
+    rows.push(row(t('Reserve fuel'), q(rt.reserveFuel_kg, 'mass')));
+    rows.push(row(t('Arrival (landing) mass'), q(rt.arrivalMass_kg, 'mass')));
+    if (r.status !== 'ok') {
+      rows.push(row(t('Finding'), t(r.reason ?? 'cannot operate')));
+      continue;
+    }
+    const to = r.takeoff;
+    if (to) {
+      rows.push(row(t('Takeoff requirement'), q(to.required_m, 'length')));
+      rows.push(row(t('Takeoff governing case'), t(governingLabel(to.governing))));
+      for (const c of to.components) rows.push(row(t(c.label), traceCell(c)));
+      if (to.v1_mps !== undefined) rows.push(row(t('V1 (true airspeed)'), q(to.v1_mps, 'speed')));
+      if (to.vr_mps !== undefined) rows.push(row(t('VR (true airspeed)'), q(to.vr_mps, 'speed')));
+      if (to.v2_mps !== undefined) rows.push(row(t('V2 (true airspeed)'), q(to.v2_mps, 'speed')));
+      if (to.climbGradient !== undefined) rows.push(row(t('Engine-out climb gradient at V2'), q(to.climbGradient, 'slopePct')));
+      if (to.climbMinimum !== undefined) rows.push(row(t('Minimum climb gradient'), q(to.climbMinimum, 'slopePct', 1)));
+      if (to.climbLimited) {
+        rows.push(row(t('Climb limit', true), t('CLIMB-LIMITED: the climb gradient is below the minimum; a longer runway cannot cure it', true)));
+        if (to.climbMaxMass_kg !== undefined) rows.push(row(t('Greatest mass meeting the climb minimum'), q(to.climbMaxMass_kg, 'mass')));
+      }
+      if (to.physics_m !== undefined && to.method !== 'physics') rows.push(row(t('Performance model (beside)'), q(to.physics_m, 'length')));
+      if (to.reference_m !== undefined) rows.push(row(t('Reference length with corrections'), q(to.reference_m, 'length')));
+      if (to.calibrationFactor !== undefined) rows.push(row(t('Calibration factor'), q(to.calibrationFactor, 'ratio')));
+      if (to.torenbeek_m !== undefined) rows.push(row(t('Torenbeek balanced field length (indicative)'), q(to.torenbeek_m, 'length')));
+      if (to.roskam_m !== undefined) rows.push(row(t('Roskam takeoff length (indicative)'), q(to.roskam_m, 'length')));
+    }
+    const ld = r.landing;
+    if (ld) {
+      rows.push(row(t('Landing mass'), q(ld.mass_kg, 'mass')));
+      for (const c of ld.components) rows.push(row(t(`Landing: ${c.label}`), traceCell(c)));
+      rows.push(row(t(`Landing requirement (${ld.rule}, factor ${ld.factor.toFixed(3)})`), q(ld.required_m, 'length')));
+      rows.push(row(t('VREF (true airspeed)'), q(ld.vref_mps, 'speed')));
+    }
+    rows.push(row(t('Required length', true), q(r.required_m, 'length')));
+    const c = r.classification;
+    rows.push(row(t('Classification'), t(`ICAO ${c.aerodromeCode}, approach category ${c.approachCategory}, design group ${c.designGroup}`)));
+    rows.push(row(t('Aeroplane reference field length'), q(c.arfl_m, 'length')));
+  }
+  blocks.push({
+    type: 'table', caption: `Components of each requirement: ${s.name}`,
+    columns: [{ title: 'Item', width: 2.2 }, { title: 'Value', width: 1.6, align: 'right' }],
+    rows,
+  });
+  void input;
+  return blocks;
+}
+
+function comparisonBlocks(result: StudyResult): Block[] {
+  const blocks: Block[] = [
+    {
+      type: 'table', caption: 'Scenarios side by side',
+      columns: [{ title: 'Scenario', width: 1.6 }, { title: 'Critical aircraft', width: 1.6 }, { title: 'Recommended length', kind: 'lengthBoth', width: 1.6, align: 'right' }, { title: 'Governing' }, { title: 'RDC', width: 0.7 }, { title: 'Regular-use aircraft', kind: 'count' }],
+      rows: result.comparison.map((c) => row(t(c.scenario), t(c.criticalAircraftName ?? 'none', true), { si: c.recommendedLength_m, kind: 'lengthBoth' }, t(c.governing ?? '—'), t(c.runwayDesignCode ?? '—'), q(c.regularUseAircraft, 'count'))),
+    },
+    { type: 'subheading', text: 'Recommendation' },
+  ];
+  for (const s of result.scenarios) {
+    if (s.recommendedLength_m === null || s.criticalAircraftName === null) {
+      blocks.push({ type: 'paragraph', text: `${s.name}: no regular-use aircraft can operate at this site; no length is recommended.` });
+    } else {
+      blocks.push({ type: 'facts', items: [
+        { label: s.name, value: t(`critical aircraft ${s.criticalAircraftName}, ${s.governing ?? ''} governs`) },
+        { label: 'Recommended length', value: { si: s.recommendedLength_m, kind: 'lengthBoth' } },
+      ] });
+    }
+  }
+  blocks.push({ type: 'paragraph', text: 'The recommended length is the requirement of the critical aircraft rounded up to the planning increment. It is a preliminary planning estimate; see Section 1.', style: 'note' });
+  return blocks;
+}
+
+function existingIntroBlocks(result: StudyResult): Block[] {
+  return [
+    { type: 'paragraph', text: 'For each aircraft that can operate, the needs at its design takeoff mass are set against the declared distances of each runway direction at design conditions. Where a distance falls short, the greatest takeoff mass the declared distances allow is found, with the payload that can then fly the design stage and the range with the design payload; the differences are the penalties of operating from the existing runway.' },
+    { type: 'paragraph', text: `Penalties in passengers use ${result.options.passengerMass_kg} kg per passenger with baggage.`, style: 'note' },
+  ];
+}
+
+function existingBlocks(s: ScenarioResult, result: StudyResult): Block[] {
+  const ok = s.rows.filter((r) => r.status === 'ok' && r.existing.length > 0);
+  if (ok.length === 0) return [{ type: 'paragraph', text: 'No aircraft in this scenario can operate; nothing to assess.' }];
+  const need: Row[] = [];
+  const mass: Row[] = [];
+  for (const r of ok) {
+    const mark = r.aircraft === s.criticalAircraft ? ' (critical)' : r.regularUse ? '' : ' (not regular use)';
+    need.push({ group: `${r.aircraftName}${mark}` });
+    mass.push({ group: `${r.aircraftName}${mark}` });
+    for (const e of r.existing) {
+      need.push(row(
+        t(`${e.runway} / ${e.designator}`),
+        pair(e.takeoffRunNeeded_m, e.tora_m), pair(e.takeoffDistanceNeeded_m, e.toda_m),
+        pair(e.accelerateStopNeeded_m, e.asda_m), pair(e.landingNeeded_m, e.lda_m),
+        t(e.takeoffOk ? 'yes' : 'NO', !e.takeoffOk), t(e.landingOk ? 'yes' : 'NO', !e.landingOk),
+      ));
+      mass.push(row(
+        t(`${e.runway} / ${e.designator}`),
+        q(e.maxTakeoffMass_kg, 'mass'), t(e.limitedBy),
+        penalty(e.payloadPenalty_kg, e.takeoffOk, 'mass'),
+        penalty(e.passengersPenalty, e.takeoffOk, 'count'),
+        penalty(e.rangePenalty_km === undefined ? undefined : e.rangePenalty_km * 1000, e.takeoffOk, 'distance'),
+        q(e.maxLandingMass_kg, 'mass'),
+      ));
+      if (e.note) mass.push(row(t(''), t(e.note)));
+    }
+  }
+  return [
+    {
+      type: 'table', caption: `Needed / declared distances at the design takeoff mass: ${s.name}`,
+      columns: [{ title: 'Runway / direction', width: 1.3 }, { title: 'Takeoff run / TORA', kind: 'length', align: 'right' }, { title: 'Takeoff distance / TODA', kind: 'length', align: 'right' }, { title: 'Accelerate-stop / ASDA', kind: 'length', align: 'right' }, { title: 'Landing / LDA', kind: 'length', align: 'right' }, { title: 'Takeoff fits', width: 0.7 }, { title: 'Landing fits', width: 0.7 }],
+      rows: need,
+      note: 'Each cell: needed / declared (rounded to display units; the comparison uses unrounded values).',
+    },
+    {
+      type: 'table', caption: `Greatest takeoff mass and penalties: ${s.name}`,
+      columns: [{ title: 'Runway / direction', width: 1.3 }, { title: 'Greatest takeoff mass', kind: 'mass' }, { title: 'Limited by', width: 0.8 }, { title: 'Payload penalty', kind: 'mass' }, { title: 'Passengers', kind: 'count', width: 0.8 }, { title: 'Range penalty', kind: 'distance', width: 1.1 }, { title: 'Greatest landing mass', kind: 'mass' }],
+      rows: mass,
+      note: 'Penalties against the design payload and stage length of the fleet row; "none" where the runway allows the design mass.',
+    },
+  ];
+}
+
+const pair = (a: number | undefined, b: number): Cell => ({ pair: [a, b], kind: 'length', bold: a !== undefined && a > b });
+
+/** A penalty: "none" when there is none (or the design mass fits), else the value. */
+function penalty(v: number | undefined, fits: boolean, kind: ValueKind): Cell {
+  if (v === undefined) return t(fits ? 'none' : '—');
+  return v <= 0 ? t('none') : q(v, kind);
+}
+
+function chartBlocks(charts: readonly ChartModel[]): Block[] {
+  if (charts.length === 0) return [{ type: 'paragraph', text: 'No charts: the study has no results to plot.' }];
+  return [
+    { type: 'paragraph', text: 'The charts are drawn from the same chart models as the results pages.' },
+    ...charts.map((c): Block => ({ type: 'chart', chart: c })),
+  ];
+}
+
+function assumptionBlocks(input: StudyInput, result: StudyResult): Block[] {
+  const o = result.options;
+  const assumptions = [
+    `Design conditions: ${result.site.name} at the design temperature; pressure altitude equal to the aerodrome elevation; dry air.`,
+    `Runway surface for the design case: ${SURFACE_LABELS[o.surface].toLowerCase()}; zero wind.`,
+    `Takeoff uphill slope: the effective gradient of runway ${result.site.designRunway}.`,
+    o.landingTemperature === 'isa'
+      ? 'Landing at ISA temperature at the field elevation (certified landing data are scheduled for standard temperature).'
+      : 'Landing at the design temperature (more demanding than the certified data basis).',
+    'Design takeoff mass from the longest regular route and its payload, with fuel reserves carried and not burnt; landing at the arrival mass.',
+    'No reverse thrust is credited; no obstacle-limited takeoff path is assessed.',
+    `Regular use at ${o.regularUseThreshold.toLocaleString('en-US')} annual operations per aircraft group; the recommended length is rounded up to the planning increment.`,
+    'Aircraft performance profiles are planning profiles; where the manufacturer\'s planning data exist, they take precedence.',
+  ];
+  const warnings: string[] = [];
+  const add = (prefix: string, ws: readonly string[]): void => {
+    for (const w of ws) {
+      const line = prefix ? `${prefix}: ${w}` : w;
+      if (!warnings.includes(line)) warnings.push(line);
+    }
+  };
+  add('', result.warnings);
+  add('Site', result.site.warnings);
+  for (const r of result.site.runways) add(`Runway ${r.name}`, r.warnings);
+  for (const s of result.scenarios) {
+    add(s.name, s.warnings);
+    for (const r of s.rows) add(`${s.name}, ${r.aircraftName}`, r.warnings);
+  }
+  const climbLimited = result.scenarios.flatMap((s) => s.rows.filter((r) => r.takeoff?.climbLimited).map((r) => `${s.name}, ${r.aircraftName}: climb-limited at the design takeoff mass; the engine-out climb gradient is below the regulatory minimum, which a longer runway cannot cure.`));
+  for (const c of climbLimited) if (!warnings.includes(c)) warnings.unshift(c);
+  void input;
+  return [
+    { type: 'subheading', text: 'Assumptions' },
+    { type: 'list', items: assumptions },
+    { type: 'subheading', text: 'Warnings raised by the computation' },
+    warnings.length > 0 ? { type: 'list', items: warnings } : { type: 'paragraph', text: 'None.' },
+  ];
+}
+
+/** Aircraft per listing table (columns). */
+const LISTING_AIRCRAFT_PER_TABLE = 4;
+
+function listingBlocks(args: AppendixModelInput): Block[] {
+  const { input } = args;
+  const site = input.site;
+  const blocks: Block[] = [
+    { type: 'paragraph', text: 'Every input value of the study, in the study\'s units with all significant digits. The exact input, in SI units as stored, is embedded in this PDF as the attachment "study-input.json"; its SHA-256 digest is below. Run the command shown on that file to regenerate this appendix with the same numbers.' },
+    { type: 'facts', items: [
+      { label: 'SHA-256 of the canonical input', value: t(args.inputDigest, true) },
+      { label: 'Regenerate with', value: t(args.regenerateCommand ?? 'npm run study -- study-input.json --format pdf --out appendix.pdf') },
+      { label: 'Runwright version', value: t(args.version) },
+      { label: 'Method version', value: t(args.result.methodVersion) },
+    ] },
+    { type: 'subheading', text: 'Study and site' },
+    { type: 'facts', items: [
+      { label: 'Study name', value: t(input.name) },
+      { label: 'Site name', value: t(site.name) },
+      { label: 'Elevation', value: exact(site.elevation_m, 'altitude') },
+      { label: 'Design temperature (given)', value: site.designTemperature_c !== undefined ? exact(site.designTemperature_c, 'temperature') : t('not given: derived from the climate data') },
+      ...(site.climate ? [
+        { label: 'Climate source', value: t(site.climate.source) },
+        { label: 'Climate years', value: t(site.climate.years !== undefined ? String(site.climate.years) : 'not stated') },
+      ] : []),
+    ] },
+  ];
+  if (site.climate) {
+    blocks.push({
+      type: 'table', caption: 'Climate: monthly values',
+      columns: [{ title: 'Month' }, { title: 'Mean daily max', kind: 'temperature' }, { title: 'Mean daily min', kind: 'temperature' }, { title: 'Mean', kind: 'temperature' }],
+      rows: [...site.climate.monthly].sort((a, b) => a.month - b.month).map((m) => row(t(String(m.month)), exact(m.meanMax_c, 'temperature'), exact(m.meanMin_c, 'temperature'), exact(m.mean_c, 'temperature'))),
+    });
+  }
+  for (const r of site.runways) {
+    blocks.push({
+      type: 'table', caption: `Runway ${r.name} (${r.pavement}): centreline profile`,
+      columns: [{ title: 'Point' }, { title: 'Chainage', kind: 'length' }, { title: 'Elevation', kind: 'altitude' }],
+      rows: r.profile.map((p, i) => row(t(String(i + 1)), exact(p.chainage_m, 'length'), exact(p.elevation_m, 'altitude'))),
+    });
+    blocks.push({
+      type: 'table', caption: `Runway ${r.name}: declared distances`,
+      columns: [{ title: 'Direction' }, { title: 'TORA', kind: 'length' }, { title: 'TODA', kind: 'length' }, { title: 'ASDA', kind: 'length' }, { title: 'LDA', kind: 'length' }],
+      rows: r.directions.map((d) => row(t(d.designator), exact(d.tora_m, 'length'), exact(d.toda_m, 'length'), exact(d.asda_m, 'length'), exact(d.lda_m, 'length'))),
+    });
+  }
+  blocks.push({ type: 'subheading', text: 'Aircraft profiles' });
+  for (let i = 0; i < input.aircraft.length; i += LISTING_AIRCRAFT_PER_TABLE) {
+    blocks.push(aircraftListing(input.aircraft.slice(i, i + LISTING_AIRCRAFT_PER_TABLE)));
+  }
+  blocks.push({ type: 'subheading', text: 'Fleet rows' });
+  blocks.push({
+    type: 'table', caption: 'Scenarios and fleet rows',
+    columns: [{ title: 'Scenario', width: 1.5 }, { title: 'Aircraft id', width: 1.3 }, { title: 'Annual operations', kind: 'count' }, { title: 'Stage length (km)', align: 'right' }, { title: 'Payload', kind: 'mass' }],
+    rows: input.scenarios.flatMap((s) => s.fleet.map((f) => row(t(s.name), t(f.aircraft), exact(f.annualOperations, 'count'), t(exactNumber(f.stageLength_km)), exact(f.payload_kg, 'mass')))),
+    note: 'Stage lengths are listed in km, as stored in the study file.',
+  });
+  const o = input.options;
+  blocks.push({ type: 'subheading', text: 'Options' });
+  blocks.push({ type: 'facts', items: [
+    { label: 'Units', value: t(o.units === 'si' ? 'SI' : 'US customary') },
+    { label: 'Primary method', value: t(o.method) },
+    { label: 'Surface', value: t(o.surface) },
+    { label: 'Landing temperature', value: t(o.landingTemperature) },
+    { label: 'Regular-use threshold (operations/year)', value: exact(o.regularUseThreshold, 'count') },
+    { label: 'Planning increment', value: exact(o.roundingIncrement_m, 'length') },
+    { label: 'Reserve policy', value: t(o.reserves.policy) },
+    ...(o.reserves.alternate_km !== undefined ? [{ label: 'Alternate distance (km)', value: t(exactNumber(o.reserves.alternate_km)) }] : []),
+    ...(o.reserves.holding_min !== undefined ? [{ label: 'Holding time (min)', value: t(exactNumber(o.reserves.holding_min)) }] : []),
+    ...(o.reserves.contingencyFraction !== undefined ? [{ label: 'Contingency fraction', value: exact(o.reserves.contingencyFraction, 'ratio') }] : []),
+    { label: 'Mass per passenger', value: exact(o.passengerMass_kg, 'mass') },
+  ] });
+  return blocks;
+}
+
+/** A number with all its significant digits (up to 12), no grouping. */
+export function exactNumber(v: number): string {
+  if (!Number.isFinite(v)) return '—';
+  return String(Number(v.toPrecision(12)));
+}
+
+function aircraftListing(aircraft: readonly AircraftProfile[]): Block {
+  const rows: Row[] = [];
+  const textRow = (label: string, get: (a: AircraftProfile) => string): void => {
+    rows.push(row(t(label), ...aircraft.map((a) => t(get(a)))));
+  };
+  textRow('Id', (a) => a.id);
+  textRow('Group', (a) => a.group ?? a.id);
+  textRow('Certification basis', (a) => a.certification);
+  textRow('Engine type', (a) => a.engineType);
+  textRow('Gear', (a) => a.gear);
+  textRow('Thrust lapse model', (a) => a.thrustLapse ?? (a.engineType === 'turbofan' ? 'mattingly' : '—'));
+  for (const f of AIRCRAFT_FIELDS) {
+    const vals = aircraft.map((a) => (a as unknown as Record<string, unknown>)[f.key]);
+    if (vals.every((v) => v === undefined)) continue;
+    rows.push(row(t(f.label), ...vals.map((v) => (typeof v === 'number' ? exact(v, f.kind) : t('—')))));
+  }
+  if (aircraft.some((a) => a.cruise)) {
+    rows.push({ group: 'Cruise and fuel' });
+    for (const f of CRUISE_FIELDS) {
+      const vals = aircraft.map((a) => (a.cruise as unknown as Record<string, unknown> | undefined)?.[f.key]);
+      if (vals.every((v) => v === undefined)) continue;
+      rows.push(row(t(f.label), ...vals.map((v) => (typeof v === 'number' ? exact(v, f.kind) : t('—')))));
+    }
+  }
+  if (aircraft.some((a) => a.reference)) {
+    rows.push({ group: 'Reference lengths' });
+    rows.push(row(t('Takeoff, MTOW, sea level, ISA'), ...aircraft.map((a) => (a.reference?.takeoff_m !== undefined ? exact(a.reference.takeoff_m, 'length') : t('—')))));
+    rows.push(row(t('Landing, MLW, sea level'), ...aircraft.map((a) => (a.reference?.landing_m !== undefined ? exact(a.reference.landing_m, 'length') : t('—')))));
+    if (aircraft.some((a) => a.reference?.table)) {
+      rows.push(row(t('Reference table (mass x elevation x temperature)'), ...aircraft.map((a) => {
+        const tb = a.reference?.table;
+        return t(tb ? `${tb.mass_kg.length} x ${tb.elevation_m.length} x ${tb.temperature_c.length} values (in the attached input)` : '—');
+      })));
+    }
+  }
+  return {
+    type: 'table',
+    caption: `Aircraft profiles: ${aircraft.map((a) => a.name).join(', ')}`,
+    columns: [{ title: 'Field', width: 2.2 }, ...aircraft.map((a): Column => ({ title: a.name, align: 'right', width: 1.2 }))],
+    rows,
+    note: 'Each value in the unit shown in its row, with all significant digits.',
+  };
+}

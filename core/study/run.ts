@@ -1,0 +1,664 @@
+/**
+ * Study engine: a site, a catalogue of aircraft and fleet scenarios in; per scenario the requirement
+ * of every fleet row, the critical aircraft and the recommended runway length out.
+ *
+ * Steps (docs/methods.md, "Study"):
+ * 1. Site design conditions: pressure altitude = aerodrome elevation; design temperature given, or the
+ *    aerodrome reference temperature (ICAO Annex 14 Vol. I 2.4.1/2.4.2: mean daily maximum of the
+ *    hottest month by mean temperature) from the monthly climate; density and density altitude (ISA,
+ *    US Standard Atmosphere 1976); runway profiles (effective gradient, direction slopes).
+ * 2. Per fleet row: the design takeoff mass from the route (Breguet, reserves), capped by MTOW; the
+ *    takeoff requirement at design conditions with the design runway's effective gradient taken uphill
+ *    (the conservative direction), calm wind, the study's surface; the landing requirement at the
+ *    landing mass (MLW by default) and ISA temperature (certified landing data are for standard day,
+ *    14 CFR 25.125) with no slope credit; required length = the greater of the two.
+ * 3. Regular use: the aircraft's group reaches the threshold of annual operations (500 by default,
+ *    FAA AC 150/5000-17). Critical aircraft: the regular-use row that can operate with the greatest
+ *    required length (ties: more operations, then the aircraft id). Recommended length: that
+ *    requirement rounded up to the planning increment (roundUpToIncrement).
+ * 4. Operations served: for each candidate length, the share of the scenario's annual operations
+ *    whose requirement fits. Sensitivity: required length against temperature and elevation.
+ *
+ * Pure and deterministic: the same input gives the same result. No rounding other than the named
+ * planning-increment step.
+ */
+import type { AircraftProfile } from '../aircraft.js';
+import { airAt, standardTemperatureC } from '../atmosphere.js';
+import { classifyAircraft } from '../classify.js';
+import { designTemperatureFromMonthly } from '../climate/index.js';
+import { CAUTIONS } from '../caution.js';
+import { InputDomainError } from '../errors.js';
+import { analyseLanding, referenceLandingSpeed } from '../landing.js';
+import { referenceLengthAtSite } from '../reference.js';
+import { requiredLength } from '../requirement.js';
+import { designTakeoffMass, type ReservePolicy, type RouteResult } from '../route/index.js';
+import { analyseRunwayProfile, checkDeclaredDistances } from '../runway.js';
+import { analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
+import { check, inRange } from '../validate.js';
+import { validateAircraft } from '../aircraft.js';
+import { assessExistingRunway, calibrateTakeoff, type TakeoffCalibration } from './hooks.js';
+import type {
+  AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint,
+  RouteSummary, RowResult, RunwaySummary, ScenarioResult, SensitivityCurve, SiteConditions, StudyInput,
+  StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
+} from './types.js';
+
+/** Version of the study engine and the models it calls; changes whenever a number can change. */
+export const STUDY_METHOD_VERSION = 'runwright-methods-1';
+
+/** Temperature sweep around the design temperature, °C. */
+export const SENSITIVITY_TEMPERATURE_SPAN_C = 15;
+export const SENSITIVITY_TEMPERATURE_STEP_C = 2.5;
+/** Elevation sweep: sea level to the site elevation plus this, m, in this many steps. */
+export const SENSITIVITY_ELEVATION_ABOVE_M = 1000;
+export const SENSITIVITY_ELEVATION_STEPS = 8;
+/** Most points on an operations-served curve. */
+export const OPERATIONS_SERVED_MAX_POINTS = 200;
+
+/**
+ * Rounds a runway length up to the next multiple of the planning increment (e.g. 2 431 m → 2 450 m
+ * with 50 m). A length already on a multiple stays (within 1e-6 m, so float noise does not add an
+ * increment).
+ */
+export function roundUpToIncrement(length_m: number, increment_m: number): number {
+  inRange('length_m', length_m, { min: 0, max: 100000, unit: 'm' });
+  inRange('increment_m', increment_m, { min: 0.01, max: 1000, unit: 'm' });
+  const n = Math.ceil(length_m / increment_m - 1e-6 / increment_m);
+  return Math.max(0, n) * increment_m;
+}
+
+function reservePolicyOf(r: StudyReserves): ReservePolicy {
+  const alt = r.alternate_km === undefined ? {} : { alternateDistance_m: r.alternate_km * 1000 };
+  switch (r.policy) {
+    case 'cruise-45min': return { kind: 'cruise-45min', ...alt };
+    case 'international': return { kind: 'international', ...alt, ...(r.holding_min === undefined ? {} : { holdMinutes: r.holding_min }) };
+    case 'custom':
+      return {
+        kind: 'custom',
+        alternateDistance_m: (r.alternate_km ?? 0) * 1000,
+        holdMinutes: r.holding_min ?? 45,
+        ...(r.contingencyFraction === undefined ? {} : { contingencyFraction: r.contingencyFraction }),
+      };
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// Site
+
+export function siteConditions(input: StudyInput): SiteConditions {
+  const site = input.site;
+  inRange('site.elevation_m', site.elevation_m, { min: -400, max: 4500, unit: 'm' });
+  check(site.runways.length > 0, 'site.runways', site.runways.length, 'at least one runway');
+  const warnings: string[] = [];
+  let designTemperature_c: number;
+  let source: 'given' | 'climate';
+  let climate: SiteConditions['climate'];
+  if (site.climate) {
+    const d = designTemperatureFromMonthly({ months: site.climate.monthly, includeOlderFormula: true });
+    climate = {
+      source: site.climate.source,
+      ...(site.climate.years === undefined ? {} : { years: site.climate.years }),
+      hottestMonth: d.hottestMonth,
+      art_c: d.art_c,
+      maxMeanMaxMonth: d.maxMeanMaxMonth,
+      maxMeanMax_c: d.maxMeanMax_c,
+      monthsDiffer: d.monthsDiffer,
+      ...(d.olderFormula ? { olderFormula_c: d.olderFormula.art_c } : {}),
+    };
+    warnings.push(...d.warnings);
+    if (d.monthsDiffer) {
+      warnings.push(
+        `The hottest month by mean temperature (month ${d.hottestMonth}, ${d.art_c.toFixed(1)} °C mean maximum) differs from the month with the highest mean maximum (month ${d.maxMeanMaxMonth}, ${d.maxMeanMax_c.toFixed(1)} °C).`,
+      );
+    }
+  }
+  if (site.designTemperature_c !== undefined) {
+    designTemperature_c = inRange('site.designTemperature_c', site.designTemperature_c, { min: -30, max: 55, unit: '°C' });
+    source = 'given';
+  } else if (climate) {
+    designTemperature_c = climate.art_c;
+    source = 'climate';
+  } else {
+    throw new InputDomainError('site.designTemperature_c', undefined, 'a design temperature or monthly climate data');
+  }
+  const air = airAt(site.elevation_m, designTemperature_c);
+  const runways: RunwaySummary[] = site.runways.map((r, i) => {
+    check(r.directions.length >= 1 && r.directions.length <= 2, `site.runways[${i}].directions`, r.directions.length, '1 or 2 directions');
+    const prof = analyseRunwayProfile({ points: r.profile });
+    const directions = r.directions.map((d, j) => {
+      const dd = checkDeclaredDistances(d);
+      warnings.push(...dd.warnings.map((w) => `Runway ${d.designator}: ${w}`));
+      // The first direction takes off towards increasing chainage, the second towards decreasing.
+      const slope = prof.takeoffDirections[j === 0 ? 0 : 1].averageSlope;
+      return { ...d, stopway_m: dd.stopway_m, clearway_m: dd.clearway_m, slope };
+    });
+    return {
+      name: r.name,
+      pavement: r.pavement,
+      length_m: prof.length_m,
+      effectiveGradient: prof.effectiveGradient,
+      elevationDifference_m: prof.elevationDifference_m,
+      highPoint_m: prof.highPoint.elevation_m,
+      lowPoint_m: prof.lowPoint.elevation_m,
+      directions,
+      warnings: prof.warnings,
+    };
+  });
+  const design = runways[0]!;
+  return {
+    name: site.name,
+    elevation_m: site.elevation_m,
+    pressureAltitude_m: site.elevation_m,
+    designTemperature_c,
+    designTemperatureSource: source,
+    ...(climate ? { climate } : {}),
+    standardTemperature_c: standardTemperatureC(site.elevation_m),
+    isaDeviation_c: air.isaDeviation_k,
+    density_kgm3: air.density_kgm3,
+    densityAltitude_m: air.densityAltitude_m,
+    runways,
+    designRunway: design.name,
+    designSlope: design.effectiveGradient,
+    warnings,
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// Per aircraft, per row
+
+interface Conditions {
+  readonly pressureAltitude_m: number;
+  readonly temperature_c: number;
+  readonly slope: number;
+}
+
+/** Memoised evaluations for one study run (pure: keyed by value). */
+class Evaluator {
+  private readonly takeoffCache = new Map<string, TakeoffResult>();
+  private readonly calibrations = new Map<string, TakeoffCalibration>();
+  constructor(readonly input: StudyInput, readonly site: SiteConditions) {}
+
+  get options(): StudyOptions {
+    return this.input.options;
+  }
+
+  calibration(a: AircraftProfile): TakeoffCalibration {
+    let c = this.calibrations.get(a.id);
+    if (!c) {
+      c = calibrateTakeoff({ aircraft: a });
+      this.calibrations.set(a.id, c);
+    }
+    return c;
+  }
+
+  thrustScale(a: AircraftProfile): number {
+    if (this.options.method !== 'calibrated') return 1;
+    const c = this.calibration(a);
+    return c.status === 'ok' ? c.factor : 1;
+  }
+
+  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, thrustScale = this.thrustScale(a)): TakeoffResult {
+    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${thrustScale}`;
+    let r = this.takeoffCache.get(key);
+    if (!r) {
+      r = analyseTakeoff({
+        aircraft: a, mass_kg, pressureAltitude_m: c.pressureAltitude_m, temperature_c: c.temperature_c,
+        slope: c.slope, headwind_mps: 0, surface: this.options.surface, thrustScale,
+      });
+      this.takeoffCache.set(key, r);
+    }
+    return r;
+  }
+
+  designConditions(): Conditions {
+    return { pressureAltitude_m: this.site.pressureAltitude_m, temperature_c: this.site.designTemperature_c, slope: this.site.designSlope };
+  }
+
+  landing(a: AircraftProfile, mass_kg: number, pressureAltitude_m: number) {
+    return analyseLanding({
+      aircraft: a, mass_kg, pressureAltitude_m,
+      ...(this.options.landingTemperature === 'design' ? { temperature_c: this.site.designTemperature_c } : {}),
+      slope: 0, headwind_mps: 0, surface: this.options.surface,
+    });
+  }
+}
+
+function takeoffComponents(t: TakeoffResult): TraceItem[] {
+  const out: TraceItem[] = [];
+  if (t.allEngines) {
+    out.push(
+      { label: 'All engines: ground run to VR', value: t.allEngines.groundRun_m, unit: 'm' },
+      { label: 'All engines: lift-off distance', value: t.allEngines.liftoff_m, unit: 'm' },
+      { label: 'All engines: distance to screen height', value: t.allEngines.toScreen_m, unit: 'm' },
+      { label: 'All engines: factored distance', value: t.allEngines.factored_m, unit: 'm' },
+      { label: 'Average-force estimate of the run to VLOF (cross-check)', value: t.allEngines.averageForce_m, unit: 'm' },
+    );
+  }
+  if (t.feasible && t.engineOut) {
+    out.push(
+      { label: 'Engine out: continued takeoff to screen height', value: t.engineOut.continued_m, unit: 'm' },
+      { label: 'Accelerate-stop distance', value: t.engineOut.accelerateStop_m, unit: 'm' },
+      { label: t.engineOut.v1Limited === 'balanced' ? 'Balanced field length' : `Field length (V1 limited by ${t.engineOut.v1Limited.toUpperCase()})`, value: t.engineOut.balancedField_m, unit: 'm' },
+    );
+  }
+  if (t.feasible) {
+    out.push(
+      { label: 'Takeoff run (declared-distance terms)', value: t.declared.takeoffRun_m, unit: 'm' },
+      { label: 'Takeoff distance (declared-distance terms)', value: t.declared.takeoffDistance_m, unit: 'm' },
+    );
+  }
+  return out;
+}
+
+function governingLabel(g: string): string {
+  switch (g) {
+    case 'all-engines-factored': return '115 % all-engines distance';
+    case 'balanced-field': return 'balanced field length';
+    case 'engine-out': return 'engine-out continued takeoff';
+    case 'accelerate-stop': return 'accelerate-stop distance';
+    case 'all-engines': return 'all-engines distance';
+    default: return g;
+  }
+}
+
+function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, AircraftClassificationSummary>): AircraftClassificationSummary {
+  const hit = cache.get(a.id);
+  if (hit) return hit;
+  // Aeroplane reference field length: the flight-manual value when the profile carries one, else the
+  // model at MTOW, sea level, ISA, still air, zero slope (ICAO Annex 14 definition).
+  let arfl = a.reference?.takeoff_m;
+  if (arfl === undefined) {
+    const t = ev.takeoff(a, a.mtow_kg, { pressureAltitude_m: 0, temperature_c: 15, slope: 0 }, 1);
+    arfl = t.feasible ? t.required_m : undefined;
+  }
+  const vref = referenceLandingSpeed({ aircraft: a });
+  const c = classifyAircraft(a, { arfl_m: arfl ?? 9999, vref_mps: vref });
+  const out: AircraftClassificationSummary = {
+    aerodromeCode: arfl === undefined ? `?${c.codeLetter ?? '?'}` : c.aerodromeCode ?? '—',
+    approachCategory: c.approachCategory,
+    designGroup: c.designGroup.group ?? '—',
+    runwayDesignCode: c.runwayDesignCode ?? '—',
+    arfl_m: arfl ?? 0,
+    vref_mps: vref,
+  };
+  cache.set(a.id, out);
+  return out;
+}
+
+function routeSummary(row: FleetRowInput, r: RouteResult | undefined, mass_kg: number): RouteSummary {
+  if (!r) {
+    return {
+      status: 'no-cruise-data', reason: 'The profile has no cruise data; the takeoff is sized at MTOW.',
+      stageLength_km: row.stageLength_km, payload_kg: row.payload_kg, payloadLeftBehind_kg: 0,
+      takeoffMass_kg: mass_kg, arrivalMass_kg: 0, tripFuel_kg: 0, reserveFuel_kg: 0,
+    };
+  }
+  return {
+    status: r.status,
+    ...(r.reason ? { reason: r.reason } : {}),
+    stageLength_km: row.stageLength_km,
+    payload_kg: row.payload_kg,
+    payloadLeftBehind_kg: r.payloadOffload_kg,
+    takeoffMass_kg: r.designTakeoffMass_kg,
+    arrivalMass_kg: r.loading.arrivalMass_kg,
+    tripFuel_kg: r.loading.tripFuel_kg,
+    reserveFuel_kg: r.loading.reserveFuel_kg + r.loading.contingencyFuel_kg,
+  };
+}
+
+function evaluateRow(
+  ev: Evaluator,
+  a: AircraftProfile,
+  row: FleetRowInput,
+  groupOperations: number,
+  classes: Map<string, AircraftClassificationSummary>,
+  path: string,
+): RowResult {
+  const opts = ev.options;
+  inRange(`${path}.annualOperations`, row.annualOperations, { min: 0, max: 1e6, unit: 'operations/year' });
+  inRange(`${path}.stageLength_km`, row.stageLength_km, { min: 1, max: 20000, unit: 'km' });
+  inRange(`${path}.payload_kg`, row.payload_kg, { min: 0, max: a.maxPayload_kg, unit: 'kg' });
+  const warnings: string[] = [];
+  const regularUse = groupOperations >= opts.regularUseThreshold;
+  const cls = classification(ev, a, classes);
+  const base = {
+    aircraft: a.id, aircraftName: a.name, group: a.group ?? a.id, annualOperations: row.annualOperations,
+    groupOperations, regularUse, classification: cls,
+  };
+
+  // 1. Design takeoff mass from the route.
+  let route: RouteResult | undefined;
+  let mass = a.mtow_kg;
+  if (a.cruise) {
+    route = designTakeoffMass({ aircraft: a, stageLength_m: row.stageLength_km * 1000, payload_kg: row.payload_kg, reserves: reservePolicyOf(opts.reserves) });
+    warnings.push(...route.warnings);
+    if (route.status === 'out-of-range') {
+      return cannotOperate(base, route, row, `Cannot fly the design stage of ${row.stageLength_km} km even with no payload: ${route.reason ?? 'beyond reach'}`, warnings);
+    }
+    mass = route.designTakeoffMass_kg;
+    if (route.status !== 'ok') warnings.push(`${route.reason ?? route.status}; sized at ${Math.round(mass)} kg with ${Math.round(route.payloadOffload_kg)} kg of payload left behind.`);
+  } else {
+    warnings.push('No cruise data: takeoff sized at MTOW.');
+  }
+  const routeSum = routeSummary(row, route, mass);
+
+  // 2. Takeoff at design conditions.
+  const cond = ev.designConditions();
+  const t = ev.takeoff(a, mass, cond);
+  warnings.push(...t.warnings);
+  if (!t.feasible) {
+    return cannotOperate(base, route, row, `Takeoff not possible at ${Math.round(mass)} kg at design conditions: ${t.message}`, warnings, mass, routeSum);
+  }
+  let takeoffRequired = t.required_m;
+  const summary: {
+    -readonly [K in keyof TakeoffSummary]: TakeoffSummary[K];
+  } = {
+    method: opts.method,
+    required_m: t.required_m,
+    governing: governingLabel(t.governing),
+    components: takeoffComponents(t),
+    ...(t.speeds.v1_mps === undefined ? {} : { v1_mps: t.speeds.v1_mps }),
+    vr_mps: t.speeds.vr_mps,
+    v2_mps: t.speeds.v2_mps,
+    climbGradient: t.climb.gradient,
+    climbMinimum: t.climb.minimum,
+    climbLimited: t.climb.limited,
+    ...(t.climb.maxMass_kg === undefined ? {} : { climbMaxMass_kg: t.climb.maxMass_kg }),
+    physics_m: t.required_m,
+    ...(t.empirical.torenbeek_m === undefined ? {} : { torenbeek_m: t.empirical.torenbeek_m }),
+    ...(t.empirical.roskam_m === undefined ? {} : { roskam_m: t.empirical.roskam_m }),
+  };
+  if (t.climb.limited) {
+    warnings.push(
+      `Climb-limited: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum; the greatest mass meeting it is ${t.climb.maxMass_kg === undefined ? 'below OEW' : Math.floor(t.climb.maxMass_kg) + ' kg'}. A longer runway cannot cure this.`,
+    );
+  }
+  const refSite = {
+    elevation_m: ev.site.elevation_m, referenceTemperature_c: ev.site.designTemperature_c,
+    effectiveGradient: ev.site.designSlope,
+    centrelineDifference_m: ev.site.runways[0]!.elevationDifference_m,
+    wet: opts.surface === 'wet',
+  };
+  if (a.reference?.takeoff_m !== undefined) {
+    const set = opts.method === 'reference-authority' ? 'authority' : 'icao';
+    const ref = referenceLengthAtSite({ aircraft: a, operation: 'takeoff', site: refSite, set });
+    if (ref.status === 'ok') {
+      summary.reference_m = ref.length_m;
+      if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
+        takeoffRequired = ref.length_m;
+        summary.required_m = ref.length_m;
+        summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections`;
+        warnings.push(...ref.warnings);
+        if (ref.specificStudyRequired) warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'}`);
+        warnings.push('Reference-length method: the reference length is at MTOW; the design mass from the route is not credited.');
+      }
+    }
+  } else if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
+    warnings.push('No reference takeoff length in the profile: the physics model is used for this aircraft.');
+  }
+  if (opts.method === 'calibrated') {
+    const c = ev.calibration(a);
+    if (c.status === 'ok') summary.calibrationFactor = c.factor;
+    else warnings.push(`Calibration not applied: ${c.reason}; the uncalibrated physics model is used.`);
+  }
+
+  // 3. Landing.
+  const landingMass = opts.landingMass === 'route' && route ? Math.min(a.mlw_kg, route.loading.arrivalMass_kg) : a.mlw_kg;
+  const l = ev.landing(a, landingMass, ev.site.pressureAltitude_m);
+  warnings.push(...l.warnings);
+  if (l.status !== 'ok') {
+    return cannotOperate(base, route, row, `Landing not possible at ${Math.round(landingMass)} kg: ${l.reason}`, warnings, mass, routeSum);
+  }
+  let landingRequired = l.required_m;
+  let landingSummary: LandingSummary = {
+    mass_kg: landingMass,
+    distance_m: l.distance_m,
+    required_m: l.required_m,
+    rule: l.requirement.rule,
+    factor: l.requirement.multiplier,
+    vref_mps: l.speeds.vref_mps,
+    components: [
+      { label: 'Approach from 50 ft', value: l.segments.approach_m, unit: 'm' },
+      { label: 'Flare', value: l.segments.flare_m, unit: 'm' },
+      { label: 'Free roll', value: l.segments.freeRoll_m, unit: 'm' },
+      { label: 'Braking', value: l.segments.braking_m, unit: 'm' },
+      { label: 'Landing distance (unfactored)', value: l.distance_m, unit: 'm' },
+    ],
+  };
+  if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && a.reference?.landing_m !== undefined) {
+    const ref = referenceLengthAtSite({ aircraft: a, operation: 'landing', site: refSite, set: opts.method === 'reference-authority' ? 'authority' : 'icao' });
+    if (ref.status === 'ok') {
+      landingRequired = ref.length_m;
+      landingSummary = { ...landingSummary, required_m: ref.length_m, rule: 'reference length + corrections' };
+    }
+  }
+
+  const req = requiredLength({ takeoff_m: takeoffRequired, landing_m: landingRequired });
+  const existing: ExistingRunwayCheck[] = [];
+  for (const rw of ev.site.runways) {
+    for (const d of rw.directions) {
+      existing.push(assessExistingRunway({
+        aircraft: a,
+        runway: rw.name,
+        direction: d,
+        pressureAltitude_m: ev.site.pressureAltitude_m,
+        temperature_c: ev.site.designTemperature_c,
+        landingTemperature_c: opts.landingTemperature === 'design' ? ev.site.designTemperature_c : undefined,
+        surface: opts.surface,
+        takeoffMass_kg: mass,
+        landingMass_kg: landingMass,
+        thrustScale: ev.thrustScale(a),
+        stageLength_m: row.stageLength_km * 1000,
+        payload_kg: row.payload_kg,
+        reserves: reservePolicyOf(opts.reserves),
+        passengerMass_kg: opts.passengerMass_kg,
+      }));
+    }
+  }
+  return {
+    ...base,
+    status: 'ok',
+    takeoffMass_kg: mass,
+    requiredTakeoff_m: takeoffRequired,
+    requiredLanding_m: landingRequired,
+    required_m: req.length_m,
+    governing: req.governing,
+    route: routeSum,
+    takeoff: summary,
+    landing: landingSummary,
+    existing,
+    warnings: dedupe(warnings),
+  };
+}
+
+function cannotOperate(
+  base: Omit<RowResult, 'status' | 'reason' | 'takeoffMass_kg' | 'requiredTakeoff_m' | 'requiredLanding_m' | 'required_m' | 'governing' | 'route' | 'existing' | 'warnings'>,
+  route: RouteResult | undefined,
+  row: FleetRowInput,
+  reason: string,
+  warnings: string[],
+  mass = route?.designTakeoffMass_kg ?? 0,
+  routeSum = routeSummary(row, route, mass),
+): RowResult {
+  return {
+    ...base,
+    status: 'cannot-operate',
+    reason,
+    takeoffMass_kg: mass,
+    requiredTakeoff_m: 0,
+    requiredLanding_m: 0,
+    required_m: 0,
+    governing: 'takeoff',
+    route: routeSum,
+    existing: [],
+    warnings: dedupe([reason, ...warnings]),
+  };
+}
+
+function dedupe(list: readonly string[]): string[] {
+  return [...new Set(list)];
+}
+
+// ---------------------------------------------------------------------------------------------
+// Scenario
+
+/** Share of annual operations whose requirement fits each candidate length. */
+export function operationsServed(rows: readonly RowResult[], increment_m: number): OperationsServedPoint[] {
+  const total = rows.reduce((s, r) => s + r.annualOperations, 0);
+  const ok = rows.filter((r) => r.status === 'ok');
+  if (ok.length === 0 || total === 0) return [];
+  const lo = Math.max(0, Math.floor(Math.min(...ok.map((r) => r.required_m)) / increment_m) * increment_m - increment_m);
+  const hi = roundUpToIncrement(Math.max(...ok.map((r) => r.required_m)), increment_m);
+  const step = Math.max(increment_m, Math.ceil((hi - lo) / increment_m / OPERATIONS_SERVED_MAX_POINTS) * increment_m);
+  const out: OperationsServedPoint[] = [];
+  for (let L = lo; L <= hi + 1e-9; L += step) {
+    const served = ok.filter((r) => r.required_m <= L + 1e-9).reduce((s, r) => s + r.annualOperations, 0);
+    out.push({ length_m: L, share: served / total });
+  }
+  if (out[out.length - 1]!.length_m < hi - 1e-9) {
+    const served = ok.reduce((s, r) => s + r.annualOperations, 0);
+    out.push({ length_m: hi, share: served / total });
+  }
+  return out;
+}
+
+/** The critical aircraft: regular use, able to operate, greatest requirement; ties by operations, then id. */
+export function criticalRow(rows: readonly RowResult[]): RowResult | undefined {
+  const eligible = rows.filter((r) => r.regularUse && r.status === 'ok');
+  return [...eligible].sort(
+    (x, y) => y.required_m - x.required_m || y.annualOperations - x.annualOperations || (x.aircraft < y.aircraft ? -1 : 1),
+  )[0];
+}
+
+// ---------------------------------------------------------------------------------------------
+// Whole study
+
+export function runStudy(input: StudyInput): StudyResult {
+  validateStudy(input);
+  const site = siteConditions(input);
+  const ev = new Evaluator(input, site);
+  const byId = new Map(input.aircraft.map((a) => [a.id, a]));
+  const classes = new Map<string, AircraftClassificationSummary>();
+  const opts = input.options;
+
+  const scenarios: ScenarioResult[] = input.scenarios.map((sc, i) => {
+    const groupOps = new Map<string, number>();
+    for (const row of sc.fleet) {
+      const a = byId.get(row.aircraft)!;
+      const g = a.group ?? a.id;
+      groupOps.set(g, (groupOps.get(g) ?? 0) + row.annualOperations);
+    }
+    const rows = sc.fleet.map((row, j) => {
+      const a = byId.get(row.aircraft)!;
+      return evaluateRow(ev, a, row, groupOps.get(a.group ?? a.id)!, classes, `scenarios[${i}].fleet[${j}]`);
+    });
+    const crit = criticalRow(rows);
+    const excluded = rows.filter((r) => r.status !== 'ok').map((r) => ({ aircraft: r.aircraft, reason: r.reason ?? 'cannot operate' }));
+    const warnings: string[] = [];
+    if (!crit) warnings.push('No aircraft in regular use can operate at this site: no recommendation.');
+    const irregularLonger = crit ? rows.filter((r) => !r.regularUse && r.status === 'ok' && r.required_m > crit.required_m) : [];
+    for (const r of irregularLonger) {
+      warnings.push(`${r.aircraftName} needs more (${Math.round(r.required_m)} m) but is below the regular-use threshold (${r.groupOperations} of ${opts.regularUseThreshold} operations).`);
+    }
+    return {
+      name: sc.name,
+      rows,
+      criticalAircraft: crit?.aircraft ?? null,
+      criticalAircraftName: crit?.aircraftName ?? null,
+      criticalRequired_m: crit?.required_m ?? null,
+      recommendedLength_m: crit ? roundUpToIncrement(crit.required_m, opts.roundingIncrement_m) : null,
+      governing: crit?.governing ?? null,
+      runwayDesignCode: crit?.classification.runwayDesignCode ?? null,
+      totalOperations: rows.reduce((s, r) => s + r.annualOperations, 0),
+      operationsServed: operationsServed(rows, opts.roundingIncrement_m),
+      excluded,
+      warnings,
+    };
+  });
+
+  const sensitivity = sensitivityCurves(ev, input, scenarios);
+  return {
+    methodVersion: STUDY_METHOD_VERSION,
+    name: input.name,
+    cautions: CAUTIONS,
+    options: opts,
+    site,
+    scenarios,
+    comparison: scenarios.map((s) => ({
+      scenario: s.name,
+      criticalAircraft: s.criticalAircraft,
+      criticalAircraftName: s.criticalAircraftName,
+      recommendedLength_m: s.recommendedLength_m,
+      governing: s.governing,
+      runwayDesignCode: s.runwayDesignCode,
+      regularUseAircraft: s.rows.filter((r) => r.regularUse).length,
+    })),
+    sensitivity,
+    warnings: site.warnings,
+  };
+}
+
+function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly ScenarioResult[]): SensitivityCurve[] {
+  const massBy = new Map<string, number>();
+  for (const s of scenarios) {
+    for (const r of s.rows) {
+      if (r.status !== 'ok') continue;
+      massBy.set(r.aircraft, Math.max(massBy.get(r.aircraft) ?? 0, r.takeoffMass_kg));
+    }
+  }
+  const site = ev.site;
+  const temps: number[] = [];
+  for (let dt = -SENSITIVITY_TEMPERATURE_SPAN_C; dt <= SENSITIVITY_TEMPERATURE_SPAN_C + 1e-9; dt += SENSITIVITY_TEMPERATURE_STEP_C) {
+    temps.push(Math.max(-60, Math.min(60, site.designTemperature_c + dt)));
+  }
+  const topElevation = Math.min(4500, Math.max(site.elevation_m, 0) + SENSITIVITY_ELEVATION_ABOVE_M);
+  const elevations = Array.from({ length: SENSITIVITY_ELEVATION_STEPS + 1 }, (_, k) => (topElevation * k) / SENSITIVITY_ELEVATION_STEPS);
+  const out: SensitivityCurve[] = [];
+  for (const a of input.aircraft) {
+    const mass = massBy.get(a.id);
+    if (mass === undefined) continue;
+    const landingAt = (elev: number) => {
+      const l = ev.landing(a, a.mlw_kg, elev);
+      return l.status === 'ok' ? l.required_m : null;
+    };
+    const req = (elev: number, temp: number, landing: number | null): number | null => {
+      const t = ev.takeoff(a, mass, { pressureAltitude_m: elev, temperature_c: temp, slope: site.designSlope });
+      if (!t.feasible || landing === null) return null;
+      return Math.max(t.required_m, landing);
+    };
+    const landingHere = landingAt(site.pressureAltitude_m);
+    out.push({
+      aircraft: a.id,
+      aircraftName: a.name,
+      mass_kg: mass,
+      temperature: temps.map((temperature_c) => ({ temperature_c, required_m: req(site.pressureAltitude_m, temperature_c, landingHere) })),
+      elevation: elevations.map((elevation_m) => {
+        // Same deviation from ISA as the design day at the site.
+        const temp = Math.max(-60, Math.min(60, standardTemperatureC(elevation_m) + site.isaDeviation_c));
+        return { elevation_m, required_m: req(elevation_m, temp, landingAt(elevation_m)) };
+      }),
+    });
+  }
+  return out;
+}
+
+/** Study-level checks the file schema also makes; repeated here so core never trusts its caller. */
+export function validateStudy(input: StudyInput): void {
+  check(typeof input.name === 'string' && input.name.trim().length > 0, 'name', input.name, 'a non-empty study name');
+  check(input.aircraft.length > 0, 'aircraft', input.aircraft.length, 'at least one aircraft');
+  check(input.scenarios.length > 0, 'scenarios', input.scenarios.length, 'at least one scenario');
+  const ids = new Set<string>();
+  input.aircraft.forEach((a, i) => {
+    validateAircraft(a, `aircraft[${i}]`);
+    check(!ids.has(a.id), `aircraft[${i}].id`, a.id, 'an id not used by another aircraft');
+    ids.add(a.id);
+  });
+  input.scenarios.forEach((s, i) => {
+    check(s.fleet.length > 0, `scenarios[${i}].fleet`, s.fleet.length, 'at least one fleet row');
+    s.fleet.forEach((r, j) => check(ids.has(r.aircraft), `scenarios[${i}].fleet[${j}].aircraft`, r.aircraft, `one of the study's aircraft ids (${[...ids].join(', ')})`));
+  });
+  const o = input.options;
+  inRange('options.regularUseThreshold', o.regularUseThreshold, { min: 1, max: 100000, unit: 'operations/year' });
+  inRange('options.roundingIncrement_m', o.roundingIncrement_m, { min: 1, max: 500, unit: 'm' });
+  inRange('options.passengerMass_kg', o.passengerMass_kg, { min: 50, max: 200, unit: 'kg' });
+}

@@ -1,0 +1,1 @@
+ALTER TABLE `studies` ADD `landing_mass` text DEFAULT 'mlw' NOT NULL;

@@ -1,0 +1,38 @@
+/**
+ * Results as CSV: one line per fleet row of every scenario, in the study's display units; the unit of
+ * each column is in its header; the first line is the caution, as a '#' comment. Same result, same bytes.
+ */
+import { stringify } from 'csv-stringify/sync';
+import { CAUTION_TEXT, type UnitSystem } from '../../core/index.js';
+import type { StudyOutput } from '../study.js';
+import { unitOf } from '../../templates/format.js';
+
+const round = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : '');
+
+export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
+  const len = unitOf('length', units);
+  const mass = unitOf('mass', units);
+  const L = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(len.from(v), 0));
+  const M = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(mass.from(v), 0));
+  const header = [
+    'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status',
+    `takeoff_mass_${mass.symbol}`, `required_takeoff_${len.symbol}`, `required_landing_${len.symbol}`, `required_${len.symbol}`,
+    'governing_side', 'takeoff_governing_case', 'runway_design_code', 'aerodrome_code', 'critical',
+    `recommended_length_${len.symbol}`, 'warnings',
+  ];
+  const rows: string[][] = [];
+  for (const s of out.scenarios) {
+    for (const r of s.rows) {
+      const ok = r.status === 'ok';
+      const critical = s.criticalAircraft === r.aircraft;
+      rows.push([
+        s.name, r.aircraft, r.aircraftName, String(r.annualOperations), String(r.groupOperations), r.regularUse ? 'yes' : 'no', r.status,
+        M(r.takeoffMass_kg), ok ? L(r.requiredTakeoff_m) : '', ok ? L(r.requiredLanding_m) : '', ok ? L(r.required_m) : '',
+        ok ? r.governing : '', r.takeoff?.governing ?? '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
+        critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '', r.warnings.join(' | '),
+      ]);
+    }
+  }
+  // The caution travels with the numbers: a leading comment line (csv-parse reads it with `comment: '#'`).
+  return `# ${CAUTION_TEXT}\n` + stringify([header, ...rows], { record_delimiter: '\n' });
+}

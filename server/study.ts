@@ -1,0 +1,53 @@
+/**
+ * The study at the edge: validate a study document, run the engine, and attach the SHA-256 digest of
+ * the canonical input so a report or a file can be traced back to exactly what produced it.
+ */
+import { createHash } from 'node:crypto';
+import { runStudy, type StudyInput, type StudyResult } from '../core/index.js';
+import { formatPath, parseAll, type Problem } from './schemas/common.js';
+import { studyCrossProblems, studyFileSchema, studyInputOf } from './schemas/study.js';
+
+export interface StudyOutput extends StudyResult {
+  /** SHA-256 (hex) of the canonical JSON of the study input. */
+  readonly inputDigest: string;
+}
+
+/**
+ * Canonical JSON: object keys sorted, no whitespace, numbers as JavaScript prints them, undefined
+ * members dropped. Equal inputs give equal text whatever the key order of the file.
+ */
+export function canonicalJson(value: unknown): string {
+  if (value === null || typeof value !== 'object') {
+    if (typeof value === 'number' && !Number.isFinite(value)) throw new Error('canonicalJson: non-finite number');
+    return JSON.stringify(value) ?? 'null';
+  }
+  if (Array.isArray(value)) return `[${value.map((v) => (v === undefined ? 'null' : canonicalJson(v))).join(',')}]`;
+  const keys = Object.keys(value).filter((k) => (value as Record<string, unknown>)[k] !== undefined).sort();
+  return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson((value as Record<string, unknown>)[k])}`).join(',')}}`;
+}
+
+export function sha256Hex(text: string): string {
+  return createHash('sha256').update(text, 'utf8').digest('hex');
+}
+
+/** Digest of a study input (the identity of a study for reports and saved results). */
+export function inputDigest(input: StudyInput): string {
+  return sha256Hex(canonicalJson(input));
+}
+
+export function studyOutput(input: StudyInput): StudyOutput {
+  const result = runStudy(input);
+  return { ...result, inputDigest: inputDigest(input) };
+}
+
+/** Validates a parsed JSON study document; returns the core input or every problem found. */
+export function parseStudyDocument(doc: unknown): { ok: true; input: StudyInput } | { ok: false; problems: Problem[] } {
+  const r = parseAll(studyFileSchema, doc);
+  if (r.ok) return { ok: true, input: studyInputOf(r.value) };
+  // zod skips the study-level refinement when fields fail; list cross-reference problems anyway.
+  const seen = new Set(r.problems.map((p) => p.path));
+  const extra = studyCrossProblems(doc)
+    .map((p) => ({ path: formatPath(p.path), field: String([...p.path].reverse().find((k) => typeof k === 'string') ?? '(root)'), value: p.value, message: p.message }))
+    .filter((p) => !seen.has(p.path));
+  return { ok: false, problems: [...r.problems, ...extra] };
+}

@@ -1,0 +1,108 @@
+/** Command line: exit codes, problem listings, formats and byte-identical output for the same input. */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { runCli, type CliIo } from '../../server/cli.js';
+
+const root = resolve(import.meta.dirname, '..', '..');
+const demoText = readFileSync(join(root, 'examples/demo-study.json'), 'utf8');
+const minimalText = readFileSync(join(root, 'examples/minimal-study.json'), 'utf8');
+
+function fakeIo(files: Record<string, string>) {
+  const out: { stdout: string; stderr: string; written: Record<string, string | Uint8Array> } = { stdout: '', stderr: '', written: {} };
+  const io: CliIo = {
+    readFile: (p) => {
+      const f = files[p];
+      if (f === undefined) throw Object.assign(new Error('ENOENT'), { code: 'ENOENT' });
+      return f;
+    },
+    writeFile: (p, d) => { out.written[p] = d; },
+    stdout: (t) => { out.stdout += typeof t === 'string' ? t : Buffer.from(t).toString('latin1'); },
+    stderr: (t) => { out.stderr += t; },
+  };
+  return { io, out };
+}
+
+const mutate = (f: (doc: any) => void): string => {
+  const doc = JSON.parse(minimalText);
+  f(doc);
+  return JSON.stringify(doc);
+};
+
+describe('study CLI', () => {
+  it('writes the JSON result with the required keys (exit 0)', async () => {
+    const { io, out } = fakeIo({ 'm.json': minimalText });
+    expect(await runCli(['m.json'], io)).toBe(0);
+    const r = JSON.parse(out.stdout);
+    for (const k of ['methodVersion', 'inputDigest', 'cautions', 'site', 'scenarios']) expect(r).toHaveProperty(k);
+    expect(r.inputDigest).toMatch(/^[0-9a-f]{64}$/);
+    expect(r.site.densityAltitude_m).toBeGreaterThan(0);
+    const s = r.scenarios[0];
+    for (const k of ['name', 'criticalAircraft', 'recommendedLength_m', 'governing', 'operationsServed', 'rows']) expect(s).toHaveProperty(k);
+    for (const k of ['aircraft', 'annualOperations', 'regularUse', 'takeoffMass_kg', 'requiredTakeoff_m', 'requiredLanding_m', 'required_m', 'governing', 'warnings']) expect(s.rows[0]).toHaveProperty(k);
+  });
+
+  it('gives the same bytes for the same input, whatever the key order', async () => {
+    const a = fakeIo({ 'd.json': demoText });
+    const reordered = JSON.stringify(Object.fromEntries(Object.entries(JSON.parse(demoText)).reverse()));
+    const b = fakeIo({ 'd.json': reordered });
+    expect(await runCli(['d.json', '--format', 'csv'], a.io)).toBe(0);
+    expect(await runCli(['d.json', '--format', 'csv'], b.io)).toBe(0);
+    expect(a.out.stdout).toBe(b.out.stdout);
+    const j1 = fakeIo({ 'd.json': demoText });
+    const j2 = fakeIo({ 'd.json': reordered });
+    await runCli(['d.json'], j1.io);
+    await runCli(['d.json'], j2.io);
+    expect(JSON.parse(j1.out.stdout).inputDigest).toBe(JSON.parse(j2.out.stdout).inputDigest);
+  });
+
+  it('writes CSV with units in the headers and the caution first', async () => {
+    const { io, out } = fakeIo({ 'm.json': minimalText });
+    expect(await runCli(['m.json', '--format', 'csv', '--units', 'us', '--out', 'r.csv'], io)).toBe(0);
+    const csv = String(out.written['r.csv']);
+    expect(csv.split('\n')[0]).toMatch(/^# .*preliminary planning estimates/);
+    expect(csv).toContain('required_ft');
+    expect(csv).toContain('takeoff_mass_lb');
+  });
+
+  it('exits 2 on malformed JSON with the parser message', async () => {
+    const { io, out } = fakeIo({ 'bad.json': '{"format": "runwright-study", ' });
+    expect(await runCli(['bad.json'], io)).toBe(2);
+    expect(out.stderr).toMatch(/bad\.json: not valid JSON/);
+  });
+
+  it('exits 2 listing every problem by path, field, value and allowed range', async () => {
+    const text = mutate((d) => {
+      d.site.elevation_m = 9000;
+      d.aircraft[0].mtow_kg = 'heavy';
+      d.scenarios[0].fleet[0].aircraft = 'no-such-plane';
+    });
+    const { io, out } = fakeIo({ 's.json': text });
+    expect(await runCli(['s.json'], io)).toBe(2);
+    expect(out.stderr).toMatch(/3 problems/);
+    expect(out.stderr).toContain('site.elevation_m: 9000 is out of range; allowed -400 to 4500 m [field elevation_m, value 9000]');
+    expect(out.stderr).toContain('aircraft[0].mtow_kg: "heavy" is not a number; allowed 300 to 600000 kg');
+    expect(out.stderr).toMatch(/scenarios\[0\]\.fleet\[0\]\.aircraft: unknown aircraft "no-such-plane"/);
+  });
+
+  it('exits 2 on a missing file and on bad options', async () => {
+    const { io, out } = fakeIo({});
+    expect(await runCli(['nope.json'], io)).toBe(2);
+    expect(out.stderr).toMatch(/cannot read the file \(ENOENT\)/);
+    expect(await runCli(['x.json', '--format', 'xml'], io)).toBe(2);
+    expect(out.stderr).toMatch(/--format: "xml" is not allowed; one of json, csv, pdf/);
+    expect(await runCli([], io)).toBe(2);
+  });
+
+  it('runs as a real process: exit 0 and exit 2 (npm run study)', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'rw-cli-'));
+    const ok = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli.ts', 'examples/minimal-study.json', '--out', join(dir, 'r.json')], { cwd: root, encoding: 'utf8' });
+    expect(ok.status).toBe(0);
+    expect(JSON.parse(readFileSync(join(dir, 'r.json'), 'utf8')).scenarios[0].criticalAircraft).toBe('plover-ct19');
+    const bad = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli.ts', 'package.json'], { cwd: root, encoding: 'utf8' });
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/format: must be "runwright-study"/);
+  });
+});

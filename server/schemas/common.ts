@@ -8,6 +8,8 @@ import { z } from 'zod';
 export function num(min: number, max: number, unit: string) {
   const u = unit ? ` ${unit}` : '';
   const allowed = `allowed ${min} to ${max}${u}`;
+  const outOfRange = (iss: { input?: unknown }) => `${String(iss.input)} is out of range; ${allowed}`;
+  // zod 4 numbers refuse NaN and ±Infinity; min/max appear in the exported JSON Schema.
   return z
     .number({
       error: (iss) =>
@@ -17,8 +19,9 @@ export function num(min: number, max: number, unit: string) {
             ? `${String(iss.input)} is not a finite number; ${allowed}`
             : `${JSON.stringify(iss.input)} is not a number; ${allowed}`,
     })
-    .refine(Number.isFinite, { error: `not a finite number; ${allowed}` })
-    .refine((v) => v >= min && v <= max, { error: (iss) => `${String(iss.input)} is out of range; ${allowed}` });
+    .min(min, { error: outOfRange })
+    .max(max, { error: outOfRange })
+    .meta({ description: `${allowed}` });
 }
 
 /** A whole number in [min, max]. */

@@ -19,3 +19,6 @@ export * from './study/types.js';
 export * from './report/chart.js';
 export * from './study/run.js';
 export * from './report/charts.js';
+export * from './calibrate.js';
+export * from './runwayCheck.js';
+export * from './report/siteCharts.js';

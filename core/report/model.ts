@@ -39,7 +39,7 @@ export type ValueKind = QuantityKind | 'slopePct' | 'percent' | 'lengthBoth';
  * formatter has no kind for; the renderer prints the SI value with that unit.
  */
 export type Cell =
-  | { readonly text: string; readonly bold?: boolean }
+  | { readonly text: string; readonly bold?: boolean; readonly mono?: boolean }
   | { readonly si: number | null | undefined; readonly kind: ValueKind; readonly listing?: boolean; readonly digits?: number }
   | { readonly si: number; readonly unit: string }
   /** Needed / available pair of the same kind, shown "a / b". */
@@ -201,14 +201,14 @@ export function buildAppendixModel(args: AppendixModelInput): AppendixModel {
   top('purpose', 'Purpose and cautions', purposeBlocks(result));
 
   // 2. Site and design conditions
-  top('site', 'Site and design conditions', siteBlocks(input, result), true);
+  top('site', 'Site and design conditions', siteBlocks(input, result));
 
   // 3. Fleet scenarios
-  top('fleet', 'Fleet scenarios', fleetBlocks(input, result, byId), true);
+  top('fleet', 'Fleet scenarios', fleetBlocks(input, result, byId));
 
   // 4. Method
   const entries = METHOD_ENTRIES;
-  top('method', 'Method', methodIntroBlocks(result), true);
+  top('method', 'Method', methodIntroBlocks(result));
   entries.forEach((e, i) => {
     const blocks: Block[] = [{ type: 'paragraph', text: e.summary }, { type: 'formulas', lines: e.formulas }];
     if (e.symbols) blocks.push({ type: 'paragraph', text: e.symbols, style: 'note' });
@@ -224,20 +224,20 @@ export function buildAppendixModel(args: AppendixModelInput): AppendixModel {
   top('results', 'Results per scenario', [
     { type: 'paragraph', text: 'For each scenario: every fleet row with its design takeoff mass, takeoff and landing requirements, the governing case, the required length and the classification; then the components of each requirement. The critical aircraft is the regular-use aircraft with the greatest required length; the recommended length is its requirement rounded up to the planning increment.' },
   ], true);
-  result.scenarios.forEach((s, i) => sub(`results-${i + 1}`, `Scenario: ${s.name}`, scenarioBlocks(s, result, input, byId), i + 1, i > 0));
+  result.scenarios.forEach((s, i) => sub(`results-${i + 1}`, `Scenario: ${s.name}`, scenarioBlocks(s, byId), i + 1, i > 0));
 
   // 6. Comparison and recommendation
-  top('comparison', 'Scenario comparison and recommendation', comparisonBlocks(result), true);
+  top('comparison', 'Scenario comparison and recommendation', comparisonBlocks(result));
 
   // 7. Existing runway
-  top('existing', 'Existing runway assessment', existingIntroBlocks(result), true);
+  top('existing', 'Existing runway assessment', existingIntroBlocks(result));
   result.scenarios.forEach((s, i) => sub(`existing-${i + 1}`, `Existing runway: ${s.name}`, existingBlocks(s, result), i + 1));
 
   // 8. Charts
   top('charts', 'Charts', chartBlocks(args.charts), true);
 
   // 9. Assumptions and warnings
-  top('assumptions', 'Assumptions and warnings', assumptionBlocks(input, result), true);
+  top('assumptions', 'Assumptions and warnings', assumptionBlocks(result));
 
   // 10. Input listing
   top('inputs', 'Input listing and digest', listingBlocks(args), true);
@@ -390,7 +390,7 @@ function takeoffCaseText(r: RowResult): string {
   return r.takeoff?.climbLimited ? `${g}; climb-limited` : g;
 }
 
-function scenarioBlocks(s: ScenarioResult, result: StudyResult, input: StudyInput, byId: ReadonlyMap<string, AircraftProfile>): Block[] {
+function scenarioBlocks(s: ScenarioResult, byId: ReadonlyMap<string, AircraftProfile>): Block[] {
   const blocks: Block[] = [];
   blocks.push({ type: 'facts', items: [
     { label: 'Critical aircraft', value: t(s.criticalAircraftName ?? 'none (no regular-use aircraft can operate)', true) },
@@ -428,62 +428,94 @@ function scenarioBlocks(s: ScenarioResult, result: StudyResult, input: StudyInpu
     blocks.push({ type: 'paragraph', text: `Not eligible as critical aircraft: ${s.excluded.map((e) => `${byId.get(e.aircraft)?.name ?? e.aircraft} (${e.reason})`).join('; ')}.`, style: 'note' });
   }
 
-  // Components per aircraft
-  const rows: Row[] = [];
-  for (const r of s.rows) {
-    rows.push({ group: `${r.aircraftName} (${r.annualOperations.toLocaleString('en-US')} operations/year${r.regularUse ? ', regular use' : ''})` });
-    const rt = r.route;
-    rows.push(row(t('Design stage length'), q(rt.stageLength_km * 1000, 'distance')));
-    rows.push(row(t('Route status'), t(rt.reason ? `${rt.status}: ${rt.reason}` : rt.status)));
-    rows.push(row(t('Design takeoff mass'), q(r.takeoffMass_kg, 'mass')));
-    rows.push(row(t('Payload requested'), q(rt.payload_kg, 'mass')));
-    if (rt.payloadLeftBehind_kg > 0) rows.push(row(t('Payload left behind'), q(rt.payloadLeftBehind_kg, 'mass')));
-    rows.push(row(t('Trip fuel'), q(rt.tripFuel_kg, 'mass')));
-    rows.push(row(t('Reserve fuel'), q(rt.reserveFuel_kg, 'mass')));
-    rows.push(row(t('Arrival (landing) mass'), q(rt.arrivalMass_kg, 'mass')));
-    if (r.status !== 'ok') {
-      rows.push(row(t('Finding'), t(r.reason ?? 'cannot operate')));
-      continue;
-    }
-    const to = r.takeoff;
-    if (to) {
-      rows.push(row(t('Takeoff requirement'), q(to.required_m, 'length')));
-      rows.push(row(t('Takeoff governing case'), t(governingLabel(to.governing))));
-      for (const c of to.components) rows.push(row(t(c.label), traceCell(c)));
-      if (to.v1_mps !== undefined) rows.push(row(t('V1 (true airspeed)'), q(to.v1_mps, 'speed')));
-      if (to.vr_mps !== undefined) rows.push(row(t('VR (true airspeed)'), q(to.vr_mps, 'speed')));
-      if (to.v2_mps !== undefined) rows.push(row(t('V2 (true airspeed)'), q(to.v2_mps, 'speed')));
-      if (to.climbGradient !== undefined) rows.push(row(t('Engine-out climb gradient at V2'), q(to.climbGradient, 'slopePct')));
-      if (to.climbMinimum !== undefined) rows.push(row(t('Minimum climb gradient'), q(to.climbMinimum, 'slopePct', 1)));
-      if (to.climbLimited) {
-        rows.push(row(t('Climb limit', true), t('CLIMB-LIMITED: the climb gradient is below the minimum; a longer runway cannot cure it', true)));
-        if (to.climbMaxMass_kg !== undefined) rows.push(row(t('Greatest mass meeting the climb minimum'), q(to.climbMaxMass_kg, 'mass')));
-      }
-      if (to.physics_m !== undefined && to.method !== 'physics') rows.push(row(t('Performance model (beside)'), q(to.physics_m, 'length')));
-      if (to.reference_m !== undefined) rows.push(row(t('Reference length with corrections'), q(to.reference_m, 'length')));
-      if (to.calibrationFactor !== undefined) rows.push(row(t('Calibration factor'), q(to.calibrationFactor, 'ratio')));
-      if (to.torenbeek_m !== undefined) rows.push(row(t('Torenbeek balanced field length (indicative)'), q(to.torenbeek_m, 'length')));
-      if (to.roskam_m !== undefined) rows.push(row(t('Roskam takeoff length (indicative)'), q(to.roskam_m, 'length')));
-    }
-    const ld = r.landing;
-    if (ld) {
-      rows.push(row(t('Landing mass'), q(ld.mass_kg, 'mass')));
-      for (const c of ld.components) rows.push(row(t(`Landing: ${c.label}`), traceCell(c)));
-      rows.push(row(t(`Landing requirement (${ld.rule}, factor ${ld.factor.toFixed(3)})`), q(ld.required_m, 'length')));
-      rows.push(row(t('VREF (true airspeed)'), q(ld.vref_mps, 'speed')));
-    }
-    rows.push(row(t('Required length', true), q(r.required_m, 'length')));
-    const c = r.classification;
-    rows.push(row(t('Classification'), t(`ICAO ${c.aerodromeCode}, approach category ${c.approachCategory}, design group ${c.designGroup}`)));
-    rows.push(row(t('Aeroplane reference field length'), q(c.arfl_m, 'length')));
+  // Components of each requirement: one column per aircraft, in chunks that fit the page width.
+  for (let i = 0; i < s.rows.length; i += COMPONENT_COLUMNS) {
+    const chunk = s.rows.slice(i, i + COMPONENT_COLUMNS);
+    const part = s.rows.length > COMPONENT_COLUMNS ? ` (aircraft ${i + 1}-${i + chunk.length} of ${s.rows.length})` : '';
+    blocks.push({
+      type: 'table', caption: `Components of each requirement: ${s.name}${part}`,
+      columns: [{ title: 'Item', width: 2.5 }, ...chunk.map((r): Column => ({ title: r.aircraftName, align: 'right', width: 1 }))],
+      rows: componentRows(chunk),
+      note: 'Speeds are true airspeeds at the site. Takeoff distances are at the design takeoff mass; landing at the landing mass shown.',
+    });
   }
-  blocks.push({
-    type: 'table', caption: `Components of each requirement: ${s.name}`,
-    columns: [{ title: 'Item', width: 2.2 }, { title: 'Value', width: 1.6, align: 'right' }],
-    rows,
-  });
-  void input;
   return blocks;
+}
+
+/** Aircraft per components table. */
+const COMPONENT_COLUMNS = 6;
+
+/** A line of the components table: a label and, per aircraft, a value (undefined = not applicable). */
+interface ComponentLine { readonly label: string; readonly value: (r: RowResult) => Cell | undefined; readonly bold?: boolean }
+
+function componentRows(rows: readonly RowResult[]): Row[] {
+  const out: Row[] = [];
+  const section = (title: string, lines: readonly ComponentLine[]): void => {
+    const used = lines.filter((l) => rows.some((r) => l.value(r) !== undefined));
+    if (used.length === 0) return;
+    out.push({ group: title });
+    for (const l of used) out.push(row(t(l.label, l.bold ?? false), ...rows.map((r) => l.value(r) ?? t('—'))));
+  };
+  const ok = (r: RowResult): boolean => r.status === 'ok';
+  const labels = (get: (r: RowResult) => readonly TraceItem[] | undefined): string[] => {
+    const seen: string[] = [];
+    for (const r of rows) for (const c of get(r) ?? []) if (!seen.includes(c.label)) seen.push(c.label);
+    return seen;
+  };
+  const trace = (get: (r: RowResult) => readonly TraceItem[] | undefined, label: string) => (r: RowResult): Cell | undefined => {
+    const c = get(r)?.find((x) => x.label === label);
+    return c ? traceCell(c) : undefined;
+  };
+  const takeoffTrace = (r: RowResult) => (ok(r) ? r.takeoff?.components : undefined);
+  const landingTrace = (r: RowResult) => (ok(r) ? r.landing?.components : undefined);
+
+  section('Design mass from the route', [
+    { label: 'Annual operations', value: (r) => q(r.annualOperations, 'count') },
+    { label: 'Regular use', value: (r) => t(yesNo(r.regularUse)) },
+    { label: 'Design stage length', value: (r) => q(r.route.stageLength_km * 1000, 'distance') },
+    { label: 'Payload requested', value: (r) => q(r.route.payload_kg, 'mass') },
+    { label: 'Route status', value: (r) => t(r.route.status) },
+    { label: 'Payload left behind', value: (r) => (r.route.payloadLeftBehind_kg > 0 ? q(r.route.payloadLeftBehind_kg, 'mass') : undefined) },
+    { label: 'Trip fuel', value: (r) => q(r.route.tripFuel_kg, 'mass') },
+    { label: 'Reserve fuel', value: (r) => q(r.route.reserveFuel_kg, 'mass') },
+    { label: 'Design takeoff mass', value: (r) => q(r.takeoffMass_kg, 'mass'), bold: true },
+    { label: 'Arrival mass', value: (r) => q(r.route.arrivalMass_kg, 'mass') },
+    { label: 'Cannot operate here', value: (r) => (ok(r) ? undefined : t(r.reason ?? 'cannot operate', true)) },
+  ]);
+  section('Takeoff', [
+    ...labels(takeoffTrace).map((label): ComponentLine => ({ label, value: trace(takeoffTrace, label) })),
+    { label: 'V1', value: (r) => (ok(r) && r.takeoff?.v1_mps !== undefined ? q(r.takeoff.v1_mps, 'speed') : undefined) },
+    { label: 'VR', value: (r) => (ok(r) && r.takeoff?.vr_mps !== undefined ? q(r.takeoff.vr_mps, 'speed') : undefined) },
+    { label: 'V2', value: (r) => (ok(r) && r.takeoff?.v2_mps !== undefined ? q(r.takeoff.v2_mps, 'speed') : undefined) },
+    { label: 'Climb gradient at V2 (engine out for twins)', value: (r) => (ok(r) && r.takeoff?.climbGradient !== undefined ? q(r.takeoff.climbGradient, 'slopePct') : undefined) },
+    { label: 'Minimum climb gradient', value: (r) => (ok(r) && r.takeoff?.climbMinimum !== undefined ? q(r.takeoff.climbMinimum, 'slopePct', 1) : undefined) },
+    { label: 'Climb-limited', value: (r) => (ok(r) && r.takeoff ? t(r.takeoff.climbLimited ? 'CLIMB-LIMITED' : 'no', r.takeoff.climbLimited) : undefined) },
+    { label: 'Greatest mass meeting the climb minimum', value: (r) => (ok(r) && r.takeoff?.climbLimited && r.takeoff.climbMaxMass_kg !== undefined ? q(r.takeoff.climbMaxMass_kg, 'mass') : undefined) },
+    { label: 'Performance model (shown beside)', value: (r) => (ok(r) && r.takeoff && r.takeoff.method !== 'physics' && r.takeoff.physics_m !== undefined ? q(r.takeoff.physics_m, 'length') : undefined) },
+    { label: 'Reference length with corrections', value: (r) => (ok(r) && r.takeoff?.reference_m !== undefined ? q(r.takeoff.reference_m, 'length') : undefined) },
+    { label: 'Calibration factor', value: (r) => (ok(r) && r.takeoff?.calibrationFactor !== undefined ? q(r.takeoff.calibrationFactor, 'ratio') : undefined) },
+    { label: 'Torenbeek balanced field length (indicative)', value: (r) => (ok(r) && r.takeoff?.torenbeek_m !== undefined ? q(r.takeoff.torenbeek_m, 'length') : undefined) },
+    { label: 'Roskam takeoff length (indicative)', value: (r) => (ok(r) && r.takeoff?.roskam_m !== undefined ? q(r.takeoff.roskam_m, 'length') : undefined) },
+    { label: 'Takeoff governing case', value: (r) => (ok(r) && r.takeoff ? t(governingLabel(r.takeoff.governing)) : undefined) },
+    { label: 'Takeoff requirement', value: (r) => (ok(r) && r.takeoff ? q(r.takeoff.required_m, 'length') : undefined), bold: true },
+  ]);
+  section('Landing', [
+    { label: 'Landing mass', value: (r) => (ok(r) && r.landing ? q(r.landing.mass_kg, 'mass') : undefined) },
+    { label: 'VREF', value: (r) => (ok(r) && r.landing ? q(r.landing.vref_mps, 'speed') : undefined) },
+    ...labels(landingTrace).map((label): ComponentLine => ({ label, value: trace(landingTrace, label) })),
+    { label: 'Operating rule', value: (r) => (ok(r) && r.landing ? t(r.landing.rule) : undefined) },
+    { label: 'Factor on the landing distance', value: (r) => (ok(r) && r.landing ? q(r.landing.factor, 'ratio') : undefined) },
+    { label: 'Landing requirement', value: (r) => (ok(r) && r.landing ? q(r.landing.required_m, 'length') : undefined), bold: true },
+  ]);
+  section('Requirement and classification', [
+    { label: 'Governing', value: (r) => (ok(r) ? t(r.governing) : undefined) },
+    { label: 'Required length', value: (r) => (ok(r) ? q(r.required_m, 'length') : undefined), bold: true },
+    { label: 'ICAO aerodrome reference code', value: (r) => t(r.classification.aerodromeCode) },
+    { label: 'Aeroplane reference field length', value: (r) => q(r.classification.arfl_m, 'length') },
+    { label: 'Approach category (VREF at MLW)', value: (r) => t(r.classification.approachCategory) },
+    { label: 'Design group', value: (r) => t(r.classification.designGroup) },
+  ]);
+  return out;
 }
 
 function comparisonBlocks(result: StudyResult): Block[] {
@@ -575,7 +607,7 @@ function chartBlocks(charts: readonly ChartModel[]): Block[] {
   ];
 }
 
-function assumptionBlocks(input: StudyInput, result: StudyResult): Block[] {
+function assumptionBlocks(result: StudyResult): Block[] {
   const o = result.options;
   const assumptions = [
     `Design conditions: ${result.site.name} at the design temperature; pressure altitude equal to the aerodrome elevation; dry air.`,
@@ -590,26 +622,44 @@ function assumptionBlocks(input: StudyInput, result: StudyResult): Block[] {
     'Aircraft performance profiles are planning profiles; where the manufacturer\'s planning data exist, they take precedence.',
   ];
   const warnings: string[] = [];
+  const seen = new Set<string>();
   const add = (prefix: string, ws: readonly string[]): void => {
     for (const w of ws) {
-      const line = prefix ? `${prefix}: ${w}` : w;
-      if (!warnings.includes(line)) warnings.push(line);
+      if (seen.has(w)) continue;
+      seen.add(w);
+      warnings.push(prefix ? `${prefix}: ${w}` : w);
     }
   };
   add('', result.warnings);
   add('Site', result.site.warnings);
   for (const r of result.site.runways) add(`Runway ${r.name}`, r.warnings);
+  for (const s of result.scenarios) add(s.name, s.warnings);
+  // Aircraft warnings: one line per aircraft and warning, naming the scenarios where it arose.
+  const byAircraft = new Map<string, { name: string; scenarios: string[] }>();
+  const climb: string[] = [];
   for (const s of result.scenarios) {
-    add(s.name, s.warnings);
-    for (const r of s.rows) add(`${s.name}, ${r.aircraftName}`, r.warnings);
+    for (const r of s.rows) {
+      if (r.takeoff?.climbLimited) {
+        climb.push(`CLIMB-LIMITED: ${r.aircraftName} in "${s.name}" at its design takeoff mass; the engine-out climb gradient is below the regulatory minimum, which a longer runway cannot cure.`);
+      }
+      for (const w of r.warnings) {
+        const key = `${r.aircraftName}\u0000${w}`;
+        const entry = byAircraft.get(key);
+        if (entry) { if (!entry.scenarios.includes(s.name)) entry.scenarios.push(s.name); }
+        else byAircraft.set(key, { name: r.aircraftName, scenarios: [s.name] });
+      }
+    }
   }
-  const climbLimited = result.scenarios.flatMap((s) => s.rows.filter((r) => r.takeoff?.climbLimited).map((r) => `${s.name}, ${r.aircraftName}: climb-limited at the design takeoff mass; the engine-out climb gradient is below the regulatory minimum, which a longer runway cannot cure.`));
-  for (const c of climbLimited) if (!warnings.includes(c)) warnings.unshift(c);
-  void input;
+  for (const [key, e] of byAircraft) {
+    const w = key.slice(key.indexOf('\u0000') + 1);
+    const where = e.scenarios.length === result.scenarios.length && result.scenarios.length > 1 ? 'all scenarios' : e.scenarios.join('; ');
+    warnings.push(`${e.name} (${where}): ${w}`);
+  }
   return [
     { type: 'subheading', text: 'Assumptions' },
     { type: 'list', items: assumptions },
     { type: 'subheading', text: 'Warnings raised by the computation' },
+    ...climb.map((c): Block => ({ type: 'paragraph', text: c, style: 'caution' })),
     warnings.length > 0 ? { type: 'list', items: warnings } : { type: 'paragraph', text: 'None.' },
   ];
 }
@@ -621,9 +671,9 @@ function listingBlocks(args: AppendixModelInput): Block[] {
   const { input } = args;
   const site = input.site;
   const blocks: Block[] = [
-    { type: 'paragraph', text: 'Every input value of the study, in the study\'s units with all significant digits. The exact input, in SI units as stored, is embedded in this PDF as the attachment "study-input.json"; its SHA-256 digest is below. Run the command shown on that file to regenerate this appendix with the same numbers.' },
+    { type: 'paragraph', text: 'Every input value of the study, in the study\'s units, to six significant digits. The exact input, in SI units as stored, is attached to this PDF as the file "study-input.json" (open the attachments panel of the PDF reader, or run pdfdetach). The digest below is the SHA-256 of the canonical JSON of that input (keys sorted, no spaces); running the study file again prints the same digest. Run the command shown on that file to regenerate this appendix with the same numbers.' },
     { type: 'facts', items: [
-      { label: 'SHA-256 of the canonical input', value: t(args.inputDigest, true) },
+      { label: 'SHA-256 of the canonical input', value: { text: args.inputDigest, mono: true } },
       { label: 'Regenerate with', value: t(args.regenerateCommand ?? 'npm run study -- study-input.json --format pdf --out appendix.pdf') },
       { label: 'Runwright version', value: t(args.version) },
       { label: 'Method version', value: t(args.result.methodVersion) },
@@ -734,6 +784,6 @@ function aircraftListing(aircraft: readonly AircraftProfile[]): Block {
     caption: `Aircraft profiles: ${aircraft.map((a) => a.name).join(', ')}`,
     columns: [{ title: 'Field', width: 2.2 }, ...aircraft.map((a): Column => ({ title: a.name, align: 'right', width: 1.2 }))],
     rows,
-    note: 'Each value in the unit shown in its row, with all significant digits.',
+    note: 'Each value in the unit shown in its row, to six significant digits.',
   };
 }

@@ -36,7 +36,8 @@ import { analyseRunwayProfile, checkDeclaredDistances } from '../runway.js';
 import { analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
 import { validateAircraft } from '../aircraft.js';
-import { assessExistingRunway, calibrateTakeoff, type TakeoffCalibration } from './hooks.js';
+import { calibrateTakeoff, type TakeoffCalibrationResult } from '../calibrate.js';
+import { assessExistingRunway, existingRunwayCheckOf, type MaxLandingMassResult, type MaxTakeoffMassResult } from '../runwayCheck.js';
 import type {
   AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint,
   RouteSummary, RowResult, RunwaySummary, ScenarioResult, SensitivityCurve, SiteConditions, StudyInput,
@@ -175,14 +176,16 @@ interface Conditions {
 /** Memoised evaluations for one study run (pure: keyed by value). */
 class Evaluator {
   private readonly takeoffCache = new Map<string, TakeoffResult>();
-  private readonly calibrations = new Map<string, TakeoffCalibration>();
+  private readonly calibrations = new Map<string, TakeoffCalibrationResult>();
+  /** Greatest takeoff and landing masses per aircraft and runway direction (independent of the row). */
+  readonly solvedMasses = new Map<string, { takeoffMass: MaxTakeoffMassResult; landingMass: MaxLandingMassResult }>();
   constructor(readonly input: StudyInput, readonly site: SiteConditions) {}
 
   get options(): StudyOptions {
     return this.input.options;
   }
 
-  calibration(a: AircraftProfile): TakeoffCalibration {
+  calibration(a: AircraftProfile): TakeoffCalibrationResult {
     let c = this.calibrations.get(a.id);
     if (!c) {
       c = calibrateTakeoff({ aircraft: a });
@@ -399,7 +402,7 @@ function evaluateRow(
   if (opts.method === 'calibrated') {
     const c = ev.calibration(a);
     if (c.status === 'ok') summary.calibrationFactor = c.factor;
-    else warnings.push(`Calibration not applied: ${c.reason}; the uncalibrated physics model is used.`);
+    else warnings.push(`Calibration not applied: ${c.message}; the uncalibrated physics model is used.`);
   }
 
   // 3. Landing.
@@ -437,7 +440,9 @@ function evaluateRow(
   const existing: ExistingRunwayCheck[] = [];
   for (const rw of ev.site.runways) {
     for (const d of rw.directions) {
-      existing.push(assessExistingRunway({
+      const solvedKey = `${a.id}|${rw.name}|${d.designator}|${landingMass}`;
+      const solved = ev.solvedMasses.get(solvedKey);
+      const assessment = assessExistingRunway({
         aircraft: a,
         runway: rw.name,
         direction: d,
@@ -452,7 +457,10 @@ function evaluateRow(
         payload_kg: row.payload_kg,
         reserves: reservePolicyOf(opts.reserves),
         passengerMass_kg: opts.passengerMass_kg,
-      }));
+        ...(solved ? { solved } : {}),
+      });
+      if (!solved) ev.solvedMasses.set(solvedKey, { takeoffMass: assessment.takeoffMass, landingMass: assessment.landingMass });
+      existing.push(existingRunwayCheckOf(assessment));
     }
   }
   return {

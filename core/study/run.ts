@@ -347,7 +347,18 @@ function evaluateRow(
 
   // 2. Takeoff at design conditions.
   const cond = ev.designConditions();
-  const t = ev.takeoff(a, mass, cond);
+  let t = ev.takeoff(a, mass, cond);
+  // A climb limit is a finding runway length cannot cure: the aircraft must leave at the climb-limited
+  // mass whatever the runway, so the runway is sized at that mass and the offload is reported.
+  const climbMass = t.climb.maxMass_kg;
+  const climbBound = (t.feasible ? t.climb.limited : t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out');
+  if (climbBound && climbMass !== undefined && climbMass < mass && climbMass >= a.oew_kg) {
+    warnings.push(
+      `Climb-limited at the design mass of ${Math.round(mass)} kg: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting it is ${Math.floor(climbMass)} kg (${Math.round(mass - climbMass)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
+    );
+    mass = Math.floor(climbMass);
+    t = ev.takeoff(a, mass, cond);
+  }
   warnings.push(...t.warnings);
   if (!t.feasible) {
     return cannotOperate(base, route, row, `Takeoff not possible at ${Math.round(mass)} kg at design conditions: ${t.message}`, warnings, mass, routeSum);
@@ -373,7 +384,7 @@ function evaluateRow(
   };
   if (t.climb.limited) {
     warnings.push(
-      `Climb-limited: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum; the greatest mass meeting it is ${t.climb.maxMass_kg === undefined ? 'below OEW' : Math.floor(t.climb.maxMass_kg) + ' kg'}. A longer runway cannot cure this.`,
+      `Climb-limited: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum${t.climb.maxMass_kg === undefined ? ' even at the operating empty mass' : ''}. A longer runway cannot cure this.`,
     );
   }
   const refSite = {

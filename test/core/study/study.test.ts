@@ -147,6 +147,20 @@ describe('runStudy on the invented demo study', () => {
     expect(s.excluded.map((e) => e.aircraft)).toEqual(['weak-jet']);
     expect(s.criticalAircraft).toBe('heron-st1');
   });
+  it('sizes a climb-limited row at the climb-limited mass and says a runway cannot cure it', () => {
+    // Invented hot, high case: the twin jet at 1600 m, 38 °C on a long route is limited by the
+    // engine-out V2 climb gradient (14 CFR 25.121(b) 2.4 % minimum for twins, from memory).
+    const doc = clone(minimal);
+    doc.aircraft = clone(demo).aircraft.filter((a: { id: string }) => a.id === 'tern-rj90');
+    doc.site.elevation_m = 1600;
+    doc.site.designTemperature_c = 38;
+    doc.scenarios = [{ name: 'Hot', fleet: [{ aircraft: 'tern-rj90', annualOperations: 900, stageLength_km: 2500, payload_kg: 9000 }] }];
+    const r = runStudy(input(doc)).scenarios[0]!.rows[0]!;
+    expect(r.status).toBe('ok');
+    expect(r.takeoffMass_kg).toBeLessThan(r.route.takeoffMass_kg);
+    expect(r.warnings.join(' ')).toMatch(/Climb-limited at the design mass .* a longer runway cannot cure this/);
+    expect(r.takeoff!.climbLimited).toBe(false); // at the offloaded mass the gradient is met
+  });
   it('reports a route beyond reach', () => {
     const doc = clone(minimal);
     doc.scenarios[0]!.fleet[0]!.stageLength_km = 9000;

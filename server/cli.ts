@@ -1,7 +1,7 @@
 /**
  * Command line: run a study file and write the result.
  *
- *   npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us]
+ *   npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us] [--date YYYY-MM-DD]
  *
  * Exit codes: 0 success; 2 invalid input (usage, unreadable or malformed file, or values out of range —
  * every problem listed by JSON path, field, value and allowed range); 1 internal error.
@@ -13,13 +13,15 @@ import { resultsCsv } from './export/resultsCsv.js';
 import { formatProblem } from './schemas/common.js';
 import { parseStudyDocument, studyOutput, type StudyOutput } from './study.js';
 
-export const USAGE = 'usage: npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us]';
+export const USAGE = 'usage: npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us] [--date YYYY-MM-DD]';
 
 export interface CliArgs {
   readonly file: string;
   readonly format: 'json' | 'csv' | 'pdf';
   readonly out?: string;
   readonly units?: UnitSystem;
+  /** Issue date printed in a PDF (default today); fixing it makes the PDF bytes reproducible. */
+  readonly date?: Date;
 }
 
 export class UsageError extends Error {}
@@ -29,6 +31,7 @@ export function parseArgs(argv: readonly string[]): CliArgs {
   let format: CliArgs['format'] = 'json';
   let out: string | undefined;
   let units: UnitSystem | undefined;
+  let date: Date | undefined;
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!;
     const value = () => {
@@ -45,12 +48,17 @@ export function parseArgs(argv: readonly string[]): CliArgs {
       const v = value();
       if (v !== 'si' && v !== 'us') throw new UsageError(`--units: "${v}" is not allowed; one of si, us`);
       units = v;
+    } else if (a === '--date') {
+      const v = value();
+      const d = /^\d{4}-\d{2}-\d{2}$/.test(v) ? new Date(`${v}T00:00:00Z`) : undefined;
+      if (!d || Number.isNaN(d.getTime()) || d.toISOString().slice(0, 10) !== v) throw new UsageError(`--date: "${v}" is not allowed; a calendar date YYYY-MM-DD`);
+      date = d;
     } else if (a.startsWith('--')) throw new UsageError(`unknown option ${a}`);
     else if (file === undefined) file = a;
     else throw new UsageError(`unexpected argument ${a}`);
   }
   if (file === undefined) throw new UsageError('a study file is required');
-  return { file, format, ...(out === undefined ? {} : { out }), ...(units === undefined ? {} : { units }) };
+  return { file, format, ...(out === undefined ? {} : { out }), ...(units === undefined ? {} : { units }), ...(date === undefined ? {} : { date }) };
 }
 
 export interface CliIo {
@@ -59,7 +67,7 @@ export interface CliIo {
   readonly stdout: (text: string | Uint8Array) => void;
   readonly stderr: (text: string) => void;
   /** PDF renderer (the report module), injected so the CLI stays small. */
-  readonly renderPdf?: (out: StudyOutput, units: UnitSystem, input: import('../core/index.js').StudyInput) => Promise<Uint8Array>;
+  readonly renderPdf?: (out: StudyOutput, units: UnitSystem, input: import('../core/index.js').StudyInput, date?: Date) => Promise<Uint8Array>;
 }
 
 /** Runs the CLI; returns the exit code. */
@@ -113,11 +121,17 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
       io.stderr('PDF output is not available in this build\n');
       return 1;
     }
-    data = await io.renderPdf(out, units, parsed.input);
+    data = await io.renderPdf(out, units, parsed.input, args.date);
   }
   if (args.out) io.writeFile(args.out, data);
   else io.stdout(data);
   return 0;
+}
+
+/** The PDF renderer, loaded only when a PDF is asked for (pdfkit is not needed for JSON or CSV). */
+async function loadPdfRenderer(out: StudyOutput, units: UnitSystem, input: import('../core/index.js').StudyInput, date?: Date): Promise<Uint8Array> {
+  const { studyPdf } = await import('./pdf/index.js');
+  return studyPdf(out, units, input, date === undefined ? () => new Date() : () => date);
 }
 
 const isMain = process.argv[1] !== undefined && import.meta.url === new URL(`file://${process.argv[1]}`).href;
@@ -127,6 +141,7 @@ if (isMain) {
     writeFile: (p, d) => writeFileSync(p, d),
     stdout: (t) => process.stdout.write(t),
     stderr: (t) => process.stderr.write(t),
+    renderPdf: loadPdfRenderer,
   }).then(
     (code) => { process.exitCode = code; },
     (e: unknown) => {

@@ -60,6 +60,7 @@ export const METHOD_REFERENCES: readonly MethodReference[] = [
   { id: 'TOR', text: 'Torenbeek, Synthesis of Subsonic Airplane Design, Delft University Press, 1982; chapter 5, eq. 5-91.' },
   { id: 'ROS', text: 'Roskam, Airplane Design, Part I: Preliminary Sizing of Airplanes (takeoff parameters TOP23 and TOP25).' },
   { id: 'AEDB', text: "Aeronautical Engineer's Data Book, chapter 9 (Breguet range)." },
+  { id: 'BRENT', text: 'Brent, Algorithms for Minimization without Derivatives, Prentice-Hall, 1973, chapter 4 (root finding).' },
   { id: 'NCEI', text: 'NOAA National Centers for Environmental Information: GHCN-Daily format description; Global Summary of the Month completeness rule; U.S. Climate Normals 1991-2020.' },
 ];
 
@@ -251,6 +252,41 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     sources: ['TOR', 'ROS'],
     doc: 'takeoff.md',
     docAnchors: ['eq. 5-91', 'S_TOFL = 37.5·TOP25'],
+  },
+  {
+    id: 'calibration',
+    title: 'Calibration to a reference length',
+    summary:
+      'Where an aircraft carries a reference takeoff length (MTOW, sea level, ISA, dry, no wind or slope), one factor on ' +
+      'thrust (or on takeoff CLmax) is fitted so that the performance model gives that length, and the tuned model is then ' +
+      'run at the site. A factor outside the plausible band is refused and the uncalibrated model is used.',
+    formulas: [
+      'solve L_model(k) − L_ref = 0 for k in the band 0.7-1.3 (Brent; |residual| <= 0.05 m)',
+      'landing: one factor on braking friction fitted to the reference landing length',
+    ],
+    limits: 'One factor matches one point; it cannot correct how the length grows with mass, elevation or temperature.',
+    sources: ['BRENT'],
+    doc: 'calibration-existing-runway.md',
+    docAnchors: ['L_model(k) − L_ref = 0', '0.7–1.3', '0.05 m'],
+  },
+  {
+    id: 'existing-runway',
+    title: 'Existing runway: needs, greatest mass and penalties',
+    summary:
+      'At the design takeoff mass the needs are compared with the declared distances of each runway direction: takeoff ' +
+      'run with TORA, takeoff distance with TODA, accelerate-stop with ASDA, landing with LDA. Where they do not fit, the ' +
+      'greatest takeoff mass the declared distances (and the climb minimum) allow is found by bisection, and the route model ' +
+      'turns it into a payload penalty on the design stage and a range penalty with the design payload.',
+    formulas: [
+      'TOD1 = 1.15·D35_AEO,  TOR1 = TOD1 − ½(TOD1 − 1.15·LOD_AEO);   TOD2 = D35_OEI,  TOR2 = TOD2 − ½(TOD2 − LOD_OEI)',
+      'takeoff run max(TOR1, TOR2) <= TORA;   takeoff distance max(TOD1, TOD2) <= TODA;   accelerate-stop <= ASDA',
+      'greatest mass: bisection on "all needs fit" between the lightest feasible mass and min(MTOW, climb-limited mass), 10 kg',
+      'payload penalty = payload at MTOW − payload at the greatest mass (design stage);   range penalty = design stage − range',
+    ],
+    limits: 'Passenger penalties are rounded up to whole passengers in this appendix.',
+    sources: ['HOR', 'CFR25', 'CFR121'],
+    doc: 'calibration-existing-runway.md',
+    docAnchors: ['TOD1 = 1.15·D35_AEO', 'Bisection', 'payloadAtMtow − payloadAtMass'],
   },
   {
     id: 'fleet',

@@ -29,9 +29,10 @@ import { METHOD_ENTRIES, STUDY_METHOD_LABEL, referencesFor } from './methods.js'
 /**
  * How a renderer formats a value: a quantity kind (SI value; 'distance' is a route distance in metres,
  * shown in km or NM), a slope ratio shown in percent ('slopePct'), a share shown as a percentage
- * ('percent'), or a runway length in both unit systems ('lengthBoth').
+ * ('percent'), a runway length in both unit systems ('lengthBoth'), or a number of passengers
+ * ('passengers', shown rounded up to whole passengers).
  */
-export type ValueKind = QuantityKind | 'slopePct' | 'percent' | 'lengthBoth';
+export type ValueKind = QuantityKind | 'slopePct' | 'percent' | 'lengthBoth' | 'passengers';
 
 /**
  * One value: text, or an SI number with its kind. `listing` asks for every significant digit (input
@@ -54,10 +55,14 @@ export interface Column {
   readonly width?: number;
 }
 
-/** A table row; `group` rows span every column and introduce the rows below them. */
+/**
+ * A table row; `group` rows span every column and introduce the rows below them; `note` rows span
+ * every column and explain the row above them.
+ */
 export type Row =
   | { readonly cells: readonly Cell[] }
-  | { readonly group: string };
+  | { readonly group: string }
+  | { readonly note: string };
 
 export interface Fact {
   readonly label: string;
@@ -384,10 +389,19 @@ function methodIntroBlocks(result: StudyResult): Block[] {
   ];
 }
 
+/**
+ * Whether a row is climb-limited: its engine-out climb gradient at V2 misses the minimum at the takeoff
+ * mass used, or the study had to size it below the mass its route needs (the study sizes a climb-limited
+ * aircraft at the greatest mass that meets the climb minimum and reports the offload).
+ */
+export function climbLimitedRow(r: RowResult): boolean {
+  return r.takeoff?.climbLimited === true || r.climbOffload_kg !== undefined;
+}
+
 function takeoffCaseText(r: RowResult): string {
   if (r.status !== 'ok') return 'cannot operate';
   const g = r.governing === 'takeoff' && r.takeoff ? `takeoff (${governingLabel(r.takeoff.governing)})` : r.governing;
-  return r.takeoff?.climbLimited ? `${g}; climb-limited` : g;
+  return climbLimitedRow(r) ? `${g}; climb-limited` : g;
 }
 
 function scenarioBlocks(s: ScenarioResult, byId: ReadonlyMap<string, AircraftProfile>): Block[] {
@@ -429,8 +443,9 @@ function scenarioBlocks(s: ScenarioResult, byId: ReadonlyMap<string, AircraftPro
   }
 
   // Components of each requirement: one column per aircraft, in chunks that fit the page width.
-  for (let i = 0; i < s.rows.length; i += COMPONENT_COLUMNS) {
-    const chunk = s.rows.slice(i, i + COMPONENT_COLUMNS);
+  const perTable = Math.ceil(s.rows.length / Math.max(1, Math.ceil(s.rows.length / COMPONENT_COLUMNS)));
+  for (let i = 0; i < s.rows.length; i += perTable) {
+    const chunk = s.rows.slice(i, i + perTable);
     const part = s.rows.length > COMPONENT_COLUMNS ? ` (aircraft ${i + 1}-${i + chunk.length} of ${s.rows.length})` : '';
     blocks.push({
       type: 'table', caption: `Components of each requirement: ${s.name}${part}`,
@@ -442,8 +457,8 @@ function scenarioBlocks(s: ScenarioResult, byId: ReadonlyMap<string, AircraftPro
   return blocks;
 }
 
-/** Aircraft per components table. */
-const COMPONENT_COLUMNS = 6;
+/** Aircraft per components table at most (a larger fleet is split into tables of even size). */
+const COMPONENT_COLUMNS = 7;
 
 /** A line of the components table: a label and, per aircraft, a value (undefined = not applicable). */
 interface ComponentLine { readonly label: string; readonly value: (r: RowResult) => Cell | undefined; readonly bold?: boolean }
@@ -478,7 +493,9 @@ function componentRows(rows: readonly RowResult[]): Row[] {
     { label: 'Payload left behind', value: (r) => (r.route.payloadLeftBehind_kg > 0 ? q(r.route.payloadLeftBehind_kg, 'mass') : undefined) },
     { label: 'Trip fuel', value: (r) => q(r.route.tripFuel_kg, 'mass') },
     { label: 'Reserve fuel', value: (r) => q(r.route.reserveFuel_kg, 'mass') },
-    { label: 'Design takeoff mass', value: (r) => q(r.takeoffMass_kg, 'mass'), bold: true },
+    { label: 'Takeoff mass the route needs', value: (r) => q(r.route.takeoffMass_kg, 'mass') },
+    { label: 'Offload to meet the climb minimum', value: (r) => (r.climbOffload_kg !== undefined ? q(r.climbOffload_kg, 'mass') : undefined) },
+    { label: 'Design takeoff mass (used)', value: (r) => q(r.takeoffMass_kg, 'mass'), bold: true },
     { label: 'Arrival mass', value: (r) => q(r.route.arrivalMass_kg, 'mass') },
     { label: 'Cannot operate here', value: (r) => (ok(r) ? undefined : t(r.reason ?? 'cannot operate', true)) },
   ]);
@@ -489,7 +506,7 @@ function componentRows(rows: readonly RowResult[]): Row[] {
     { label: 'V2', value: (r) => (ok(r) && r.takeoff?.v2_mps !== undefined ? q(r.takeoff.v2_mps, 'speed') : undefined) },
     { label: 'Climb gradient at V2 (engine out for twins)', value: (r) => (ok(r) && r.takeoff?.climbGradient !== undefined ? q(r.takeoff.climbGradient, 'slopePct') : undefined) },
     { label: 'Minimum climb gradient', value: (r) => (ok(r) && r.takeoff?.climbMinimum !== undefined ? q(r.takeoff.climbMinimum, 'slopePct', 1) : undefined) },
-    { label: 'Climb-limited', value: (r) => (ok(r) && r.takeoff ? t(r.takeoff.climbLimited ? 'CLIMB-LIMITED' : 'no', r.takeoff.climbLimited) : undefined) },
+    { label: 'Climb-limited', value: (r) => (ok(r) && r.takeoff ? t(climbLimitedRow(r) ? 'CLIMB-LIMITED' : 'no', climbLimitedRow(r)) : undefined) },
     { label: 'Greatest mass meeting the climb minimum', value: (r) => (ok(r) && r.takeoff?.climbLimited && r.takeoff.climbMaxMass_kg !== undefined ? q(r.takeoff.climbMaxMass_kg, 'mass') : undefined) },
     { label: 'Performance model (shown beside)', value: (r) => (ok(r) && r.takeoff && r.takeoff.method !== 'physics' && r.takeoff.physics_m !== undefined ? q(r.takeoff.physics_m, 'length') : undefined) },
     { label: 'Reference length with corrections', value: (r) => (ok(r) && r.takeoff?.reference_m !== undefined ? q(r.takeoff.reference_m, 'length') : undefined) },
@@ -568,11 +585,11 @@ function existingBlocks(s: ScenarioResult, result: StudyResult): Block[] {
         t(`${e.runway} / ${e.designator}`),
         q(e.maxTakeoffMass_kg, 'mass'), t(e.limitedBy),
         penalty(e.payloadPenalty_kg, e.takeoffOk, 'mass'),
-        penalty(e.passengersPenalty, e.takeoffOk, 'count'),
+        penalty(e.passengersPenalty, e.takeoffOk, 'passengers'),
         penalty(e.rangePenalty_km === undefined ? undefined : e.rangePenalty_km * 1000, e.takeoffOk, 'distance'),
         q(e.maxLandingMass_kg, 'mass'),
       ));
-      if (e.note) mass.push(row(t(''), t(e.note)));
+      if (e.note) mass.push({ note: e.note });
     }
   }
   return [
@@ -584,7 +601,7 @@ function existingBlocks(s: ScenarioResult, result: StudyResult): Block[] {
     },
     {
       type: 'table', caption: `Greatest takeoff mass and penalties: ${s.name}`,
-      columns: [{ title: 'Runway / direction', width: 1.3 }, { title: 'Greatest takeoff mass', kind: 'mass' }, { title: 'Limited by', width: 0.8 }, { title: 'Payload penalty', kind: 'mass' }, { title: 'Passengers', kind: 'count', width: 0.8 }, { title: 'Range penalty', kind: 'distance', width: 1.1 }, { title: 'Greatest landing mass', kind: 'mass' }],
+      columns: [{ title: 'Runway / direction', width: 1.3 }, { title: 'Greatest takeoff mass', kind: 'mass' }, { title: 'Limited by', width: 0.8 }, { title: 'Payload penalty', kind: 'mass' }, { title: 'Passengers', kind: 'passengers', width: 0.8 }, { title: 'Range penalty', kind: 'distance', width: 1.1 }, { title: 'Greatest landing mass', kind: 'mass' }],
       rows: mass,
       note: 'Penalties against the design payload and stage length of the fleet row; "none" where the runway allows the design mass.',
     },
@@ -639,8 +656,10 @@ function assumptionBlocks(result: StudyResult): Block[] {
   const climb: string[] = [];
   for (const s of result.scenarios) {
     for (const r of s.rows) {
-      if (r.takeoff?.climbLimited) {
-        climb.push(`CLIMB-LIMITED: ${r.aircraftName} in "${s.name}" at its design takeoff mass; the engine-out climb gradient is below the regulatory minimum, which a longer runway cannot cure.`);
+      if (climbLimitedRow(r)) {
+        climb.push(r.takeoff?.climbLimited
+          ? `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": the climb gradient at V2 is below the regulatory minimum at the takeoff mass used, which a longer runway cannot cure.`
+          : `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": at the takeoff mass its route needs, the climb gradient at V2 is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).`);
       }
       for (const w of r.warnings) {
         const key = `${r.aircraftName}\u0000${w}`;
@@ -663,6 +682,9 @@ function assumptionBlocks(result: StudyResult): Block[] {
     warnings.length > 0 ? { type: 'list', items: warnings } : { type: 'paragraph', text: 'None.' },
   ];
 }
+
+/** Reference-table values listed at most (the attached file has them all). */
+const REFERENCE_TABLE_ROWS = 240;
 
 /** Aircraft per listing table (columns). */
 const LISTING_AIRCRAFT_PER_TABLE = 4;
@@ -712,6 +734,21 @@ function listingBlocks(args: AppendixModelInput): Block[] {
   blocks.push({ type: 'subheading', text: 'Aircraft profiles' });
   for (let i = 0; i < input.aircraft.length; i += LISTING_AIRCRAFT_PER_TABLE) {
     blocks.push(aircraftListing(input.aircraft.slice(i, i + LISTING_AIRCRAFT_PER_TABLE)));
+  }
+  for (const a of input.aircraft) {
+    const tb = a.reference?.table;
+    if (!tb) continue;
+    const rows: Row[] = [];
+    tb.mass_kg.forEach((m, i) => tb.elevation_m.forEach((e, j) => tb.temperature_c.forEach((c, k) => {
+      rows.push(row(exact(m, 'mass'), exact(e, 'altitude'), exact(c, 'temperature'), exact(tb.length_m[i]?.[j]?.[k], 'length')));
+    })));
+    const shown = rows.slice(0, REFERENCE_TABLE_ROWS);
+    blocks.push({
+      type: 'table', caption: `Reference takeoff lengths: ${a.name}`,
+      columns: [{ title: 'Mass', kind: 'mass' }, { title: 'Elevation', kind: 'altitude' }, { title: 'Temperature', kind: 'temperature' }, { title: 'Takeoff length', kind: 'length' }],
+      rows: shown,
+      ...(rows.length > shown.length ? { note: `First ${shown.length} of ${rows.length} values; all are in the attached study file.` } : {}),
+    });
   }
   blocks.push({ type: 'subheading', text: 'Fleet rows' });
   blocks.push({
@@ -775,7 +812,7 @@ function aircraftListing(aircraft: readonly AircraftProfile[]): Block {
     if (aircraft.some((a) => a.reference?.table)) {
       rows.push(row(t('Reference table (mass x elevation x temperature)'), ...aircraft.map((a) => {
         const tb = a.reference?.table;
-        return t(tb ? `${tb.mass_kg.length} x ${tb.elevation_m.length} x ${tb.temperature_c.length} values (in the attached input)` : '—');
+        return t(tb ? `${tb.mass_kg.length} x ${tb.elevation_m.length} x ${tb.temperature_c.length} values (listed below)` : '—');
       })));
     }
   }

@@ -348,6 +348,7 @@ function evaluateRow(
   // 2. Takeoff at design conditions.
   const cond = ev.designConditions();
   let t = ev.takeoff(a, mass, cond);
+  let climbOffload: number | undefined;
   // A climb limit is a finding runway length cannot cure: the aircraft must leave at the climb-limited
   // mass whatever the runway, so the runway is sized at that mass and the offload is reported.
   const climbMass = t.climb.maxMass_kg;
@@ -356,6 +357,7 @@ function evaluateRow(
     warnings.push(
       `Climb-limited at the design mass of ${Math.round(mass)} kg: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting it is ${Math.floor(climbMass)} kg (${Math.round(mass - climbMass)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
     );
+    climbOffload = mass - Math.floor(climbMass);
     mass = Math.floor(climbMass);
     t = ev.takeoff(a, mass, cond);
   }
@@ -478,6 +480,7 @@ function evaluateRow(
     ...base,
     status: 'ok',
     takeoffMass_kg: mass,
+    ...(climbOffload === undefined ? {} : { climbOffload_kg: climbOffload }),
     requiredTakeoff_m: takeoffRequired,
     requiredLanding_m: landingRequired,
     required_m: req.length_m,

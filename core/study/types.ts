@@ -280,6 +280,11 @@ export interface RowResult {
   /** Why the aircraft cannot operate here (status 'cannot-operate'). */
   readonly reason?: string;
   readonly takeoffMass_kg: number;
+  /**
+   * Mass the aircraft must leave behind at design conditions to meet the climb minimum (the route's
+   * design mass minus the climb-limited mass the takeoff is sized at), kg; absent when not climb-limited.
+   */
+  readonly climbOffload_kg?: number;
   readonly requiredTakeoff_m: number;
   readonly requiredLanding_m: number;
   readonly required_m: number;

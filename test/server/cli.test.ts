@@ -94,6 +94,17 @@ describe('study CLI', () => {
     expect(await runCli(['x.json', '--format', 'xml'], io)).toBe(2);
     expect(out.stderr).toMatch(/--format: "xml" is not allowed; one of json, csv, pdf/);
     expect(await runCli([], io)).toBe(2);
+    expect(await runCli(['x.json', '--date', '2026-02-30'], io)).toBe(2);
+    expect(out.stderr).toMatch(/--date: "2026-02-30" is not allowed; a calendar date YYYY-MM-DD/);
+  });
+
+  it('passes the fixed --date to the PDF renderer (reproducible bytes)', async () => {
+    const { io, out } = fakeIo({ 'm.json': minimalText });
+    const dates: (Date | undefined)[] = [];
+    const withPdf: CliIo = { ...io, renderPdf: async (_o, _u, _i, date) => { dates.push(date); return new Uint8Array([37, 80, 68, 70]); } };
+    expect(await runCli(['m.json', '--format', 'pdf', '--date', '2026-12-02', '--out', 'a.pdf'], withPdf)).toBe(0);
+    expect(dates[0]?.toISOString()).toBe('2026-12-02T00:00:00.000Z');
+    expect(out.written['a.pdf']).toEqual(new Uint8Array([37, 80, 68, 70]));
   });
 
   it('runs as a real process: exit 0 and exit 2 (npm run study)', () => {

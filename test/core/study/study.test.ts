@@ -158,6 +158,7 @@ describe('runStudy on the invented demo study', () => {
     const r = runStudy(input(doc)).scenarios[0]!.rows[0]!;
     expect(r.status).toBe('ok');
     expect(r.takeoffMass_kg).toBeLessThan(r.route.takeoffMass_kg);
+    expect(r.climbOffload_kg).toBeCloseTo(r.route.takeoffMass_kg - r.takeoffMass_kg, 9);
     expect(r.warnings.join(' ')).toMatch(/Climb-limited at the design mass .* a longer runway cannot cure this/);
     expect(r.takeoff!.climbLimited).toBe(false); // at the offloaded mass the gradient is met
   });

@@ -1,0 +1,105 @@
+/**
+ * Appendix report model (core/report/model.ts): built from the invented demo study. Values stay SI and
+ * unrounded (checked against the result they come from, derived); every input value is listed; the
+ * structure is the one the appendix promises.
+ */
+import { describe, expect, it } from 'vitest';
+import demo from '../../../examples/demo-study.json' with { type: 'json' };
+import { runStudy, type StudyInput } from '../../../core/index.js';
+import { studyCharts } from '../../../core/report/charts.js';
+import { buildAppendixModel, climbLimitedRow, type AppendixModel, type Block, type Cell, type Row } from '../../../core/report/model.js';
+import { parseStudyDocument } from '../../../server/study.js';
+
+function inputOf(doc: unknown): StudyInput {
+  const p = parseStudyDocument(doc);
+  if (!p.ok) throw new Error(JSON.stringify(p.problems));
+  return p.input;
+}
+
+const input = inputOf(demo);
+const result = runStudy(input);
+const model: AppendixModel = buildAppendixModel({
+  input, result, charts: studyCharts(result, input), inputDigest: 'f'.repeat(64), date: '2026-12-02', version: '0.1.0-test',
+});
+
+const blocksOf = (id: string): readonly Block[] => model.sections.find((s) => s.id === id)?.blocks ?? [];
+const tables = (blocks: readonly Block[]) => blocks.filter((b): b is Extract<Block, { type: 'table' }> => b.type === 'table');
+const cells = (rows: readonly Row[]): Cell[] => rows.flatMap((r) => ('cells' in r ? [...r.cells] : []));
+
+describe('appendix model of the demo study', () => {
+  it('numbers ten top-level sections 1-10, with the scenarios as subsections of results and existing runway', () => {
+    const top = model.sections.filter((s) => s.level === 1);
+    expect(top.map((s) => s.number)).toEqual(['1', '2', '3', '4', '5', '6', '7', '8', '9', '10']);
+    const results = model.sections.filter((s) => s.id.startsWith('results-'));
+    expect(results.map((s) => s.number)).toEqual(result.scenarios.map((_, i) => `5.${i + 1}`));
+    expect(model.sections.filter((s) => s.id.startsWith('existing-')).length).toBe(result.scenarios.length);
+    expect(new Set(model.sections.map((s) => s.id)).size).toBe(model.sections.length);
+  });
+
+  it('carries each recommendation unrounded, in SI, as the result gives it', () => {
+    expect(model.recommendations.map((r) => [r.scenario, r.criticalAircraftName, r.recommendedLength_m, r.required_m]))
+      .toEqual(result.scenarios.map((s) => [s.name, s.criticalAircraftName, s.recommendedLength_m, s.criticalRequired_m]));
+    for (const [i, s] of result.scenarios.entries()) {
+      const facts = blocksOf(`results-${i + 1}`).find((b) => b.type === 'facts');
+      const rec = facts?.type === 'facts' ? facts.items.find((f) => f.label === 'Recommended runway length') : undefined;
+      expect(rec?.value).toEqual({ si: s.recommendedLength_m, kind: 'lengthBoth' });
+    }
+  });
+
+  it('gives a components column per aircraft whose required length is the row requirement', () => {
+    const s = result.scenarios[0]!;
+    const comp = tables(blocksOf('results-1')).find((t) => t.caption.startsWith('Components'))!;
+    expect(comp.columns.slice(1).map((c) => c.title)).toEqual(s.rows.map((r) => r.aircraftName));
+    const req = comp.rows.find((r) => 'cells' in r && 'text' in r.cells[0]! && r.cells[0].text === 'Required length');
+    expect(req && 'cells' in req ? req.cells.slice(1) : []).toEqual(s.rows.map((r) => ({ si: r.required_m, kind: 'length' })));
+  });
+
+  it('lists every numeric input value (listing cells carry the exact SI value)', () => {
+    const listed = new Set<number>();
+    for (const b of blocksOf('inputs')) {
+      const cs = b.type === 'table' ? cells(b.rows) : b.type === 'facts' ? b.items.map((f) => f.value) : [];
+      for (const c of cs) {
+        if ('si' in c && typeof c.si === 'number') listed.add(c.si);
+        if ('text' in c && /^-?\d+(\.\d+)?$/.test(c.text)) listed.add(Number(c.text));
+      }
+    }
+    const missing: string[] = [];
+    const walk = (v: unknown, path: string): void => {
+      if (typeof v === 'number') { if (!listed.has(v)) missing.push(`${path} = ${v}`); }
+      else if (Array.isArray(v)) v.forEach((x, i) => walk(x, `${path}[${i}]`));
+      else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) walk(x, `${path}.${k}`);
+    };
+    walk(input, 'input');
+    expect(missing).toEqual([]);
+  });
+
+  it('places every chart model in the charts section, in order', () => {
+    const charts = blocksOf('charts').filter((b) => b.type === 'chart').map((b) => (b.type === 'chart' ? b.chart.id : ''));
+    expect(charts).toEqual(studyCharts(result, input).map((c) => c.id));
+    expect(charts.length).toBeGreaterThanOrEqual(4);
+  });
+});
+
+describe('appendix model of a study with a climb-limited aircraft', () => {
+  it('puts a climb-limited caution at the head of the warnings, and none for the demo study', () => {
+    expect(result.scenarios.flatMap((s) => s.rows).filter(climbLimitedRow)).toEqual([]);
+    const doc = structuredClone(demo) as any;
+    doc.site.elevation_m = 1600;
+    doc.site.designTemperature_c = 38;
+    delete doc.site.climate;
+    doc.scenarios = [{ name: 'Hot', fleet: [{ aircraft: 'tern-rj90', annualOperations: 900, stageLength_km: 3000, payload_kg: 7000 }] }];
+    const i2 = inputOf(doc);
+    const r2 = runStudy(i2);
+    const row = r2.scenarios[0]!.rows[0]!;
+    // Precondition: the study sized the jet below its route mass because of the climb minimum.
+    expect(row.takeoffMass_kg).toBeLessThan(row.route.takeoffMass_kg - 100);
+    expect(row.warnings.some((w) => /climb-limited/i.test(w))).toBe(true);
+    expect(climbLimitedRow(row)).toBe(true);
+    expect(r2.scenarios.flatMap((s) => s.rows).filter(climbLimitedRow)).toHaveLength(1);
+    const m2 = buildAppendixModel({ input: i2, result: r2, charts: [], inputDigest: 'a'.repeat(64), date: '2026-12-02', version: 't' });
+    const cautions = m2.sections.find((s) => s.id === 'assumptions')!.blocks.filter((b) => b.type === 'paragraph' && b.style === 'caution');
+    expect(cautions.map((b) => (b.type === 'paragraph' ? b.text : ''))).toEqual([
+      'CLIMB-LIMITED: Tern RJ-90 in "Hot": at the takeoff mass its route needs, the climb gradient at V2 is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).',
+    ]);
+  });
+});

@@ -1,37 +1,135 @@
-/** App factory: builds the Hono app over injected dependencies (no module-level state). */
+/**
+ * App factory: builds the Hono app over injected dependencies (no module-level state).
+ *
+ * Order of the middleware: secure headers → access token (when configured) → body limits → CSRF and
+ * the unit preference → routes. One error handler turns the errors the repositories and the core raise
+ * into pages (or JSON under /api/). Routes: docs/web.md.
+ */
 import { Hono } from 'hono';
-import { raw } from 'hono/html';
+import { getCookie, setCookie } from 'hono/cookie';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
-import { Layout } from '../templates/layout.js';
-import { CAUTION_TEXT } from '../core/caution.js';
+import { CAUTION_TEXT, ConvergenceError, InputDomainError, type UnitSystem } from '../core/index.js';
+import { AircraftInUseError, DuplicateIdError, NotFoundError, SiteInUseError } from '../db/errors.js';
+import type { Db } from '../db/types.js';
+import { HomePage, LoginPage } from '../templates/pages/home.js';
+import { ProblemPage } from '../templates/pages/errors.js';
+import { formValues } from './forms/fields.js';
+import { ImportError, formatProblem } from './io/errors.js';
+import { inlineJobs, type JobRunner } from './jobs/index.js';
+import { aircraftRoutes } from './routes/aircraft.js';
+import { apiRoutes } from './routes/api.js';
+import { reportRoutes } from './routes/report.js';
+import { siteRoutes } from './routes/sites.js';
+import { StudyService } from './studies/state.js';
+import { studyRoutes } from './routes/studies.js';
+import type { AppEnv } from './web/env.js';
+import { page, safeBack, seeOther } from './web/page.js';
+import {
+  DEFAULT_BODY_LIMITS, accessGuard, bodyLimits, clearAccessCookie, csrfGuard, isApiPath, secureHeadersGuard,
+  setAccessCookie, tokenMatches, type BodyLimits,
+} from './web/security.js';
 
 export interface AppDeps {
+  /** The database the repositories use (owned by the caller). */
+  readonly db: Db;
+  /** Clock for saved-result times. */
   readonly clock: () => Date;
+  /** When set, every request needs this token (header or sign-in cookie). */
+  readonly accessToken?: string;
+  /** Request body limits (default 1 MiB; 16 MiB on file imports and the API). */
+  readonly limits?: Partial<BodyLimits>;
+  /**
+   * Where long computations run (studies, station files). The server passes a worker-thread pool so
+   * that they never block other requests; the default runs them inline (tests).
+   */
+  readonly jobs?: JobRunner;
+  /** The database file (not ':memory:'): lets large catalogue imports run in a worker thread. */
+  readonly dbFile?: string;
 }
 
 const require = createRequire(import.meta.url);
 const HTMX = readFileSync(require.resolve('htmx.org/dist/htmx.min.js'), 'utf8');
 const CSS = readFileSync(fileURLToPath(new URL('../static/style.css', import.meta.url)), 'utf8');
 
-export function createApp(_deps: AppDeps): Hono {
-  const app = new Hono();
+export const UNITS_COOKIE = 'rw_units';
+
+export function createApp(deps: AppDeps): Hono<AppEnv> {
+  const app = new Hono<AppEnv>();
+  const jobs = deps.jobs ?? inlineJobs();
+  const token = deps.accessToken !== undefined && deps.accessToken !== '' ? deps.accessToken : undefined;
+
+  app.use('*', secureHeadersGuard());
+  app.use('*', accessGuard(token));
+  app.use('*', bodyLimits({ ...DEFAULT_BODY_LIMITS, ...deps.limits }));
+  app.use('*', csrfGuard());
+  app.use('*', async (c, next) => {
+    const u = getCookie(c, UNITS_COOKIE);
+    c.set('userUnits', u === 'us' ? 'us' : 'si');
+    await next();
+  });
+
   app.get('/static/htmx.min.js', (c) =>
     c.body(HTMX, 200, { 'content-type': 'text/javascript; charset=utf-8', 'cache-control': 'public, max-age=86400' }),
   );
-  app.get('/static/style.css', (c) => c.body(CSS, 200, { 'content-type': 'text/css; charset=utf-8' }));
+  app.get('/static/style.css', (c) => c.body(CSS, 200, { 'content-type': 'text/css; charset=utf-8', 'cache-control': 'public, max-age=3600' }));
   app.get('/health', (c) => c.json({ ok: true, caution: CAUTION_TEXT }));
-  app.get('/', (c) =>
-    c.html(
-      <>
-        {raw('<!doctype html>')}
-        <Layout title="Home">
-          <h1>Runwright</h1>
-          <p>Runway length requirements for airport planning studies.</p>
-        </Layout>
-      </>,
-    ),
+
+  app.get('/', (c) => page(c, { title: 'Home' }, () => <HomePage />));
+
+  app.post('/preferences/units', async (c) => {
+    const v = formValues(await c.req.parseBody());
+    const units: UnitSystem = v.units === 'us' ? 'us' : 'si';
+    setCookie(c, UNITS_COOKIE, units, { path: '/', sameSite: 'Lax', httpOnly: true, maxAge: 60 * 60 * 24 * 365 });
+    return seeOther(c, safeBack(v.back, '/'));
+  });
+
+  app.get('/login', (c) => page(c, { title: 'Sign in' }, () => <LoginPage next={safeBack(c.req.query('next'), '/')} enabled={token !== undefined} />));
+  app.post('/login', async (c) => {
+    const v = formValues(await c.req.parseBody());
+    const next = safeBack(v.next, '/');
+    if (token === undefined) return seeOther(c, next);
+    if (!tokenMatches(v.token ?? '', token)) {
+      return page(c, { title: 'Sign in', status: 401 }, () => <LoginPage next={next} enabled error="That is not the access token of this server." />);
+    }
+    setAccessCookie(c, token);
+    return seeOther(c, next);
+  });
+  app.post('/logout', (c) => {
+    clearAccessCookie(c);
+    return seeOther(c, '/login');
+  });
+
+  const service = new StudyService(deps.db, jobs, deps.clock);
+  app.route('/aircraft', aircraftRoutes({ db: deps.db, jobs, ...(deps.dbFile ? { dbFile: deps.dbFile } : {}) }));
+  app.route('/sites', siteRoutes({ db: deps.db, jobs }));
+  app.route('/studies', reportRoutes({ db: deps.db, clock: deps.clock, jobs, service }));
+  app.route('/studies', studyRoutes({ db: deps.db, jobs, clock: deps.clock, service }));
+  app.route('/api', apiRoutes({ db: deps.db, jobs, clock: deps.clock, service }));
+
+  app.notFound((c) =>
+    isApiPath(c.req.path)
+      ? c.json({ error: 'not-found', message: `no route ${c.req.method} ${c.req.path}` }, 404)
+      : page(c, { title: 'Not found', status: 404 }, () => <ProblemPage title="Not found" message={`There is no page at ${c.req.path}.`} />),
   );
+
+  app.onError((err, c) => {
+    const api = isApiPath(c.req.path);
+    let status: 404 | 409 | 422 | 500 = 500;
+    let message = 'Something went wrong on the server; nothing was changed. The error has been logged.';
+    let problems: string[] | undefined;
+    if (err instanceof NotFoundError) { status = 404; message = err.message; }
+    else if (err instanceof AircraftInUseError || err instanceof SiteInUseError || err instanceof DuplicateIdError) { status = 409; message = err.message; }
+    else if (err instanceof InputDomainError) { status = 422; message = err.message; }
+    else if (err instanceof ImportError) { status = 422; message = err.message; problems = err.problems.map(formatProblem); }
+    else if (err instanceof ConvergenceError) { message = `A calculation did not converge (${err.message}); nothing was changed.`; }
+    if (status === 500) console.error(err);
+    if (api) return c.json({ error: status === 500 ? 'internal' : 'rejected', message, ...(problems ? { problems } : {}) }, status);
+    return page(c, { title: status === 404 ? 'Not found' : 'Problem', status }, () => (
+      <ProblemPage title={status === 404 ? 'Not found' : status === 500 ? 'Server error' : 'Not done'} message={message} />
+    ));
+  });
+
   return app;
 }

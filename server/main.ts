@@ -1,14 +1,57 @@
-/** Entry point: reads and validates the environment once, builds the app and serves it. */
+/**
+ * Entry point: reads and validates the environment once, opens and migrates the database, seeds the
+ * invented demo on the first start of an empty database, starts the worker pool for long computations,
+ * and serves on 127.0.0.1 unless HOST says otherwise. Environment: docs/web.md ("Running the server").
+ */
 import { serve } from '@hono/node-server';
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { DatabaseFileError, databaseFileFromEnv, openDatabase, seedDemoIfEmpty } from '../db/index.js';
 import { createApp } from './app.js';
+import { readServerConfig, ConfigError } from './config.js';
+import { workerJobs } from './jobs/index.js';
+import { parseAll } from './schemas/common.js';
+import { studyFileSchema, studyInputOf } from './schemas/study.js';
 
-const port = Number(process.env.PORT ?? 3000);
-if (!Number.isInteger(port) || port < 0 || port > 65535) {
-  console.error(`PORT: ${process.env.PORT} is not allowed; expected a whole number from 0 to 65535`);
+function fail(message: string): never {
+  console.error(message);
   process.exit(2);
 }
-const hostname = process.env.HOST ?? '127.0.0.1';
-const app = createApp({ clock: () => new Date() });
-serve({ fetch: app.fetch, port, hostname }, (info) => {
-  console.log(`Runwright listening on http://${hostname}:${info.port}`);
+
+let config;
+let dbFile: string;
+try {
+  config = readServerConfig(process.env);
+  dbFile = databaseFileFromEnv();
+} catch (e) {
+  if (e instanceof ConfigError || e instanceof DatabaseFileError) fail(e.message);
+  throw e;
+}
+
+const { db, sqlite } = openDatabase(dbFile);
+const demoFile = fileURLToPath(new URL('../examples/demo-study.json', import.meta.url));
+const demo = parseAll(studyFileSchema, JSON.parse(readFileSync(demoFile, 'utf8')));
+if (!demo.ok) fail(`examples/demo-study.json is not a valid study file: ${demo.problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`);
+const seeded = seedDemoIfEmpty(db, studyInputOf(demo.value));
+if (seeded.seeded) console.log(`Seeded the invented demo study (study ${seeded.studyId}).`);
+
+const jobs = workerJobs();
+const app = createApp({ db, dbFile, clock: () => new Date(), jobs, ...(config.accessToken ? { accessToken: config.accessToken } : {}) });
+const server = serve({ fetch: app.fetch, port: config.port, hostname: config.host }, (info) => {
+  console.log(`Runwright listening on http://${config.host}:${info.port}${config.accessToken ? ' (access token required)' : ''}; database ${dbFile}`);
 });
+
+let stopping = false;
+function stop(): void {
+  if (stopping) return;
+  stopping = true;
+  server.close(() => {
+    void jobs.close().finally(() => {
+      sqlite.close();
+      process.exit(0);
+    });
+  });
+  setTimeout(() => process.exit(0), 5000).unref();
+}
+process.on('SIGINT', stop);
+process.on('SIGTERM', stop);

@@ -71,13 +71,28 @@ export function unitOf(kind: DisplayKind, system: UnitSystem): UnitDef {
   return UNITS[system][kind];
 }
 
+/**
+ * en-US number formats by decimal places, built once: identical output to
+ * `toLocaleString('en-US', { minimumFractionDigits: d, maximumFractionDigits: d })`, which builds a
+ * new formatter on every call (the appendix PDF formats thousands of values).
+ */
+const NUMBER_FORMATS = new Map<number, Intl.NumberFormat>();
+function numberFormat(d: number): Intl.NumberFormat {
+  let f = NUMBER_FORMATS.get(d);
+  if (f === undefined) {
+    f = new Intl.NumberFormat('en-US', { minimumFractionDigits: d, maximumFractionDigits: d });
+    NUMBER_FORMATS.set(d, f);
+  }
+  return f;
+}
+
 /** Display number (no unit) with the kind's rounding; "—" for missing or non-finite values. */
 export function fmtNumber(si: number | undefined | null, kind: DisplayKind, system: UnitSystem, digits?: number): string {
   if (si === undefined || si === null || !Number.isFinite(si)) return '—';
   const u = unitOf(kind, system);
   const d = digits ?? u.digits;
   const v = u.from(si);
-  return v.toLocaleString('en-US', { minimumFractionDigits: d, maximumFractionDigits: d });
+  return numberFormat(d).format(v);
 }
 
 /** Display number with its unit symbol. */

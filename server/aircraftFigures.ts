@@ -1,0 +1,55 @@
+/**
+ * Key figures of a catalogue aircraft for the list and detail pages: the aeroplane reference field
+ * length (takeoff requirement at MTOW, sea level, ISA, zero wind and slope, dry paved runway; ICAO
+ * Annex 14 definition), VREF at MLW (sea level, ISA) and the classification built on them (aerodrome
+ * reference code, approach category, design group). A profile the models cannot classify gets a note
+ * instead of figures.
+ */
+import {
+  InputDomainError, analyseTakeoff, classifyAircraft, referenceLandingSpeed, type AircraftProfile,
+} from '../core/index.js';
+
+export interface AircraftFigures {
+  readonly arfl_m?: number;
+  readonly vref_mps?: number;
+  readonly aerodromeCode?: string | null;
+  readonly approachCategory?: string;
+  readonly designGroup?: string | null;
+  readonly runwayDesignCode?: string | null;
+  /** Why figures are missing. */
+  readonly note?: string;
+}
+
+/** Figures by the profile's JSON: a profile that has not changed is not analysed again. */
+const memo = new Map<string, AircraftFigures>();
+const MEMO_LIMIT = 2000;
+
+export function aircraftFigures(a: AircraftProfile): AircraftFigures {
+  const key = JSON.stringify(a);
+  const hit = memo.get(key);
+  if (hit) return hit;
+  const f = computeFigures(a);
+  if (memo.size >= MEMO_LIMIT) memo.delete(memo.keys().next().value as string);
+  memo.set(key, f);
+  return f;
+}
+
+function computeFigures(a: AircraftProfile): AircraftFigures {
+  try {
+    const vref_mps = referenceLandingSpeed({ aircraft: a });
+    const to = analyseTakeoff({ aircraft: a, mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry' });
+    if (!to.feasible) return { vref_mps, note: `No reference field length: ${to.message}` };
+    const c = classifyAircraft(a, { arfl_m: to.required_m, vref_mps });
+    return {
+      arfl_m: to.required_m,
+      vref_mps,
+      aerodromeCode: c.aerodromeCode,
+      approachCategory: c.approachCategory,
+      designGroup: c.designGroup.group,
+      runwayDesignCode: c.runwayDesignCode,
+    };
+  } catch (e) {
+    if (e instanceof InputDomainError) return { note: e.message };
+    throw e;
+  }
+}

@@ -1,0 +1,142 @@
+/**
+ * Study forms → SI: the study (name, site, options) and a scenario (name and fleet rows). Numbers are
+ * converted from the user's units; the options are then checked by the study file's zod schema.
+ */
+import { SURFACES, type FleetRowInput, type StudyOptions, type UnitSystem } from '../../core/index.js';
+import { fmtInput } from '../../templates/format.js';
+import { optionsSchema } from '../schemas/study.js';
+import { ident } from '../schemas/common.js';
+import type { FormResult } from './aircraft.js';
+import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from './fields.js';
+
+export interface StudyFields {
+  readonly name: string;
+  readonly siteId: number;
+  readonly options: StudyOptions;
+}
+
+const METHODS = ['physics', 'reference-icao', 'reference-authority', 'calibrated'] as const;
+const POLICIES = ['cruise-45min', 'international', 'custom'] as const;
+
+export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: readonly number[]): FormResult<StudyFields> {
+  const errors: FieldErrors = {};
+  const name = readText(values, 'name', { required: true, max: 200 }, errors);
+  const siteRaw = (values.siteId ?? '').trim();
+  const siteId = /^\d+$/.test(siteRaw) && siteIds.includes(Number(siteRaw)) ? Number(siteRaw) : undefined;
+  if (siteId === undefined) errors.siteId = siteIds.length === 0 ? 'create a site first' : 'choose one of the sites';
+  const units = readChoice(values, 'units', ['si', 'us'] as const, errors, system);
+  const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', min: 1, max: 100000, required: true, integer: true }, system, errors);
+  const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', min: 1, max: 500, required: true }, system, errors);
+  const surface = readChoice(values, 'surface', SURFACES, errors, 'dry');
+  const method = readChoice(values, 'method', METHODS, errors, 'physics');
+  const policy = readChoice(values, 'reservePolicy', POLICIES, errors, 'cruise-45min');
+  const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', min: 0, max: 2_000_000, required: policy === 'custom' }, system, errors);
+  const holding_min = readNumber(values, { name: 'holding', kind: 'count', min: 0, max: 180, required: policy === 'custom' }, system, errors);
+  const contingencyPct = readNumber(values, { name: 'contingency', kind: 'count', min: 0, max: 20, required: false }, system, errors);
+  const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', min: 50, max: 200, required: true }, system, errors);
+  const landingTemperature = readChoice(values, 'landingTemperature', ['isa', 'design'] as const, errors, 'isa');
+  const landingMass = readChoice(values, 'landingMass', ['mlw', 'route'] as const, errors, 'mlw');
+  if (Object.keys(errors).length > 0 || name === undefined || siteId === undefined) return { ok: false, errors };
+  const options = {
+    regularUseThreshold,
+    roundingIncrement_m,
+    surface,
+    method,
+    units,
+    reserves: {
+      policy,
+      ...(alternate_m === undefined ? {} : { alternate_km: alternate_m / 1000 }),
+      ...(holding_min === undefined ? {} : { holding_min }),
+      ...(contingencyPct === undefined ? {} : { contingencyFraction: contingencyPct / 100 }),
+    },
+    passengerMass_kg,
+    landingTemperature,
+    landingMass,
+  };
+  const r = optionsSchema.safeParse(options, { reportInput: true });
+  if (!r.success) {
+    for (const i of r.error.issues) errors[String(i.path[i.path.length - 1] ?? 'name')] ??= localiseMessage(i.message, system);
+    return { ok: false, errors };
+  }
+  return { ok: true, value: { name, siteId, options: { ...r.data, roundingIncrement_m: r.data.roundingIncrement_m ?? roundingIncrement_m! } as StudyOptions } };
+}
+
+/** Display strings of a study's fields. */
+export function studyFormValues(s: { name: string; siteId: number; options: StudyOptions }, system: UnitSystem): Record<string, string> {
+  const o = s.options;
+  return {
+    name: s.name,
+    siteId: String(s.siteId),
+    units: o.units,
+    regularUseThreshold: String(o.regularUseThreshold),
+    roundingIncrement: fmtInput(o.roundingIncrement_m, 'length', system),
+    surface: o.surface,
+    method: o.method,
+    reservePolicy: o.reserves.policy,
+    alternate: o.reserves.alternate_km === undefined ? '' : fmtInput(o.reserves.alternate_km * 1000, 'distance', system),
+    holding: o.reserves.holding_min === undefined ? '' : String(o.reserves.holding_min),
+    contingency: o.reserves.contingencyFraction === undefined ? '' : String(Number((o.reserves.contingencyFraction * 100).toPrecision(9))),
+    passengerMass: fmtInput(o.passengerMass_kg, 'mass', system),
+    landingTemperature: o.landingTemperature,
+    landingMass: o.landingMass,
+  };
+}
+
+/** Defaults of a new study in the user's units (50 m or 100 ft planning increment). */
+export function newStudyValues(system: UnitSystem, siteId?: number): Record<string, string> {
+  return {
+    units: system,
+    ...(siteId === undefined ? {} : { siteId: String(siteId) }),
+    regularUseThreshold: '500',
+    roundingIncrement: system === 'us' ? '100' : '50',
+    surface: 'dry',
+    method: 'physics',
+    reservePolicy: 'cruise-45min',
+    passengerMass: fmtInput(95, 'mass', system),
+    landingTemperature: 'isa',
+    landingMass: 'mlw',
+  };
+}
+
+export const rowField = (i: number, f: 'aircraft' | 'ops' | 'stage' | 'payload'): string => `r${i}_${f}`;
+
+/**
+ * Reads a scenario form: its name and up to `rows` fleet rows; a row left entirely blank is skipped.
+ * Aircraft must be in `aircraftIds`; payload at most that aircraft's maximum payload.
+ */
+export function readScenarioForm(
+  values: FormValues, system: UnitSystem, rows: number, catalogue: ReadonlyMap<string, { maxPayload_kg: number }>,
+): FormResult<{ name: string; fleet: FleetRowInput[] }> {
+  const errors: FieldErrors = {};
+  const name = readText(values, 'name', { required: true, max: 120 }, errors);
+  const fleet: FleetRowInput[] = [];
+  for (let i = 0; i < rows; i++) {
+    const fields = (['aircraft', 'ops', 'stage', 'payload'] as const).map((f) => (values[rowField(i, f)] ?? '').trim());
+    if (fields.every((v) => v === '')) continue;
+    const aircraft = fields[0]!;
+    if (aircraft === '') errors[rowField(i, 'aircraft')] = 'choose an aircraft';
+    else if (!ident.safeParse(aircraft).success || !catalogue.has(aircraft)) errors[rowField(i, 'aircraft')] = `"${aircraft}" is not in the catalogue`;
+    const ops = readNumber(values, { name: rowField(i, 'ops'), kind: 'count', min: 0, max: 1_000_000, required: true, integer: true }, system, errors);
+    const stage_m = readNumber(values, { name: rowField(i, 'stage'), kind: 'distance', min: 1000, max: 20_000_000, required: true }, system, errors);
+    const maxPayload = catalogue.get(aircraft)?.maxPayload_kg ?? 150_000;
+    const payload = readNumber(values, { name: rowField(i, 'payload'), kind: 'mass', min: 0, max: maxPayload, required: true }, system, errors);
+    if (ops !== undefined && stage_m !== undefined && payload !== undefined && errors[rowField(i, 'aircraft')] === undefined) {
+      fleet.push({ aircraft, annualOperations: ops, stageLength_km: stage_m / 1000, payload_kg: payload });
+    }
+  }
+  if (fleet.length > 200) errors.name = 'at most 200 fleet rows per scenario';
+  if (Object.keys(errors).length > 0 || name === undefined) return { ok: false, errors };
+  return { ok: true, value: { name, fleet } };
+}
+
+/** Display strings of a scenario's fields. */
+export function scenarioFormValues(s: { name: string; fleet: readonly FleetRowInput[] }, system: UnitSystem): Record<string, string> {
+  const out: Record<string, string> = { name: s.name };
+  s.fleet.forEach((r, i) => {
+    out[rowField(i, 'aircraft')] = r.aircraft;
+    out[rowField(i, 'ops')] = String(r.annualOperations);
+    out[rowField(i, 'stage')] = fmtInput(r.stageLength_km * 1000, 'distance', system);
+    out[rowField(i, 'payload')] = fmtInput(r.payload_kg, 'mass', system);
+  });
+  return out;
+}

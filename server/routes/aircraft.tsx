@@ -1,0 +1,235 @@
+/**
+ * Aircraft catalogue routes: list (with key figures), create, edit, duplicate, delete (with a
+ * confirmation page), CSV/JSON import and export, and the detail page with its live what-if panel.
+ */
+import { Hono, type Context } from 'hono';
+import type { AircraftProfile, UnitSystem } from '../../core/index.js';
+import {
+  aircraftUses, createAircraft, deleteAircraft, duplicateAircraft, getAircraft, listAircraft, updateAircraft,
+} from '../../db/repos/aircraft.js';
+import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
+import type { Db } from '../../db/types.js';
+import {
+  AircraftDetailPage, AircraftFormPage, AircraftListPage, aircraftFormValues,
+} from '../../templates/pages/aircraft.js';
+import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
+import { WhatIfPanel, WhatIfResult, type WhatIfProps } from '../../templates/whatif.js';
+import { aircraftFigures } from '../aircraftFigures.js';
+import { exportAircraftJson, importAircraftJson } from '../catalogue.js';
+import { readAircraftForm } from '../forms/aircraft.js';
+import { formValues, type FormValues } from '../forms/fields.js';
+import { readWhatIfForm, startingConditions, type WhatIfConditions } from '../forms/whatif.js';
+import { exportAircraftCsv, importAircraftCsv } from '../io/csv.js';
+import { ImportError, formatProblem } from '../io/errors.js';
+import type { JobRunner } from '../jobs/index.js';
+import type { AppEnv } from '../web/env.js';
+import { fragment, isHtmx, page, seeOther, viewOf } from '../web/page.js';
+import { whatIf, type WhatIfOutcome } from '../whatif.js';
+import { InputDomainError } from '../../core/index.js';
+import { download, notFound, formUnits } from './common.js';
+
+export interface AircraftRouteDeps {
+  readonly db: Db;
+  readonly jobs: JobRunner;
+  /** The database file, when there is one: large catalogue imports then run in a worker thread. */
+  readonly dbFile?: string;
+}
+
+const path = (id: string): string => `/aircraft/${encodeURIComponent(id)}`;
+
+/** Reference conditions of the aircraft what-if: sea level, ISA, MTOW, dry, still air, level. */
+function referenceConditions(a: AircraftProfile): WhatIfConditions {
+  return { elevation_m: 0, temperature_c: 15, mass_kg: a.mtow_kg, slope: 0, headwind_mps: 0, surface: 'dry' };
+}
+
+function runWhatIf(a: AircraftProfile, c: WhatIfConditions): { outcome?: WhatIfOutcome; problem?: string } {
+  try {
+    return { outcome: whatIf({ aircraft: a, ...c }) };
+  } catch (e) {
+    if (e instanceof InputDomainError) return { problem: e.message };
+    throw e;
+  }
+}
+
+/** The what-if panel's props for an aircraft, from the query (submitted panel) or the reference conditions. */
+export function aircraftWhatIf(a: AircraftProfile, query: FormValues, system: UnitSystem): { props: WhatIfProps; invalid: boolean } {
+  const start = startingConditions(referenceConditions(a), system, a);
+  const base = runWhatIf(a, start.conditions);
+  const submitted = ['temperature', 'elevation', 'mass', 'slope', 'wind'].some((k) => query[k] !== undefined);
+  const common = {
+    action: `${path(a.id)}/whatif`,
+    baseline: { required_m: base.outcome?.required_m, label: 'sea level, ISA, MTOW, dry, still air' },
+    intro: 'Change the conditions and the requirement follows (physics model; landing at MLW).',
+  };
+  if (!submitted) {
+    return { props: { ...common, values: start.values, errors: {}, ...(base.outcome ? { outcome: base.outcome } : {}), ...(base.problem ? { problem: base.problem } : {}) }, invalid: false };
+  }
+  const read = readWhatIfForm(query, system, a);
+  if (!read.ok) return { props: { ...common, values: query, errors: read.errors }, invalid: true };
+  const r = runWhatIf(a, read.value);
+  return {
+    props: { ...common, values: query, errors: {}, ...(r.outcome ? { outcome: r.outcome } : {}), ...(r.problem ? { problem: r.problem } : {}) },
+    invalid: r.problem !== undefined,
+  };
+}
+
+export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {
+  const { db } = deps;
+  const app = new Hono<AppEnv>();
+
+  const listPage = (c: Context<AppEnv>, extra: { imported?: number; deleted?: string; importProblems?: string[]; importValues?: FormValues }, status: 200 | 422 = 200) => {
+    const rows = listAircraft(db).map((profile) => ({ profile, figures: aircraftFigures(profile) }));
+    return page(c, { title: 'Aircraft', status }, () => <AircraftListPage rows={rows} {...extra} />);
+  };
+
+  app.get('/', (c) => {
+    const imported = c.req.query('imported');
+    const deleted = c.req.query('deleted');
+    return listPage(c, {
+      ...(imported !== undefined && /^\d+$/.test(imported) ? { imported: Number(imported) } : {}),
+      ...(deleted !== undefined ? { deleted } : {}),
+    });
+  });
+
+  app.get('/export.csv', (c) => download(c, exportAircraftCsv(db), 'text/csv; charset=utf-8', 'aircraft.csv'));
+  app.get('/export.json', (c) => download(c, exportAircraftJson(db), 'application/json; charset=utf-8', 'aircraft.json'));
+
+  app.post('/import', async (c) => {
+    const body = await c.req.parseBody();
+    const values = formValues(body);
+    const file = body.file;
+    const fail = (problems: string[]) => listPage(c, { importProblems: problems, importValues: values }, 422);
+    if (!(file instanceof File) || file.size === 0) return fail(['choose a CSV or JSON file to import']);
+    const format = values.format === 'csv' || values.format === 'json' ? values.format : /\.json$/i.test(file.name) ? 'json' : 'csv';
+    const bytes = new Uint8Array(await file.arrayBuffer());
+    const replace = values.replace === 'yes';
+    try {
+      const r = deps.dbFile !== undefined && deps.dbFile !== ':memory:' && deps.jobs.mode === 'workers'
+        ? await deps.jobs.run('catalogue', { dbFile: deps.dbFile, format, data: bytes, replace })
+        : format === 'json'
+          ? importAircraftJson(db, bytes, { replace })
+          : importAircraftCsv(db, bytes, { onExisting: replace ? 'replace' : 'reject' });
+      return seeOther(c, `/aircraft?imported=${r.created.length + r.replaced.length}`);
+    } catch (e) {
+      if (e instanceof ImportError) return fail(e.problems.map(formatProblem));
+      if (e instanceof InputDomainError || e instanceof DuplicateIdError) return fail([e.message]);
+      throw e;
+    }
+  });
+
+  app.get('/new', (c) => {
+    const values = { certification: 'transport', engineType: 'turbofan', gear: 'tricycle', engineCount: '2' };
+    return page(c, { title: 'New aircraft' }, () => <AircraftFormPage mode="new" action="/aircraft" values={values} errors={{}} cancel="/aircraft" />);
+  });
+
+  app.post('/', async (c) => {
+    const values = formValues(await c.req.parseBody());
+    const units = formUnits(c, values);
+    const r = readAircraftForm(values, units);
+    const again = (errors: Record<string, string>) =>
+      page(c, { title: 'New aircraft', status: 422, units }, () => <AircraftFormPage mode="new" action="/aircraft" values={values} errors={errors} cancel="/aircraft" />);
+    if (!r.ok) return again(r.errors);
+    try {
+      createAircraft(db, r.value);
+    } catch (e) {
+      if (e instanceof DuplicateIdError) return again({ id: `"${r.value.id}" is already in the catalogue; choose another identifier` });
+      throw e;
+    }
+    return seeOther(c, `${path(r.value.id)}?saved=1`);
+  });
+
+  app.get('/:id', (c) => {
+    const a = getAircraft(db, c.req.param('id'));
+    if (!a) return notFound(c, 'aircraft', c.req.param('id'));
+    const units = viewOf(c).units;
+    const w = aircraftWhatIf(a, c.req.query(), units);
+    return page(c, { title: a.name, status: w.invalid ? 422 : 200 }, () => (
+      <AircraftDetailPage profile={a} figures={aircraftFigures(a)} uses={aircraftUses(db, a.id)} whatif={w.props} saved={c.req.query('saved') === '1'} />
+    ));
+  });
+
+  app.get('/:id/whatif', (c) => {
+    const a = getAircraft(db, c.req.param('id'));
+    if (!a) return notFound(c, 'aircraft', c.req.param('id'));
+    const units = viewOf(c).units;
+    const w = aircraftWhatIf(a, c.req.query(), units);
+    const status = w.invalid ? 422 : 200;
+    if (isHtmx(c)) {
+      return fragment(c, { status }, () => <WhatIfResult outcome={w.props.outcome} baseline={w.props.baseline} errors={w.props.errors} problem={w.props.problem} oob />);
+    }
+    return page(c, { title: a.name, status }, () => (
+      <AircraftDetailPage profile={a} figures={aircraftFigures(a)} uses={aircraftUses(db, a.id)} whatif={w.props} />
+    ));
+  });
+
+  app.get('/:id/edit', (c) => {
+    const a = getAircraft(db, c.req.param('id'));
+    if (!a) return notFound(c, 'aircraft', c.req.param('id'));
+    const units = viewOf(c).units;
+    return page(c, { title: `Edit ${a.name}` }, () => (
+      <AircraftFormPage mode="edit" action={path(a.id)} values={{ ...aircraftFormValues(a, units) }} errors={{}} hasReferenceTable={a.reference?.table !== undefined} cancel={path(a.id)} />
+    ));
+  });
+
+  app.post('/:id', async (c) => {
+    const id = c.req.param('id');
+    const stored = getAircraft(db, id);
+    if (!stored) return notFound(c, 'aircraft', id);
+    const values = formValues(await c.req.parseBody());
+    const units = formUnits(c, values);
+    const r = readAircraftForm(values, units, stored);
+    const again = (errors: Record<string, string>) =>
+      page(c, { title: `Edit ${stored.name}`, status: 422, units }, () => (
+        <AircraftFormPage mode="edit" action={path(id)} values={values} errors={errors} hasReferenceTable={stored.reference?.table !== undefined} cancel={path(id)} />
+      ));
+    if (!r.ok) return again(r.errors);
+    try {
+      updateAircraft(db, id, r.value);
+    } catch (e) {
+      if (e instanceof DuplicateIdError) return again({ id: `"${r.value.id}" is already in the catalogue; choose another identifier` });
+      throw e;
+    }
+    return seeOther(c, `${path(r.value.id)}?saved=1`);
+  });
+
+  app.post('/:id/duplicate', (c) => {
+    const id = c.req.param('id');
+    const src = getAircraft(db, id);
+    if (!src) return notFound(c, 'aircraft', id);
+    let copyId = `${id}-copy`.slice(0, 64);
+    for (let n = 2; getAircraft(db, copyId); n++) copyId = `${id}-copy-${n}`.slice(-64);
+    duplicateAircraft(db, id, { id: copyId });
+    return seeOther(c, `${path(copyId)}/edit`);
+  });
+
+  app.get('/:id/delete', (c) => {
+    const a = getAircraft(db, c.req.param('id'));
+    if (!a) return notFound(c, 'aircraft', c.req.param('id'));
+    const uses = aircraftUses(db, a.id);
+    const blocked = uses.length > 0 ? new AircraftInUseError(a.id, uses).message : undefined;
+    return page(c, { title: `Delete ${a.name}` }, () => (
+      <ConfirmDeletePage what="aircraft" name={a.name} action={`${path(a.id)}/delete`} cancel={path(a.id)} {...(blocked ? { blocked } : {})} />
+    ));
+  });
+
+  app.post('/:id/delete', async (c) => {
+    const id = c.req.param('id');
+    const a = getAircraft(db, id);
+    if (!a) return notFound(c, 'aircraft', id);
+    const values = formValues(await c.req.parseBody());
+    if (values.confirm !== 'yes') return seeOther(c, `${path(id)}/delete`);
+    try {
+      deleteAircraft(db, id);
+    } catch (e) {
+      if (e instanceof AircraftInUseError) {
+        return page(c, { title: `Delete ${a.name}`, status: 409 }, () => (
+          <ConfirmDeletePage what="aircraft" name={a.name} action={`${path(id)}/delete`} cancel={path(id)} blocked={e.message} />
+        ));
+      }
+      throw e;
+    }
+    return seeOther(c, `/aircraft?deleted=${encodeURIComponent(a.name)}`);
+  });
+
+  return app;
+}

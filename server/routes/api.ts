@@ -1,0 +1,252 @@
+/**
+ * JSON API under /api/: the catalogue, sites, studies, their results, and one-off computations.
+ * Request bodies are JSON (application/json) and are checked with the same zod schemas as the study
+ * file; problems come back as 422 `{ error: "invalid", problems: [{ path, field, value, message }] }`.
+ * Endpoints and examples: docs/web.md ("JSON API").
+ */
+import { Hono, type Context } from 'hono';
+import { z } from 'zod';
+import { InputDomainError, SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type StudyInput } from '../../core/index.js';
+import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
+import {
+  createAircraftMany, deleteAircraft, getAircraft, listAircraft, updateAircraft,
+} from '../../db/repos/aircraft.js';
+import { createSite, getSite, listSites } from '../../db/repos/sites.js';
+import { createStudy, deleteStudy, getStudy, listStudies } from '../../db/repos/studies.js';
+import { transaction } from '../../db/transaction.js';
+import type { Db } from '../../db/types.js';
+import type { JobRunner } from '../jobs/index.js';
+import { aircraftSchema } from '../schemas/aircraft.js';
+import { num, oneOf, parseAll, type Problem } from '../schemas/common.js';
+import { canonicalJson, parseStudyDocument } from '../study.js';
+import { StudyService } from '../studies/state.js';
+import type { AppEnv } from '../web/env.js';
+import { whatIf } from '../whatif.js';
+import { idParam } from './common.js';
+
+export interface ApiRouteDeps {
+  readonly db: Db;
+  readonly jobs: JobRunner;
+  readonly clock: () => Date;
+  readonly service?: StudyService;
+}
+
+const invalid = (c: Context, problems: readonly Problem[]) =>
+  c.json({ error: 'invalid', problems: problems.map((p) => ({ path: p.path, field: p.field, value: p.value === undefined ? null : p.value, message: p.message })) }, 422);
+
+const notFound = (c: Context, what: string, id: string | number | undefined) =>
+  c.json({ error: 'not-found', message: `${what} ${JSON.stringify(id ?? null)} does not exist` }, 404);
+
+async function jsonBody(c: Context): Promise<{ ok: true; value: unknown } | { ok: false; response: Response }> {
+  const text = await c.req.text();
+  if (text.trim() === '') return { ok: false, response: c.json({ error: 'bad-request', message: 'a JSON request body is required' }, 400) };
+  try {
+    return { ok: true, value: JSON.parse(text) as unknown };
+  } catch (e) {
+    return { ok: false, response: c.json({ error: 'bad-json', message: `the body is not valid JSON: ${(e as Error).message}` }, 400) };
+  }
+}
+
+/** The study of the database as a study file document. */
+function studyDocument(input: StudyInput): Record<string, unknown> {
+  return { format: 'runwright-study', version: 1, ...input };
+}
+
+const requirementSchema = z.strictObject({
+  aircraft: z.union([z.string(), aircraftSchema]),
+  conditions: z.strictObject({
+    elevation_m: num(TAKEOFF_INPUT_RANGES.pressureAltitude_m.min, TAKEOFF_INPUT_RANGES.pressureAltitude_m.max, 'm'),
+    temperature_c: num(TAKEOFF_INPUT_RANGES.temperature_c.min, TAKEOFF_INPUT_RANGES.temperature_c.max, '°C'),
+    mass_kg: num(200, 600000, 'kg').optional(),
+    slope: num(TAKEOFF_INPUT_RANGES.slope.min, TAKEOFF_INPUT_RANGES.slope.max, '').default(0),
+    headwind_mps: num(TAKEOFF_INPUT_RANGES.headwind_mps.min, TAKEOFF_INPUT_RANGES.headwind_mps.max, 'm/s').default(0),
+    surface: oneOf(SURFACES as unknown as readonly [string, ...string[]]).default('dry'),
+    landingTemperature: oneOf(['isa', 'design']).default('isa'),
+  }),
+});
+
+export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
+  const { db, jobs } = deps;
+  const service = deps.service ?? new StudyService(db, jobs, deps.clock);
+  const app = new Hono<AppEnv>();
+
+  app.use('*', async (c, next) => {
+    await next();
+    c.header('Cache-Control', 'no-store');
+  });
+
+  app.get('/', (c) => c.json({
+    endpoints: [
+      'GET /api/aircraft', 'GET /api/aircraft/:id', 'POST /api/aircraft', 'PUT /api/aircraft/:id', 'DELETE /api/aircraft/:id',
+      'GET /api/sites', 'GET /api/sites/:id',
+      'GET /api/studies', 'POST /api/studies', 'GET /api/studies/:id', 'DELETE /api/studies/:id',
+      'GET /api/studies/:id/results', 'POST /api/studies/:id/run',
+      'POST /api/compute/study', 'POST /api/compute/requirement',
+    ],
+    docs: 'docs/web.md',
+  }));
+
+  // Aircraft ----------------------------------------------------------------------------------
+  app.get('/aircraft', (c) => c.json(listAircraft(db)));
+  app.get('/aircraft/:id', (c) => {
+    const a = getAircraft(db, c.req.param('id'));
+    return a ? c.json(a) : notFound(c, 'aircraft', c.req.param('id'));
+  });
+  app.post('/aircraft', async (c) => {
+    const body = await jsonBody(c);
+    if (!body.ok) return body.response;
+    const r = parseAll(aircraftSchema, body.value);
+    if (!r.ok) return invalid(c, r.problems);
+    try {
+      const [a] = createAircraftMany(db, [r.value]);
+      c.header('Location', `/api/aircraft/${encodeURIComponent(a!.id)}`);
+      return c.json(a, 201);
+    } catch (e) {
+      if (e instanceof DuplicateIdError) return c.json({ error: 'conflict', message: e.message }, 409);
+      throw e;
+    }
+  });
+  app.put('/aircraft/:id', async (c) => {
+    const id = c.req.param('id');
+    if (!getAircraft(db, id)) return notFound(c, 'aircraft', id);
+    const body = await jsonBody(c);
+    if (!body.ok) return body.response;
+    const r = parseAll(aircraftSchema, body.value);
+    if (!r.ok) return invalid(c, r.problems);
+    try {
+      return c.json(updateAircraft(db, id, r.value));
+    } catch (e) {
+      if (e instanceof DuplicateIdError) return c.json({ error: 'conflict', message: e.message }, 409);
+      throw e;
+    }
+  });
+  app.delete('/aircraft/:id', (c) => {
+    const id = c.req.param('id');
+    if (!getAircraft(db, id)) return notFound(c, 'aircraft', id);
+    try {
+      deleteAircraft(db, id);
+    } catch (e) {
+      if (e instanceof AircraftInUseError) return c.json({ error: 'conflict', message: e.message, uses: e.uses }, 409);
+      throw e;
+    }
+    return c.body(null, 204);
+  });
+
+  // Sites -------------------------------------------------------------------------------------
+  app.get('/sites', (c) => c.json(listSites(db)));
+  app.get('/sites/:id', (c) => {
+    const id = idParam(c.req.param('id'));
+    const s = id === undefined ? undefined : getSite(db, id);
+    return s ? c.json(s) : notFound(c, 'site', c.req.param('id'));
+  });
+
+  // Studies -----------------------------------------------------------------------------------
+  app.get('/studies', (c) => c.json(listStudies(db)));
+  app.get('/studies/:id', (c) => {
+    const id = idParam(c.req.param('id'));
+    if (id === undefined || !getStudy(db, id)) return notFound(c, 'study', c.req.param('id'));
+    const state = service.state(id);
+    return c.json({ ...studyDocument(state.input) }, 200, state.problems.length > 0 ? { 'X-Study-Problems': String(state.problems.length) } : {});
+  });
+
+  /**
+   * Creates a study from a study file: its site becomes a new site, its aircraft join the catalogue
+   * (an aircraft already there must be identical, else 409), then the study is created.
+   */
+  app.post('/studies', async (c) => {
+    const body = await jsonBody(c);
+    if (!body.ok) return body.response;
+    const parsed = parseStudyDocument(body.value);
+    if (!parsed.ok) return invalid(c, parsed.problems);
+    const input = parsed.input;
+    const conflicts: string[] = [];
+    const fresh: AircraftProfile[] = [];
+    for (const a of input.aircraft) {
+      const stored = getAircraft(db, a.id);
+      if (!stored) fresh.push(a);
+      else if (canonicalJson(stored) !== canonicalJson(a)) conflicts.push(a.id);
+    }
+    if (conflicts.length > 0) {
+      return c.json({ error: 'conflict', message: `aircraft ${conflicts.map((x) => `"${x}"`).join(', ')} already in the catalogue with different data; rename them in the file or update the catalogue first`, aircraft: conflicts }, 409);
+    }
+    const id = transaction(db, (tx) => {
+      createAircraftMany(tx, fresh);
+      const siteId = createSite(tx, input.site);
+      return createStudy(tx, { name: input.name, siteId, options: input.options, scenarios: input.scenarios });
+    });
+    c.header('Location', `/api/studies/${id}`);
+    return c.json({ id, createdAircraft: fresh.map((a) => a.id) }, 201);
+  });
+
+  app.delete('/studies/:id', (c) => {
+    const id = idParam(c.req.param('id'));
+    if (id === undefined || !getStudy(db, id)) return notFound(c, 'study', c.req.param('id'));
+    deleteStudy(db, id);
+    return c.body(null, 204);
+  });
+
+  app.get('/studies/:id/results', (c) => {
+    const id = idParam(c.req.param('id'));
+    if (id === undefined || !getStudy(db, id)) return notFound(c, 'study', c.req.param('id'));
+    const state = service.state(id);
+    const latest = state.ready ? service.latest(state) : undefined;
+    if (!latest || !latest.current) {
+      return c.json({
+        error: 'not-computed',
+        state: state.status.state,
+        message: state.problems.length > 0 ? 'the study cannot be computed yet' : 'no result for the current inputs; POST /api/studies/:id/run',
+        problems: state.problems,
+      }, 409);
+    }
+    return c.json({ savedAt: latest.loaded.saved.createdAt, ...latest.loaded.output });
+  });
+
+  app.post('/studies/:id/run', async (c) => {
+    const id = idParam(c.req.param('id'));
+    if (id === undefined || !getStudy(db, id)) return notFound(c, 'study', c.req.param('id'));
+    const state = service.state(id);
+    if (state.problems.length > 0) return c.json({ error: 'invalid', message: 'the study cannot be computed yet', problems: state.problems }, 422);
+    const saved = await service.compute(state);
+    const loaded = service.load(id, saved);
+    return c.json({ savedAt: saved.createdAt, ...loaded.output });
+  });
+
+  // One-off computations ------------------------------------------------------------------------
+  app.post('/compute/study', async (c) => {
+    const body = await jsonBody(c);
+    if (!body.ok) return body.response;
+    const parsed = parseStudyDocument(body.value);
+    if (!parsed.ok) return invalid(c, parsed.problems);
+    return c.json(await jobs.run('study', parsed.input));
+  });
+
+  app.post('/compute/requirement', async (c) => {
+    const body = await jsonBody(c);
+    if (!body.ok) return body.response;
+    const r = parseAll(requirementSchema, body.value);
+    if (!r.ok) return invalid(c, r.problems);
+    const a = typeof r.value.aircraft === 'string' ? getAircraft(db, r.value.aircraft) : (r.value.aircraft as AircraftProfile);
+    if (!a) return notFound(c, 'aircraft', r.value.aircraft as string);
+    const cond = r.value.conditions;
+    try {
+      const outcome = whatIf({
+        aircraft: a,
+        elevation_m: cond.elevation_m,
+        temperature_c: cond.temperature_c,
+        mass_kg: cond.mass_kg ?? a.mtow_kg,
+        slope: cond.slope,
+        headwind_mps: cond.headwind_mps,
+        surface: cond.surface as (typeof SURFACES)[number],
+        landingTemperature: cond.landingTemperature as 'isa' | 'design',
+      });
+      return c.json({ aircraft: a.id, conditions: { ...cond, mass_kg: cond.mass_kg ?? a.mtow_kg }, ...outcome });
+    } catch (e) {
+      if (e instanceof InputDomainError) {
+        return invalid(c, [{ path: `conditions.${e.field.replace(/^aircraft\./, '')}`, field: e.field.split('.').pop() ?? e.field, value: e.value, message: `${String(e.value)} is not allowed; expected ${e.allowed}` }]);
+      }
+      throw e;
+    }
+  });
+
+  return app;
+}

@@ -1,0 +1,113 @@
+/**
+ * One-off requirement for one aircraft at given conditions: the live what-if panel and
+ * POST /api/compute/requirement. Composes core's takeoff and landing analyses (physics model) and
+ * the greater-of rule; no rounding (templates round for display).
+ *
+ * Conventions (docs/web.md, "What-if panel"), the same as the study engine's (core/study/run.ts) so
+ * that the panel at design conditions shows the results table's figures: takeoff at the given mass,
+ * elevation (= pressure altitude), temperature, slope (+ uphill) and wind (+ headwind); landing at MLW
+ * on a level runway with the same wind, at ISA temperature unless `landingTemperature` is 'design'
+ * (then at the given temperature).
+ */
+import {
+  InputDomainError, airAt, analyseLanding, analyseTakeoff, requiredLength,
+  type AircraftProfile, type Surface,
+} from '../core/index.js';
+
+export interface WhatIfInput {
+  readonly aircraft: AircraftProfile;
+  /** Field elevation = pressure altitude, m. */
+  readonly elevation_m: number;
+  /** Outside air temperature, °C. */
+  readonly temperature_c: number;
+  /** Takeoff mass, kg. */
+  readonly mass_kg: number;
+  /** Runway slope, ratio (+ uphill in the takeoff direction). */
+  readonly slope: number;
+  /** Wind along the runway, m/s (+ headwind). */
+  readonly headwind_mps: number;
+  readonly surface: Surface;
+  readonly landingTemperature?: 'isa' | 'design';
+}
+
+export interface WhatIfSide {
+  readonly ok: boolean;
+  /** Required length, m (when ok). */
+  readonly required_m?: number;
+  /** Governing case, e.g. "balanced-field" or "transport". */
+  readonly governing?: string;
+  /** Why it cannot be done here (when not ok). */
+  readonly reason?: string;
+}
+
+export interface WhatIfOutcome {
+  readonly takeoff: WhatIfSide;
+  readonly landing: WhatIfSide;
+  /** The greater of the two, m, when both are possible. */
+  readonly required_m?: number;
+  readonly governing?: 'takeoff' | 'landing';
+  readonly densityAltitude_m: number;
+  readonly isaDeviation_c: number;
+  readonly v1_mps?: number;
+  readonly vr_mps?: number;
+  readonly v2_mps?: number;
+  readonly vref_mps?: number;
+  readonly landingMass_kg: number;
+  readonly warnings: readonly string[];
+}
+
+/** Runs the what-if. Bad input throws InputDomainError (field, value, range); infeasible physics is a result. */
+export function whatIf(input: WhatIfInput): WhatIfOutcome {
+  const a = input.aircraft;
+  const air = airAt(input.elevation_m, input.temperature_c);
+  const warnings: string[] = [];
+  const to = analyseTakeoff({
+    aircraft: a,
+    mass_kg: input.mass_kg,
+    pressureAltitude_m: input.elevation_m,
+    temperature_c: input.temperature_c,
+    slope: input.slope,
+    headwind_mps: input.headwind_mps,
+    surface: input.surface,
+  });
+  warnings.push(...to.warnings);
+  const takeoff: WhatIfSide = to.feasible
+    ? { ok: true, required_m: to.required_m, governing: to.governing }
+    : { ok: false, reason: to.message };
+  if (to.feasible && to.climb.limited) {
+    warnings.push(`Climb-limited: the ${to.climb.case} climb gradient ${(to.climb.gradient * 100).toFixed(2)} % is below the minimum ${(to.climb.minimum * 100).toFixed(2)} %; a longer runway does not cure this.`);
+  }
+  const ld = analyseLanding({
+    aircraft: a,
+    mass_kg: a.mlw_kg,
+    pressureAltitude_m: input.elevation_m,
+    ...(input.landingTemperature === 'design' ? { temperature_c: input.temperature_c } : {}),
+    slope: 0,
+    headwind_mps: input.headwind_mps,
+    surface: input.surface,
+  });
+  warnings.push(...ld.warnings);
+  const landing: WhatIfSide = ld.status === 'ok'
+    ? { ok: true, required_m: ld.required_m, governing: ld.requirement.rule }
+    : { ok: false, reason: ld.reason };
+  let required: { length_m: number; governing: 'takeoff' | 'landing' } | undefined;
+  if (takeoff.ok && landing.ok) required = requiredLength({ takeoff_m: takeoff.required_m!, landing_m: landing.required_m! });
+  return {
+    takeoff,
+    landing,
+    ...(required ? { required_m: required.length_m, governing: required.governing } : {}),
+    densityAltitude_m: air.densityAltitude_m,
+    isaDeviation_c: air.isaDeviation_k,
+    ...(to.speeds.v1_mps === undefined ? {} : { v1_mps: to.speeds.v1_mps }),
+    vr_mps: to.speeds.vr_mps,
+    v2_mps: to.speeds.v2_mps,
+    ...(ld.speeds ? { vref_mps: ld.speeds.vref_mps } : {}),
+    landingMass_kg: a.mlw_kg,
+    warnings: [...new Set(warnings)],
+  };
+}
+
+/** Whether an error is a bad-input error the what-if reports as a field problem. */
+export function isInputError(e: unknown): e is InputDomainError {
+  return e instanceof InputDomainError;
+}

@@ -1,0 +1,62 @@
+/**
+ * The job pool: studies and station files computed in worker threads give the same results and the
+ * same typed errors as inline; while a long computation runs, other requests are still answered.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { getAircraft, openDatabase, seedDemoIfEmpty } from '../../../db/index.js';
+import { aircraftToCsv } from '../../../server/io/csv.js';
+import { ImportError } from '../../../server/io/errors.js';
+import { inlineJobs, workerJobs } from '../../../server/jobs/index.js';
+import { demoInput, makeApp } from './helpers.js';
+
+const pool = workerJobs({ size: 1 });
+afterAll(() => pool.close());
+
+describe('worker-thread job pool', () => {
+  it('computes the demo study exactly as inline does', async () => {
+    const input = demoInput();
+    const [a, b] = await Promise.all([pool.run('study', input), inlineJobs().run('study', input)]);
+    expect(a).toEqual(b);
+  });
+
+  it('carries an ImportError across the thread boundary with its problems', async () => {
+    const err = await pool.run('climate', { format: 'monthly-normals', data: 'not,a,normals,file\n' }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(ImportError);
+    expect((err as ImportError).problems.length).toBeGreaterThan(0);
+  });
+
+  it('imports a catalogue into a database file on its own connection; a bad file changes nothing', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'runwright-jobs-'));
+    const dbFile = join(dir, 'cat.sqlite');
+    const { db, sqlite } = openDatabase(dbFile);
+    try {
+      seedDemoIfEmpty(db, demoInput());
+      const jet = { ...demoInput().aircraft.find((a) => a.id === 'swift-bj8')!, id: 'swift-w', name: 'Swift W' };
+      const csv = aircraftToCsv([jet]);
+      const bad = await pool.run('catalogue', { dbFile, format: 'csv', data: new TextEncoder().encode(csv.replace(`,${jet.mtow_kg},`, ',12,')), replace: false }).catch((e: unknown) => e);
+      expect(bad).toBeInstanceOf(ImportError);
+      expect(getAircraft(db, 'swift-w')).toBeUndefined();
+      const ok = await pool.run('catalogue', { dbFile, format: 'csv', data: new TextEncoder().encode(csv), replace: false });
+      expect(ok.created).toEqual(['swift-w']);
+      // The server's own connection sees the worker's commit.
+      expect(getAircraft(db, 'swift-w')?.name).toBe('Swift W');
+    } finally {
+      sqlite.close();
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('answers other requests while a large study computes', async () => {
+    const { app } = makeApp({ jobs: pool });
+    const base = demoInput();
+    const big = { ...base, scenarios: Array.from({ length: 40 }, (_, i) => ({ ...base.scenarios[i % base.scenarios.length]!, name: `Scenario ${i}` })) };
+    const order: string[] = [];
+    const job = pool.run('study', big).then(() => order.push('study'));
+    const health = Promise.resolve(app.request('/health')).then((r) => { order.push(`health ${r.status}`); });
+    await Promise.all([job, health]);
+    expect(order).toEqual(['health 200', 'study']);
+  });
+});

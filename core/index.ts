@@ -22,3 +22,5 @@ export * from './report/charts.js';
 export * from './calibrate.js';
 export * from './runwayCheck.js';
 export * from './report/siteCharts.js';
+export * from './report/model.js';
+export * from './report/methods.js';

@@ -5,20 +5,13 @@
  * reference code, approach category, design group). A profile the models cannot classify gets a note
  * instead of figures.
  */
+import type { AircraftFiguresView } from '../templates/pages/aircraft.js';
 import {
   InputDomainError, analyseTakeoff, classifyAircraft, referenceLandingSpeed, type AircraftProfile,
 } from '../core/index.js';
 
-export interface AircraftFigures {
-  readonly arfl_m?: number;
-  readonly vref_mps?: number;
-  readonly aerodromeCode?: string | null;
-  readonly approachCategory?: string;
-  readonly designGroup?: string | null;
-  readonly runwayDesignCode?: string | null;
-  /** Why figures are missing. */
-  readonly note?: string;
-}
+/** Key figures of a catalogue aircraft; the view type lives with the template that shows it. */
+export type AircraftFigures = AircraftFiguresView;
 
 /** Figures by the profile's JSON: a profile that has not changed is not analysed again. */
 const memo = new Map<string, AircraftFigures>();

@@ -9,6 +9,7 @@
  * on a level runway with the same wind, at ISA temperature unless `landingTemperature` is 'design'
  * (then at the given temperature).
  */
+import type { WhatIfOutcomeView, WhatIfSide } from '../templates/whatif.js';
 import {
   InputDomainError, airAt, analyseLanding, analyseTakeoff, requiredLength,
   type AircraftProfile, type Surface,
@@ -30,31 +31,8 @@ export interface WhatIfInput {
   readonly landingTemperature?: 'isa' | 'design';
 }
 
-export interface WhatIfSide {
-  readonly ok: boolean;
-  /** Required length, m (when ok). */
-  readonly required_m?: number;
-  /** Governing case, e.g. "balanced-field" or "transport". */
-  readonly governing?: string;
-  /** Why it cannot be done here (when not ok). */
-  readonly reason?: string;
-}
-
-export interface WhatIfOutcome {
-  readonly takeoff: WhatIfSide;
-  readonly landing: WhatIfSide;
-  /** The greater of the two, m, when both are possible. */
-  readonly required_m?: number;
-  readonly governing?: 'takeoff' | 'landing';
-  readonly densityAltitude_m: number;
-  readonly isaDeviation_c: number;
-  readonly v1_mps?: number;
-  readonly vr_mps?: number;
-  readonly v2_mps?: number;
-  readonly vref_mps?: number;
-  readonly landingMass_kg: number;
-  readonly warnings: readonly string[];
-}
+export type { WhatIfSide } from '../templates/whatif.js';
+export type WhatIfOutcome = WhatIfOutcomeView;
 
 /** Runs the what-if. Bad input throws InputDomainError (field, value, range); infeasible physics is a result. */
 export function whatIf(input: WhatIfInput): WhatIfOutcome {

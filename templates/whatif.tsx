@@ -10,10 +10,21 @@ import { fieldId, type Errors, type Values } from './forms.js';
 import { IDS } from './ids.js';
 import { useView } from './view.js';
 
-/** What the panel shows (the server's what-if outcome, structurally). */
+/** One side of the what-if: takeoff or landing. */
+export interface WhatIfSide {
+  readonly ok: boolean;
+  /** Required length, m (when ok). */
+  readonly required_m?: number;
+  /** Governing case, e.g. "balanced-field" or "transport". */
+  readonly governing?: string;
+  /** Why it cannot be done here (when not ok). */
+  readonly reason?: string;
+}
+
+/** What the panel shows: the server's what-if outcome (server/whatif.ts computes it). */
 export interface WhatIfOutcomeView {
-  readonly takeoff: { readonly ok: boolean; readonly required_m?: number; readonly governing?: string; readonly reason?: string };
-  readonly landing: { readonly ok: boolean; readonly required_m?: number; readonly governing?: string; readonly reason?: string };
+  readonly takeoff: WhatIfSide;
+  readonly landing: WhatIfSide;
   readonly required_m?: number;
   readonly governing?: 'takeoff' | 'landing';
   readonly densityAltitude_m: number;

@@ -8,7 +8,8 @@
  * The web page (SVG) and the PDF draw exactly these models.
  */
 import type { AircraftProfile } from '../aircraft.js';
-import { payloadForRange, payloadRangeDiagram, type ReservePolicy } from '../route/index.js';
+import { payloadForRange, payloadRangeDiagram } from '../route/index.js';
+import { reservePolicyOf } from '../study/run.js';
 import type { StudyInput, StudyResult, ScenarioResult } from '../study/types.js';
 import type { ChartModel, ChartPoint, ChartSeries } from './chart.js';
 
@@ -95,17 +96,9 @@ export function operationsServedChart(result: StudyResult): ChartModel {
   };
 }
 
-function reservesOf(input: StudyInput): ReservePolicy {
-  const r = input.options.reserves;
-  const alt = r.alternate_km === undefined ? {} : { alternateDistance_m: r.alternate_km * 1000 };
-  if (r.policy === 'cruise-45min') return { kind: 'cruise-45min', ...alt };
-  if (r.policy === 'international') return { kind: 'international', ...alt, ...(r.holding_min === undefined ? {} : { holdMinutes: r.holding_min }) };
-  return { kind: 'custom', alternateDistance_m: (r.alternate_km ?? 0) * 1000, holdMinutes: r.holding_min ?? 45, ...(r.contingencyFraction === undefined ? {} : { contingencyFraction: r.contingencyFraction }) };
-}
-
 export function payloadRangeChart(result: StudyResult, input: StudyInput, aircraft: AircraftProfile): ChartModel | undefined {
   if (!aircraft.cruise) return undefined;
-  const reserves = reservesOf(input);
+  const reserves = reservePolicyOf(input.options.reserves);
   const diagram = payloadRangeDiagram({ aircraft, reserves });
   if (diagram.status !== 'ok') return undefined;
   const series: ChartSeries[] = [

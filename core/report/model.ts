@@ -16,6 +16,7 @@
 import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type QuantityKind } from '../aircraft.js';
 import { CAUTION_TEXT, CAUTION_TITLE } from '../caution.js';
 import { SURFACE_LABELS } from '../surface.js';
+import { monthName } from '../climate/index.js';
 import type {
   RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
 } from '../study/types.js';
@@ -145,8 +146,6 @@ const q = (si: number | null | undefined, kind: ValueKind, digits?: number): Cel
 const exact = (si: number | null | undefined, kind: QuantityKind): Cell => ({ si, kind, listing: true });
 const row = (...cells: Cell[]): Row => ({ cells });
 
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
-export const monthName = (m: number): string => MONTHS[m - 1] ?? `month ${m}`;
 const yesNo = (b: boolean): string => (b ? 'yes' : 'no');
 
 /** Kind of a trace item from its SI unit; undefined when the formatter has no kind for it. */

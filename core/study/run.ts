@@ -68,7 +68,8 @@ export function roundUpToIncrement(length_m: number, increment_m: number): numbe
   return Math.max(0, n) * increment_m;
 }
 
-function reservePolicyOf(r: StudyReserves): ReservePolicy {
+/** The route model's reserve policy for a study's reserve option. */
+export function reservePolicyOf(r: StudyReserves): ReservePolicy {
   const alt = r.alternate_km === undefined ? {} : { alternateDistance_m: r.alternate_km * 1000 };
   switch (r.policy) {
     case 'cruise-45min': return { kind: 'cruise-45min', ...alt };

@@ -17,7 +17,7 @@ import type { StudyInput, UnitSystem } from '../../core/index.js';
 import { studyCharts } from '../../core/report/charts.js';
 import {
   buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row, type ValueKind,
-} from '../../core/report/model.js';
+} from '../../core/index.js';
 import { fmt, fmtLengthBoth, fmtNumber, fmtPct, unitOf, UNIT_SYSTEM_LABELS } from '../../templates/format.js';
 import { canonicalJson, inputDigest, type StudyOutput } from '../study.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';

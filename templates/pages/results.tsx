@@ -5,32 +5,18 @@
  * nothing is recomputed here, only formatted.
  */
 import type { ChartModel, RowResult, ScenarioResult, StudyResult, TraceItem } from '../../core/index.js';
-import { SURFACE_LABELS } from '../../core/index.js';
+import { SURFACE_LABELS, kindOfUnit } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { PostForm, Warnings } from '../components.js';
-import { fmt, fmtLengthBoth, fmtPct, fmtSlope, type DisplayKind } from '../format.js';
+import { fmt, fmtLengthBoth, fmtPct, fmtSlope } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 import { UnitsNote } from './studies.js';
 
-/** Display kind of a trace item's SI unit; undefined when it has none (shown with its own unit). */
-function kindOf(unit: string): DisplayKind | undefined {
-  switch (unit) {
-    case 'm': return 'length';
-    case 'kg': return 'mass';
-    case 'm/s': return 'speed';
-    case 's': return 'time';
-    case 'N': return 'force';
-    case 'W': return 'power';
-    case '°C': case 'degC': return 'temperature';
-    case '': case 'ratio': case '-': return 'ratio';
-    default: return undefined;
-  }
-}
-
 function traceValue(t: TraceItem, units: 'si' | 'us'): string {
-  const k = kindOf(t.unit);
   if (t.unit === '%') return `${t.value.toFixed(2)} %`;
+  const kind = kindOfUnit(t.unit);
+  const k = kind === 'percent' ? undefined : kind;
   return k ? fmt(t.value, k, units) : `${t.value.toPrecision(4)} ${t.unit}`;
 }
 

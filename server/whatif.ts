@@ -49,12 +49,14 @@ export function whatIf(input: WhatIfInput): WhatIfOutcome {
     surface: input.surface,
   });
   warnings.push(...to.warnings);
-  const takeoff: WhatIfSide = to.feasible
+  // Above the climb-limited mass no runway length makes the takeoff legal, so no length is shown
+  // (the distance the model gives there can be kilometres of near-level engine-out flight).
+  const climbLimit = to.climb.limited
+    ? `Climb-limited: the ${to.climb.case} climb gradient ${(to.climb.gradient * 100).toFixed(2)} % is below the minimum ${(to.climb.minimum * 100).toFixed(2)} %; ${to.climb.maxMass_kg === undefined ? 'no mass above the empty mass meets it' : `the greatest mass meeting it is ${Math.floor(to.climb.maxMass_kg)} kg`}. A longer runway does not cure this.`
+    : undefined;
+  const takeoff: WhatIfSide = to.feasible && !climbLimit
     ? { ok: true, required_m: to.required_m, governing: to.governing }
-    : { ok: false, reason: to.message };
-  if (to.feasible && to.climb.limited) {
-    warnings.push(`Climb-limited: the ${to.climb.case} climb gradient ${(to.climb.gradient * 100).toFixed(2)} % is below the minimum ${(to.climb.minimum * 100).toFixed(2)} %; a longer runway does not cure this.`);
-  }
+    : { ok: false, reason: climbLimit ?? (to.feasible ? '' : to.message) };
   const ld = analyseLanding({
     aircraft: a,
     mass_kg: a.mlw_kg,

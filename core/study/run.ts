@@ -108,11 +108,6 @@ export function siteConditions(input: StudyInput): SiteConditions {
       ...(d.olderFormula ? { olderFormula_c: d.olderFormula.art_c } : {}),
     };
     warnings.push(...d.warnings);
-    if (d.monthsDiffer) {
-      warnings.push(
-        `The hottest month by mean temperature (month ${d.hottestMonth}, ${d.art_c.toFixed(1)} °C mean maximum) differs from the month with the highest mean maximum (month ${d.maxMeanMaxMonth}, ${d.maxMeanMax_c.toFixed(1)} °C).`,
-      );
-    }
   }
   if (site.designTemperature_c !== undefined) {
     designTemperature_c = inRange('site.designTemperature_c', site.designTemperature_c, { min: -30, max: 55, unit: '°C' });

@@ -66,6 +66,12 @@ export const VREF_TEXTBOOK_FACTOR = 1.3;
 
 export type LandingRule = 'transport' | 'turboprop-alternate' | 'light';
 export const LANDING_RULES: readonly LandingRule[] = ['transport', 'turboprop-alternate', 'light'];
+/** Plain words for each operating rule (pages, appendix, what-if). */
+export const LANDING_RULE_LABELS: Readonly<Record<LandingRule, string>> = {
+  transport: 'transport rule (distance / 0.6)',
+  'turboprop-alternate': 'turboprop alternate rule (distance / 0.7)',
+  light: 'light-aircraft factor',
+};
 /** 'profile': VREF = profile.vrefFactor × VSR0 (default); '1.3vs': VREF = 1.3 × VS. */
 export type VrefBasis = 'profile' | '1.3vs';
 

@@ -6,10 +6,11 @@
 import { FT, HP, KT, LB, LBF, NM, cToF, type QuantityKind, type UnitSystem } from '../core/index.js';
 
 /**
- * Display kinds: core's quantity kinds plus route distance (km / NM) and slopes shown in percent.
+ * Display kinds: core's quantity kinds plus slopes shown in percent and temperature differences (no
+ * offset: 1 K = 1.8 °F).
  * Route distances are SI metres on the way in (a `_km` value is multiplied by 1000 first).
  */
-export type DisplayKind = QuantityKind | 'distance' | 'slopePct';
+export type DisplayKind = QuantityKind | 'slopePct' | 'temperatureDelta';
 
 export interface UnitDef {
   readonly symbol: string;
@@ -46,6 +47,7 @@ const UNITS: Record<UnitSystem, Record<DisplayKind, UnitDef>> = {
     bsfc: lin('kg/kWh', 1, 3),
     distance: lin('km', 1000, 0),
     slopePct: lin('%', 0.01, 2),
+    temperatureDelta: lin('K', 1, 1),
   },
   us: {
     length: lin('ft', FT, 0),
@@ -64,6 +66,7 @@ const UNITS: Record<UnitSystem, Record<DisplayKind, UnitDef>> = {
     bsfc: lin('lb/(hp·h)', LB / (HP / 1000), 3),
     distance: lin('NM', NM, 0),
     slopePct: lin('%', 0.01, 2),
+    temperatureDelta: lin('°F', 1 / 1.8, 1),
   },
 };
 
@@ -156,3 +159,9 @@ export const UNIT_SYSTEM_LABELS: Readonly<Record<UnitSystem, string>> = {
   si: 'SI (m, kg, °C)',
   us: 'US customary (ft, lb, °F)',
 };
+
+/** Deviation from the standard temperature, e.g. "ISA +28.7 K" or "ISA +51.7 °F" (a difference: no offset). */
+export function fmtIsaDeviation(dev_c: number, system: UnitSystem): string {
+  if (!Number.isFinite(dev_c)) return '—';
+  return `ISA ${dev_c >= 0 ? '+' : '−'}${fmt(Math.abs(dev_c), 'temperatureDelta', system)}`;
+}

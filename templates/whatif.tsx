@@ -4,8 +4,8 @@
  * typed in is never replaced); field errors travel as out-of-band swaps. Without JavaScript the
  * "Update" button submits the same GET and the whole page comes back.
  */
-import { SURFACES, SURFACE_LABELS } from '../core/index.js';
-import { fmt, fmtLengthBoth, unitSymbol, type DisplayKind } from './format.js';
+import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../core/index.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol, type DisplayKind } from './format.js';
 import { fieldId, type Errors, type Values } from './forms.js';
 import { IDS } from './ids.js';
 import { useView } from './view.js';
@@ -62,16 +62,7 @@ export const WHATIF_FIELDS: readonly { name: string; label: string; kind: Displa
 
 const errId = (name: string): string => `e-wi-${name}`;
 
-const CASE_LABELS: Readonly<Record<string, string>> = {
-  'all-engines-factored': '1.15 × all-engines distance',
-  'all-engines': 'all-engines distance',
-  'balanced-field': 'balanced field length',
-  'engine-out': 'engine-out continued takeoff',
-  'accelerate-stop': 'accelerate-stop distance',
-  transport: 'transport rule (distance ÷ 0.6)',
-  'turboprop-alternate': 'turboprop alternate rule (distance ÷ 0.7)',
-  light: 'light-aircraft rule',
-};
+const CASE_LABELS: Readonly<Record<string, string>> = { ...TAKEOFF_GOVERNING_LABELS, ...LANDING_RULE_LABELS };
 const caseLabel = (c: string | undefined): string => (c === undefined ? '' : CASE_LABELS[c] ?? c);
 
 function FieldError(p: { name: string; message?: string; oob?: boolean }) {
@@ -129,7 +120,7 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
               <tbody>
                 <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? caseLabel(o.takeoff.governing) : o.takeoff.reason}</td></tr>
                 <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? caseLabel(o.landing.governing) : o.landing.reason}</td></tr>
-                <tr><th scope="row">Density altitude</th><td class="num">{fmt(o.densityAltitude_m, 'altitude', units)}</td><td>ISA {o.isaDeviation_c >= 0 ? '+' : '−'}{units === 'si' ? `${Math.abs(o.isaDeviation_c).toFixed(1)} °C` : `${(Math.abs(o.isaDeviation_c) * 1.8).toFixed(1)} °F`}</td></tr>
+                <tr><th scope="row">Density altitude</th><td class="num">{fmt(o.densityAltitude_m, 'altitude', units)}</td><td>{fmtIsaDeviation(o.isaDeviation_c, units)}</td></tr>
                 <tr><th scope="row">Speeds</th><td colspan={2}>
                   {o.v1_mps !== undefined ? `V1 ${fmt(o.v1_mps, 'speed', units)}, ` : ''}VR {fmt(o.vr_mps, 'speed', units)}, V2 {fmt(o.v2_mps, 'speed', units)}
                   {o.vref_mps !== undefined ? `, VREF ${fmt(o.vref_mps, 'speed', units)}` : ''} (true airspeed)

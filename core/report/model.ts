@@ -33,7 +33,7 @@ import { METHOD_ENTRIES, STUDY_METHOD_LABEL, referencesFor } from './methods.js'
  * ('percent'), a runway length in both unit systems ('lengthBoth'), or a number of passengers
  * ('passengers', shown rounded up to whole passengers).
  */
-export type ValueKind = QuantityKind | 'slopePct' | 'percent' | 'lengthBoth' | 'passengers';
+export type ValueKind = QuantityKind | 'slopePct' | 'temperatureDelta' | 'percent' | 'lengthBoth' | 'passengers';
 
 /**
  * One value: text, or an SI number with its kind. `listing` asks for every significant digit (input
@@ -171,16 +171,7 @@ function traceCell(item: TraceItem): Cell {
   return k ? q(item.value, k) : { si: item.value, unit: item.unit };
 }
 
-const GOVERNING_LABEL: Readonly<Record<string, string>> = {
-  'all-engines-factored': '1.15 x all engines',
-  'all-engines': 'all engines',
-  'balanced-field': 'balanced field',
-  'engine-out': 'engine out',
-  'accelerate-stop': 'accelerate-stop',
-};
 
-/** Plain label of a takeoff governing case name from the result (names already in words pass through). */
-export const governingLabel = (name: string): string => GOVERNING_LABEL[name] ?? name;
 
 // ---------------------------------------------------------------------------------------------
 // Builder
@@ -293,7 +284,7 @@ function siteBlocks(input: StudyInput, result: StudyResult): Block[] {
     { label: 'Pressure altitude used', value: q(s.pressureAltitude_m, 'altitude') },
     { label: 'Design temperature', value: q(s.designTemperature_c, 'temperature') },
     { label: 'Standard (ISA) temperature at the elevation', value: q(s.standardTemperature_c, 'temperature') },
-    { label: 'Deviation from ISA', value: q(s.isaDeviation_c, 'temperature') },
+    { label: 'Deviation from ISA', value: q(s.isaDeviation_c, 'temperatureDelta') },
     { label: 'Air density at design conditions', value: { si: s.density_kgm3, unit: 'kg/m³' } },
     { label: 'Density altitude', value: q(s.densityAltitude_m, 'altitude') },
     { label: 'Design runway (gradient used for takeoff)', value: t(s.designRunway) },
@@ -399,7 +390,7 @@ export function climbLimitedRow(r: RowResult): boolean {
 
 function takeoffCaseText(r: RowResult): string {
   if (r.status !== 'ok') return 'cannot operate';
-  const g = r.governing === 'takeoff' && r.takeoff ? `takeoff (${governingLabel(r.takeoff.governing)})` : r.governing;
+  const g = r.governing === 'takeoff' && r.takeoff ? `takeoff (${r.takeoff.governing})` : r.governing;
   return climbLimitedRow(r) ? `${g}; climb-limited` : g;
 }
 
@@ -512,7 +503,7 @@ function componentRows(rows: readonly RowResult[]): Row[] {
     { label: 'Calibration factor', value: (r) => (ok(r) && r.takeoff?.calibrationFactor !== undefined ? q(r.takeoff.calibrationFactor, 'ratio') : undefined) },
     { label: 'Torenbeek balanced field length (indicative)', value: (r) => (ok(r) && r.takeoff?.torenbeek_m !== undefined ? q(r.takeoff.torenbeek_m, 'length') : undefined) },
     { label: 'Roskam takeoff length (indicative)', value: (r) => (ok(r) && r.takeoff?.roskam_m !== undefined ? q(r.takeoff.roskam_m, 'length') : undefined) },
-    { label: 'Takeoff governing case', value: (r) => (ok(r) && r.takeoff ? t(governingLabel(r.takeoff.governing)) : undefined) },
+    { label: 'Takeoff governing case', value: (r) => (ok(r) && r.takeoff ? t(r.takeoff.governing) : undefined) },
     { label: 'Takeoff requirement', value: (r) => (ok(r) && r.takeoff ? q(r.takeoff.required_m, 'length') : undefined), bold: true },
   ]);
   section('Landing', [

@@ -28,12 +28,12 @@ import { classifyAircraft } from '../classify.js';
 import { designTemperatureFromMonthly } from '../climate/index.js';
 import { CAUTIONS } from '../caution.js';
 import { InputDomainError } from '../errors.js';
-import { analyseLanding, referenceLandingSpeed } from '../landing.js';
+import { LANDING_RULE_LABELS, analyseLanding, referenceLandingSpeed } from '../landing.js';
 import { referenceLengthAtSite } from '../reference.js';
 import { requiredLength } from '../requirement.js';
 import { designTakeoffMass, type ReservePolicy, type RouteResult } from '../route/index.js';
 import { analyseRunwayProfile, checkDeclaredDistances } from '../runway.js';
-import { analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
+import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
 import { validateAircraft } from '../aircraft.js';
 import { calibrateTakeoff, type TakeoffCalibrationResult } from '../calibrate.js';
@@ -249,16 +249,6 @@ function takeoffComponents(t: TakeoffResult): TraceItem[] {
   return out;
 }
 
-function governingLabel(g: string): string {
-  switch (g) {
-    case 'all-engines-factored': return '115 % all-engines distance';
-    case 'balanced-field': return 'balanced field length';
-    case 'engine-out': return 'engine-out continued takeoff';
-    case 'accelerate-stop': return 'accelerate-stop distance';
-    case 'all-engines': return 'all-engines distance';
-    default: return g;
-  }
-}
 
 function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, AircraftClassificationSummary>): AircraftClassificationSummary {
   const hit = cache.get(a.id);
@@ -367,7 +357,7 @@ function evaluateRow(
   } = {
     method: opts.method,
     required_m: t.required_m,
-    governing: governingLabel(t.governing),
+    governing: TAKEOFF_GOVERNING_LABELS[t.governing],
     components: takeoffComponents(t),
     ...(t.speeds.v1_mps === undefined ? {} : { v1_mps: t.speeds.v1_mps }),
     vr_mps: t.speeds.vr_mps,
@@ -426,7 +416,7 @@ function evaluateRow(
     mass_kg: landingMass,
     distance_m: l.distance_m,
     required_m: l.required_m,
-    rule: l.requirement.rule,
+    rule: LANDING_RULE_LABELS[l.requirement.rule],
     factor: l.requirement.multiplier,
     vref_mps: l.speeds.vref_mps,
     components: [

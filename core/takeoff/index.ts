@@ -46,7 +46,7 @@ export type { TakeoffSetup } from './model.js';
 export { airborneDistance, rotationDistance, TRANSITION_LOAD_FACTOR } from './airborne.js';
 export { gearDragIncrement, climbAtV2 } from './climb.js';
 export {
-  ALL_ENGINES_FACTOR, STOP_ALLOWANCE_S, climbMinimum, screenHeight, takeoffDistance25113, takeoffRun25113,
+  ALL_ENGINES_FACTOR, STOP_ALLOWANCE_S, TAKEOFF_GOVERNING_LABELS, climbMinimum, screenHeight, takeoffDistance25113, takeoffRun25113,
 } from './regulations.js';
 export {
   roskamTop23, roskamTop25, torenbeekBfl, torenbeekMeanThrustPropeller, torenbeekMeanThrustTurbofan,

@@ -15,6 +15,7 @@
  *
  * Validity: dry-runway rules; the wet-runway 15-ft screen of 25.113(b) is not modelled.
  */
+import type { GoverningCase } from './types.js';
 import type { CertificationBasis } from '../aircraft.js';
 import { FT } from '../units.js';
 
@@ -68,3 +69,12 @@ export function climbMinimum(basis: CertificationBasis, engineCount: number): Cl
   }
   return { minimum: 0, source: 'positive engine-out gradient (common practice)' };
 }
+
+/** Plain words for each governing case, used by pages, the appendix and the what-if panel. */
+export const TAKEOFF_GOVERNING_LABELS: Readonly<Record<GoverningCase, string>> = {
+  'all-engines-factored': '115 % of the all-engines distance',
+  'all-engines': 'all-engines distance',
+  'balanced-field': 'balanced field length',
+  'engine-out': 'engine-out continued takeoff',
+  'accelerate-stop': 'accelerate-stop distance',
+};

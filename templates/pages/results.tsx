@@ -8,7 +8,7 @@ import type { ChartModel, RowResult, ScenarioResult, StudyResult, TraceItem } fr
 import { SURFACE_LABELS, kindOfUnit } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { PostForm, Warnings } from '../components.js';
-import { fmt, fmtLengthBoth, fmtPct, fmtSlope } from '../format.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtPct, fmtSlope } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 import { UnitsNote } from './studies.js';
@@ -240,7 +240,7 @@ export function ResultsContent(p: ResultsPageProps) {
         <tbody>
           <tr><th scope="row">Site</th><td>{site.name}</td></tr>
           <tr><th scope="row">Elevation (pressure altitude)</th><td>{fmt(site.elevation_m, 'altitude', units)}</td></tr>
-          <tr><th scope="row">Design temperature</th><td>{fmt(site.designTemperature_c, 'temperature', units)} ({site.designTemperatureSource === 'climate' ? 'mean daily maximum of the hottest month' : 'entered for the site'}); ISA {site.isaDeviation_c >= 0 ? '+' : '−'}{Math.abs(site.isaDeviation_c).toFixed(1)} K</td></tr>
+          <tr><th scope="row">Design temperature</th><td>{fmt(site.designTemperature_c, 'temperature', units)} ({site.designTemperatureSource === 'climate' ? 'mean daily maximum of the hottest month' : 'entered for the site'}); {fmtIsaDeviation(site.isaDeviation_c, units)}</td></tr>
           <tr><th scope="row">Density altitude</th><td>{fmt(site.densityAltitude_m, 'altitude', units)}</td></tr>
           <tr><th scope="row">Design runway and slope</th><td>{site.designRunway}, effective gradient {fmtSlope(site.designSlope)}</td></tr>
           <tr><th scope="row">Surface</th><td>{SURFACE_LABELS[r.options.surface]}</td></tr>

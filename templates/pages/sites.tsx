@@ -4,6 +4,7 @@
  * chart and declared distances, the station-file import), and the runway form.
  */
 import type { ChartModel, RunwayInput, SiteInput, UnitSystem } from '../../core/index.js';
+import { monthName } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { ImportProblems, Notice, PostForm, Warnings } from '../components.js';
 import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
@@ -12,8 +13,6 @@ import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 
 export const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
-const MONTH_LONG = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
-const monthLong = (m: number): string => MONTH_LONG[m - 1] ?? `month ${m}`;
 const mf = (m: number, w: 'max' | 'min' | 'mean'): string => `m${m}_${w}`;
 const df = (i: number, f: string): string => `d${i}_${f}`;
 
@@ -73,7 +72,7 @@ export function siteFormValues(s: SiteInput, system: UnitSystem): Record<string,
 const SITE_LABELS: Record<string, string> = {
   name: 'Name', elevation: 'Elevation', designTemperature: 'Design temperature', climateSource: 'Climate source', climateYears: 'Years of record',
   ...Object.fromEntries([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12].flatMap((m) => [
-    [mf(m, 'max'), `${monthLong(m)} mean daily maximum`], [mf(m, 'min'), `${monthLong(m)} mean daily minimum`], [mf(m, 'mean'), `${monthLong(m)} mean`],
+    [mf(m, 'max'), `${monthName(m)} mean daily maximum`], [mf(m, 'min'), `${monthName(m)} mean daily minimum`], [mf(m, 'mean'), `${monthName(m)} mean`],
   ])),
 };
 
@@ -118,9 +117,9 @@ export function SiteFormPage(p: { mode: 'new' | 'edit'; action: string; values: 
                 {MONTHS.map((name, i) => (
                   <tr>
                     <th scope="row">{name}</th>
-                    <MonthInput name={mf(i + 1, 'max')} label={`${monthLong(i + 1)} mean daily maximum (${t})`} values={p.values} errors={p.errors} />
-                    <MonthInput name={mf(i + 1, 'min')} label={`${monthLong(i + 1)} mean daily minimum (${t})`} values={p.values} errors={p.errors} />
-                    <MonthInput name={mf(i + 1, 'mean')} label={`${monthLong(i + 1)} mean (${t})`} values={p.values} errors={p.errors} />
+                    <MonthInput name={mf(i + 1, 'max')} label={`${monthName(i + 1)} mean daily maximum (${t})`} values={p.values} errors={p.errors} />
+                    <MonthInput name={mf(i + 1, 'min')} label={`${monthName(i + 1)} mean daily minimum (${t})`} values={p.values} errors={p.errors} />
+                    <MonthInput name={mf(i + 1, 'mean')} label={`${monthName(i + 1)} mean (${t})`} values={p.values} errors={p.errors} />
                   </tr>
                 ))}
               </tbody>
@@ -181,10 +180,10 @@ function DesignTemperature(p: { d: DesignTemperatureView }) {
           <caption>Hottest month, by both criteria</caption>
           <tbody>
             <tr><th scope="row">Hottest month by mean temperature (aerodrome reference temperature)</th>
-              <td>{monthLong(d.hottestMonth!)} (mean {fmt(d.hottestMonthMean_c, 'temperature', units)})</td>
+              <td>{monthName(d.hottestMonth!)} (mean {fmt(d.hottestMonthMean_c, 'temperature', units)})</td>
               <td class="num"><strong>{fmt(d.art_c, 'temperature', units)}</strong> mean daily maximum</td></tr>
             <tr><th scope="row">Month with the highest mean daily maximum</th>
-              <td>{monthLong(d.maxMeanMaxMonth!)}</td>
+              <td>{monthName(d.maxMeanMaxMonth!)}</td>
               <td class="num">{fmt(d.maxMeanMax_c, 'temperature', units)}</td></tr>
             {d.olderFormula_c !== undefined ? (
               <tr><th scope="row">Older formula Ta + (Tm − Ta)/3, hottest month</th><td></td><td class="num">{fmt(d.olderFormula_c, 'temperature', units)}</td></tr>

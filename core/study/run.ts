@@ -196,13 +196,13 @@ class Evaluator {
     return c.status === 'ok' ? c.factor : 1;
   }
 
-  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, thrustScale = this.thrustScale(a)): TakeoffResult {
-    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${thrustScale}`;
+  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, thrustScale = this.thrustScale(a), surface = this.options.surface): TakeoffResult {
+    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${thrustScale}|${surface}`;
     let r = this.takeoffCache.get(key);
     if (!r) {
       r = analyseTakeoff({
         aircraft: a, mass_kg, pressureAltitude_m: c.pressureAltitude_m, temperature_c: c.temperature_c,
-        slope: c.slope, headwind_mps: 0, surface: this.options.surface, thrustScale,
+        slope: c.slope, headwind_mps: 0, surface, thrustScale,
       });
       this.takeoffCache.set(key, r);
     }
@@ -254,10 +254,11 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
   const hit = cache.get(a.id);
   if (hit) return hit;
   // Aeroplane reference field length: the flight-manual value when the profile carries one, else the
-  // model at MTOW, sea level, ISA, still air, zero slope (ICAO Annex 14 definition).
+  // model at MTOW, sea level, ISA, still air, zero slope, dry paved runway (ICAO Annex 14 definition),
+  // whatever the study's design surface.
   let arfl = a.reference?.takeoff_m;
   if (arfl === undefined) {
-    const t = ev.takeoff(a, a.mtow_kg, { pressureAltitude_m: 0, temperature_c: 15, slope: 0 }, 1);
+    const t = ev.takeoff(a, a.mtow_kg, { pressureAltitude_m: 0, temperature_c: 15, slope: 0 }, 1, 'dry');
     arfl = t.feasible ? t.required_m : undefined;
   }
   const vref = referenceLandingSpeed({ aircraft: a });

@@ -162,6 +162,13 @@ describe('runStudy on the invented demo study', () => {
     expect(r.warnings.join(' ')).toMatch(/Climb-limited at the design mass .* a longer runway cannot cure this/);
     expect(r.takeoff!.climbLimited).toBe(false); // at the offloaded mass the gradient is met
   });
+  it('classifies on the dry-runway reference field length whatever the design surface (Annex 14 ARFL definition)', () => {
+    const wet = clone(demo);
+    wet.options.surface = 'wet';
+    const dryRows = result.scenarios[1]!.rows;
+    const wetRows = runStudy(input(wet)).scenarios[1]!.rows;
+    for (let i = 0; i < dryRows.length; i++) expect(wetRows[i]!.classification).toEqual(dryRows[i]!.classification);
+  });
   it('reports a route beyond reach', () => {
     const doc = clone(minimal);
     doc.scenarios[0]!.fleet[0]!.stageLength_km = 9000;

@@ -6,12 +6,12 @@
 import { serve } from '@hono/node-server';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { DatabaseFileError, databaseFileFromEnv, openDatabase, seedDemoIfEmpty } from '../db/index.js';
+import { DatabaseFileError, databaseFileFromEnv, openDatabase } from '../db/index.js';
+import { seedDemoWithResults } from './seed.js';
 import { createApp } from './app.js';
 import { readServerConfig, ConfigError } from './config.js';
 import { workerJobs } from './jobs/index.js';
-import { parseAll } from './schemas/common.js';
-import { studyFileSchema, studyInputOf } from './schemas/study.js';
+import { parseStudyDocument } from './study.js';
 
 function fail(message: string): never {
   console.error(message);
@@ -30,10 +30,10 @@ try {
 
 const { db, sqlite } = openDatabase(dbFile);
 const demoFile = fileURLToPath(new URL('../examples/demo-study.json', import.meta.url));
-const demo = parseAll(studyFileSchema, JSON.parse(readFileSync(demoFile, 'utf8')));
+const demo = parseStudyDocument(JSON.parse(readFileSync(demoFile, 'utf8')));
 if (!demo.ok) fail(`examples/demo-study.json is not a valid study file: ${demo.problems.map((p) => `${p.path}: ${p.message}`).join('; ')}`);
-const seeded = seedDemoIfEmpty(db, studyInputOf(demo.value));
-if (seeded.seeded) console.log(`Seeded the invented demo study (study ${seeded.studyId}).`);
+const seeded = seedDemoWithResults(db, demo.input, new Date());
+if (seeded.seeded) console.log(`Seeded the invented demo study (study ${seeded.studyId}) with its results.`);
 
 const jobs = workerJobs();
 const app = createApp({ db, dbFile, clock: () => new Date(), jobs, ...(config.accessToken ? { accessToken: config.accessToken } : {}) });

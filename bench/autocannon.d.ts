@@ -8,6 +8,8 @@ declare module 'autocannon' {
     duration?: number;
     amount?: number;
     workers?: number;
+    /** Requests per second over all connections (0: as fast as the server answers). */
+    overallRate?: number;
     headers?: Record<string, string>;
     requests?: { method?: string; path?: string; headers?: Record<string, string> }[];
   }

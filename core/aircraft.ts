@@ -12,6 +12,10 @@
  * engine type; minimum control speed given for multi-engine aircraft.
  */
 import { InputDomainError } from './errors.js';
+import {
+  REFERENCE_LENGTH_RANGE, REFERENCE_TABLE_ELEVATION_RANGE, REFERENCE_TABLE_LENGTH_RANGE, REFERENCE_TABLE_MASS_RANGE,
+  REFERENCE_TABLE_TEMPERATURE_RANGE, IDENTIFIER_PATTERN, IDENTIFIER_RULE, type FieldRange,
+} from './fields.js';
 import { check, inRange } from './validate.js';
 
 export type EngineType = 'turbofan' | 'turboprop' | 'piston';
@@ -261,7 +265,7 @@ function checkEnum<T extends string>(field: string, v: unknown, allowed: readonl
  */
 export function validateAircraft(a: AircraftProfile, path = 'aircraft'): AircraftProfile {
   const rec = a as unknown as Record<string, unknown>;
-  check(typeof a.id === 'string' && a.id.trim().length > 0 && a.id.length <= 64, `${path}.id`, a.id, 'a non-empty identifier of at most 64 characters');
+  check(typeof a.id === 'string' && IDENTIFIER_PATTERN.test(a.id), `${path}.id`, a.id, `an identifier: ${IDENTIFIER_RULE}`);
   check(typeof a.name === 'string' && a.name.trim().length > 0 && a.name.length <= 120, `${path}.name`, a.name, 'a non-empty name of at most 120 characters');
   checkEnum(`${path}.certification`, a.certification, CERTIFICATION_BASES);
   checkEnum(`${path}.engineType`, a.engineType, ENGINE_TYPES);
@@ -297,18 +301,18 @@ export function validateAircraft(a: AircraftProfile, path = 'aircraft'): Aircraf
 }
 
 function validateReference(r: ReferenceLengths, path: string): void {
-  if (r.takeoff_m !== undefined) inRange(`${path}.takeoff_m`, r.takeoff_m, { min: 100, max: 5000, unit: 'm' });
-  if (r.landing_m !== undefined) inRange(`${path}.landing_m`, r.landing_m, { min: 100, max: 5000, unit: 'm' });
+  if (r.takeoff_m !== undefined) inRange(`${path}.takeoff_m`, r.takeoff_m, REFERENCE_LENGTH_RANGE);
+  if (r.landing_m !== undefined) inRange(`${path}.landing_m`, r.landing_m, REFERENCE_LENGTH_RANGE);
   const t = r.table;
   if (t === undefined) return;
-  const axes: [keyof ReferenceTable, readonly number[], number, number, string][] = [
-    ['mass_kg', t.mass_kg, 300, 600000, 'kg'],
-    ['elevation_m', t.elevation_m, -400, 4500, 'm'],
-    ['temperature_c', t.temperature_c, -40, 55, '°C'],
+  const axes: [keyof ReferenceTable, readonly number[], FieldRange][] = [
+    ['mass_kg', t.mass_kg, REFERENCE_TABLE_MASS_RANGE],
+    ['elevation_m', t.elevation_m, REFERENCE_TABLE_ELEVATION_RANGE],
+    ['temperature_c', t.temperature_c, REFERENCE_TABLE_TEMPERATURE_RANGE],
   ];
-  for (const [name, axis, min, max, unit] of axes) {
+  for (const [name, axis, range] of axes) {
     check(Array.isArray(axis) && axis.length >= 1 && axis.length <= 20, `${path}.table.${name}`, axis, 'a list of 1 to 20 values');
-    axis.forEach((v, i) => inRange(`${path}.table.${name}[${i}]`, v, { min, max, unit }));
+    axis.forEach((v, i) => inRange(`${path}.table.${name}[${i}]`, v, range));
     for (let i = 1; i < axis.length; i++) {
       check(axis[i]! > axis[i - 1]!, `${path}.table.${name}[${i}]`, axis[i], `greater than the previous value (${axis[i - 1]}); axes ascend`);
     }
@@ -318,7 +322,7 @@ function validateReference(r: ReferenceLengths, path: string): void {
     check(plane.length === t.elevation_m.length, `${path}.table.length_m[${i}]`, plane.length, `${t.elevation_m.length} rows (one per elevation)`);
     plane.forEach((row, j) => {
       check(row.length === t.temperature_c.length, `${path}.table.length_m[${i}][${j}]`, row.length, `${t.temperature_c.length} values (one per temperature)`);
-      row.forEach((v, k) => inRange(`${path}.table.length_m[${i}][${j}][${k}]`, v, { min: 100, max: 6000, unit: 'm' }));
+      row.forEach((v, k) => inRange(`${path}.table.length_m[${i}][${j}][${k}]`, v, REFERENCE_TABLE_LENGTH_RANGE));
     });
   });
 }

@@ -12,7 +12,9 @@
  *
  * Thresholds are exact multiples of the knot (1852/3600 m/s) and of the foot (0.3048 m), compared in
  * SI so that a value converted from kt or ft lands on the intended side of a boundary.
- * Validity: ARFL 1 to 6 000 m; wingspan 1 to 100 m; tail height 0.5 to 40 m; VREF 10 to 150 m/s.
+ * Validity: ARFL and VREF any positive value (the top classes, code 4 and category E, are open-ended:
+ * both are derived from the profile, so a profile that gives an implausible value is still classified,
+ * with a warning, never refused); wingspan 1 to 100 m; tail height 0.5 to 40 m.
  * A wingspan of 80 m or more has no code letter, a span of 262 ft or a tail of 80 ft or more no design
  * group: those are results with a warning, not errors.
  */
@@ -21,6 +23,11 @@ import { FT, KT } from './units.js';
 import { inRange } from './validate.js';
 
 export const CLASSIFY_METHOD_VERSION = 'classification/1';
+
+/** ARFL above which the classification warns that the profile is implausible, m (common practice). */
+export const ARFL_PLAUSIBLE_MAX_M = 6000;
+/** VREF above which the classification warns that the profile is implausible, m/s (about 290 kt; common practice). */
+export const VREF_PLAUSIBLE_MAX_MPS = 150;
 
 export type AerodromeCodeNumber = 1 | 2 | 3 | 4;
 export type AerodromeCodeLetter = 'A' | 'B' | 'C' | 'D' | 'E' | 'F';
@@ -50,7 +57,7 @@ function classIndex(x: number, limits_si: readonly number[]): number {
 
 /** ICAO code number (1–4) from the aeroplane reference field length, m. */
 export function aerodromeCodeNumber(arfl_m: number): AerodromeCodeNumber {
-  const x = inRange('arfl_m', arfl_m, { min: 1, max: 6000, unit: 'm' });
+  const x = inRange('arfl_m', arfl_m, { min: 0, minInclusive: false, unit: 'm' });
   return (classIndex(x, CODE_NUMBER_LIMITS_M) + 1) as AerodromeCodeNumber;
 }
 
@@ -62,7 +69,7 @@ export function aerodromeCodeLetter(wingspan_m: number): AerodromeCodeLetter | n
 
 /** Aircraft approach category (A–E) from VREF at maximum landing mass, m/s. */
 export function approachCategory(vref_mps: number): ApproachCategory {
-  const v = inRange('vref_mps', vref_mps, { min: 10, max: 150, unit: 'm/s' });
+  const v = inRange('vref_mps', vref_mps, { min: 0, minInclusive: false, unit: 'm/s' });
   return CATEGORIES[classIndex(v, APPROACH_CATEGORY_LIMITS_KT.map((k) => k * KT))]!;
 }
 
@@ -123,6 +130,12 @@ export function classifyAircraft(
   const warnings: string[] = [];
   if (codeLetter === null) warnings.push(`Wingspan ${aircraft.wingspan_m} m is 80 m or more: beyond code letter F.`);
   if (adg.group === null) warnings.push('Tail height or wingspan beyond airplane design group VI.');
+  if (basis.vref_mps > VREF_PLAUSIBLE_MAX_MPS) {
+    warnings.push(`VREF at maximum landing mass is ${basis.vref_mps.toFixed(1)} m/s (${(basis.vref_mps / KT).toFixed(0)} kt), above the ${VREF_PLAUSIBLE_MAX_MPS} m/s of any transport aeroplane: check the profile's landing mass, wing area and CLmax (approach category E is open-ended).`);
+  }
+  if (basis.arfl_m > ARFL_PLAUSIBLE_MAX_M) {
+    warnings.push(`The aeroplane reference field length is ${Math.round(basis.arfl_m)} m, above ${ARFL_PLAUSIBLE_MAX_M} m: check the profile (code number 4 is open-ended).`);
+  }
   return {
     codeNumber,
     codeLetter,

@@ -26,6 +26,7 @@
  */
 import type { EngineType } from './aircraft.js';
 import { standardTemperatureC } from './atmosphere.js';
+import { RUNWAY_EFFECTIVE_GRADIENT_RANGE } from './fields.js';
 import { check, inRange } from './validate.js';
 
 export const CORRECTIONS_METHOD_VERSION = 'corrections/1';
@@ -111,7 +112,7 @@ export interface IcaoCorrectionInput {
 const LENGTH_RANGE = { min: 100, max: 6000, unit: 'm' } as const;
 const ELEVATION_RANGE = { min: -400, max: 4500, unit: 'm' } as const;
 const ART_RANGE = { min: -40, max: 55, unit: '°C' } as const;
-const GRADIENT_RANGE = { min: 0, max: 0.05, unit: '' } as const;
+const GRADIENT_RANGE = RUNWAY_EFFECTIVE_GRADIENT_RANGE;
 
 function step(
   kind: CorrectionStepKind, label: string, formula: string, before: number, fraction: number, applied: boolean, note?: string,

@@ -39,7 +39,7 @@ export class InputDomainError extends Error {
     readonly allowed: string,
     readonly range?: DomainRange,
   ) {
-    super(`${field}: ${formatValue(value)} is not allowed; expected ${allowed}`);
+    super(`${field}: ${domainProblemText(value, allowed, range)}`);
   }
 }
 
@@ -54,9 +54,30 @@ export class ConvergenceError extends Error {
   }
 }
 
+/**
+ * A received value as a short phrase for messages: never serialised whole (strings are cut to 60
+ * characters, lists and objects are named by their size), so a huge or deeply nested value cannot
+ * blow up a message.
+ */
 export function formatValue(v: unknown): string {
   if (v === undefined || v === null || v === '') return 'a missing value';
-  if (typeof v === 'number') return Number.isNaN(v) ? 'NaN' : String(v);
-  if (typeof v === 'string') return JSON.stringify(v);
-  return JSON.stringify(v) ?? String(v);
+  if (typeof v === 'number') return Number.isNaN(v) ? 'not a number' : Number.isFinite(v) ? String(v) : `a number too ${v > 0 ? 'large' : 'small'} to hold`;
+  if (typeof v === 'string') return JSON.stringify(v.length > 60 ? `${v.slice(0, 60)}…` : v);
+  if (typeof v === 'boolean' || typeof v === 'bigint') return String(v);
+  if (Array.isArray(v)) return `a list of ${v.length} item${v.length === 1 ? '' : 's'}`;
+  if (typeof v === 'object') return 'an object';
+  return typeof v;
+}
+
+/**
+ * What is wrong with `value` (the text after "field: "): "missing; expected …" for a blank,
+ * "too large (maximum …)" / "too small (minimum …)" for ±Infinity (a value such as 1e309), else
+ * "<value> is not allowed; expected …".
+ */
+export function domainProblemText(value: unknown, allowed: string, range?: DomainRange): string {
+  if (value === undefined || value === null || value === '') return `missing; expected ${allowed}`;
+  const u = range?.unit ? ` ${range.unit}` : '';
+  if (value === Number.POSITIVE_INFINITY) return range?.max !== undefined ? `too large (maximum ${range.max}${u})` : 'too large to be a number';
+  if (value === Number.NEGATIVE_INFINITY) return range?.min !== undefined ? `too small (minimum ${range.min}${u})` : 'too large a negative number';
+  return `${formatValue(value)} is not allowed; expected ${allowed}`;
 }

@@ -1,5 +1,6 @@
 export * from './errors.js';
 export * from './validate.js';
+export * from './fields.js';
 export * from './units.js';
 export * from './atmosphere.js';
 export * from './aircraft.js';
@@ -9,6 +10,7 @@ export * from './runway.js';
 export * from './route/index.js';
 export * from './landing.js';
 export * from './requirement.js';
+export * from './plausibility.js';
 export * from './corrections.js';
 export * from './reference.js';
 export * from './classify.js';

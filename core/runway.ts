@@ -23,6 +23,7 @@
  * Validity: elevations −610..5000 m; profile length up to 8000 m; slopes are ratios (0.01 = 1 %).
  */
 import { InputDomainError } from './errors.js';
+import { RUNWAY_EFFECTIVE_GRADIENT_RANGE, RUNWAY_SLOPE_RANGE } from './fields.js';
 import { check, inRange } from './validate.js';
 
 export const RUNWAY_METHOD_VERSION = 'runway-geometry/1';
@@ -106,6 +107,28 @@ export interface RunwayProfileResult {
   readonly limits: ProfileLimits;
   readonly trace: readonly RunwayTraceEntry[];
   readonly warnings: readonly string[];
+}
+
+/**
+ * The slopes a study's performance models can take from a profile (core/fields.ts): each takeoff
+ * direction's average slope within RUNWAY_SLOPE_RANGE (±3 %) and the effective gradient within
+ * RUNWAY_EFFECTIVE_GRADIENT_RANGE (5 %). Steeper local stretches are allowed (they only warn, against
+ * the ICAO limits); throws InputDomainError on `field` (the profile's path) otherwise.
+ */
+export function checkProfileSlopes(profile: Pick<RunwayProfileResult, 'takeoffDirections' | 'effectiveGradient'>, field: string): void {
+  const avg = profile.takeoffDirections[0].averageSlope;
+  check(
+    Math.abs(avg) <= RUNWAY_SLOPE_RANGE.max + SLOPE_COMPARE_TOLERANCE,
+    field,
+    `${pct(Math.abs(avg))} average slope`,
+    `an average slope end to end of ${pct(RUNWAY_SLOPE_RANGE.max)} or less, the slope range of the takeoff and landing models (ICAO Annex 14 limits runways to 1 to 2 %)`,
+  );
+  check(
+    profile.effectiveGradient <= RUNWAY_EFFECTIVE_GRADIENT_RANGE.max + SLOPE_COMPARE_TOLERANCE,
+    field,
+    `${pct(profile.effectiveGradient)} effective gradient`,
+    `an effective gradient (high minus low point over the length) of ${pct(RUNWAY_EFFECTIVE_GRADIENT_RANGE.max)} or less, the range of the length corrections`,
+  );
 }
 
 export const PROFILE_ELEVATION_RANGE = { min: -610, max: 5000, unit: 'm' } as const;

@@ -32,6 +32,11 @@
  * 3. Route penalty at a limited mass: the greatest payload for the design stage (route payloadForRange)
  *    and the greatest stage for the design payload (route rangeForPayload), domain reference §9.3–9.4.
  *
+ * 4. Plausibility: the aircraft's plausibility bound (core/plausibility.ts) guards every need. A
+ *    takeoff whose requirement or physics distances exceed it is refused in the mass searches (limit
+ *    'plausibility') and gives no needs and no 'fits' at the design mass, with the reason in the note;
+ *    a landing beyond it likewise.
+ *
  * Validity: that of the takeoff engine (pressure altitude −400…4 500 m, |slope| ≤ 3 %), the landing
  * model and the route model. Balanced (or limited) V1 as the takeoff engine chooses it: an unbalanced
  * V1 scheduled to use a clearway or stopway of unequal length is not searched (conservative).
@@ -47,7 +52,9 @@ import { DECLARED_DISTANCE_RANGE } from './runway.js';
 import type { Surface } from './surface.js';
 import type { ExistingRunwayCheck, RunwayDirectionInput } from './study/types.js';
 import { ConvergenceError } from './errors.js';
+import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, withinPlausibility, type PlausibilityBound } from './plausibility.js';
 import { FT } from './units.js';
+import { standardTemperatureC } from './atmosphere.js';
 import { check, finite, inRange } from './validate.js';
 
 export const RUNWAY_CHECK_METHOD_VERSION = 'runway-check/1';
@@ -218,6 +225,15 @@ export function declaredNeeds(r: TakeoffFeasible): DeclaredNeeds {
   };
 }
 
+/** Whether a feasible takeoff's requirement, physics distances and declared-distance needs are all within the bound. */
+function allWithin(r: TakeoffFeasible, needs: DeclaredNeeds, bound: PlausibilityBound): boolean {
+  const lengths = [
+    ...takeoffDistances(r).map((x) => x.value_m),
+    needs.takeoffRun_m, needs.takeoffDistance_m, ...(needs.accelerateStop_m === undefined ? [] : [needs.accelerateStop_m]),
+  ];
+  return lengths.every((x) => withinPlausibility(x, bound));
+}
+
 export interface DeclaredTakeoffDistances {
   readonly tora_m: number;
   readonly toda_m: number;
@@ -239,7 +255,7 @@ export function exceededDistances(n: DeclaredNeeds, d: DeclaredTakeoffDistances)
 // ---------------------------------------------------------------------------------------------
 // 2. Greatest takeoff mass
 
-export type TakeoffMassLimit = DistanceLimit | 'climb' | 'MTOW' | 'none-feasible';
+export type TakeoffMassLimit = DistanceLimit | 'climb' | 'MTOW' | 'plausibility' | 'none-feasible';
 
 export interface MaxTakeoffMassInput {
   readonly aircraft: AircraftProfile;
@@ -259,6 +275,8 @@ export interface MaxTakeoffMassInput {
   readonly clMaxScale?: number;
   /** Lightest mass searched, kg (default OEW; OEW … MTOW). */
   readonly minMass_kg?: number;
+  /** The aircraft's plausibility bound (default: computed from the aircraft, core/plausibility.ts). */
+  readonly plausibility?: PlausibilityBound;
 }
 
 export interface MaxTakeoffMassResult {
@@ -289,11 +307,19 @@ interface Trial {
   readonly result: TakeoffResult;
   readonly needs?: DeclaredNeeds;
   readonly exceeded: readonly DistanceLimit[];
+  /** The takeoff's distances exceed the plausibility bound (refused whatever the declared distances). */
+  readonly implausible: boolean;
   readonly allowed: boolean;
 }
 
 /** Refused for want of a decision speed (a light-mass artefact of the model, see maxTakeoffMassForRunway). */
 const tooLight = (t: Trial): boolean => !t.result.feasible && t.result.reason === 'v1-window-empty';
+
+/** What refuses a trial: the worst exceeded distance, the plausibility bound, or the infeasibility. */
+function trialLimit(t: Trial): TakeoffMassLimit {
+  if (!t.result.feasible) return infeasibleLimit(t.result.reason);
+  return t.exceeded[0] ?? 'plausibility';
+}
 
 function infeasibleLimit(reason: InfeasibleReason): TakeoffMassLimit {
   if (reason === 'cannot-climb' || reason === 'cannot-climb-engine-out') return 'climb';
@@ -314,6 +340,7 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     asda_m: inRange('direction.asda_m', input.direction.asda_m, DECLARED_DISTANCE_RANGE),
   };
   const lower = inRange('minMass_kg', input.minMass_kg ?? a.oew_kg, { min: a.oew_kg, max: a.mtow_kg, unit: 'kg' });
+  const bound = input.plausibility ?? aircraftPlausibilityBound(a);
   const base: Omit<TakeoffInput, 'mass_kg'> = {
     aircraft: a, pressureAltitude_m: input.pressureAltitude_m, temperature_c: input.temperature_c, slope: input.slope,
     headwind_mps: input.headwind_mps, surface: input.surface,
@@ -327,10 +354,11 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   const trial = (m: number): Trial => {
     evaluations++;
     const r = analyseTakeoff({ ...base, mass_kg: m });
-    if (!r.feasible) return { mass_kg: m, result: r, exceeded: [], allowed: false };
+    if (!r.feasible) return { mass_kg: m, result: r, exceeded: [], implausible: false, allowed: false };
     const needs = declaredNeeds(r);
     const exceeded = exceededDistances(needs, d);
-    return { mass_kg: m, result: r, needs, exceeded, allowed: exceeded.length === 0 };
+    const implausible = !allWithin(r, needs, bound);
+    return { mass_kg: m, result: r, needs, exceeded, implausible, allowed: exceeded.length === 0 && !implausible };
   };
   const done = (o: Omit<MaxTakeoffMassResult, 'methodVersion' | 'iterations' | 'trace' | 'warnings'>, iterations: number): MaxTakeoffMassResult => {
     if (o.maxTakeoffMass_kg !== undefined) trace.push({ label: 'Greatest allowed takeoff mass', value: finite('maxTakeoffMass_kg', o.maxTakeoffMass_kg), unit: 'kg' });
@@ -383,14 +411,17 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   }
   if (!lo.allowed) {
     const light = lo;
-    const lim = light.result.feasible ? light.exceeded[0]! : infeasibleLimit(light.result.reason);
+    const lim = trialLimit(light);
     return done({
       status: 'none-feasible', limitedBy: 'none-feasible', climbLimitMass_kg: climbCap,
       ...(light.needs ? { refusedNeeds: light.needs } : {}),
       ...(!light.result.feasible ? { refusedReason: light.result.reason } : {}),
       refusedMass_kg: light.mass_kg,
-      message: `No mass from ${kg(light.mass_kg)} to ${kg(climbCap)} fits the declared distances. ` + (light.result.feasible
-        ? `At ${kg(light.mass_kg)} the takeoff still exceeds ${light.exceeded.join(', ')}.`
+      message: `No mass from ${kg(light.mass_kg)} to ${kg(climbCap)} fits the declared distances${light.implausible ? ' and the plausibility bound' : ''}. ` + (light.result.feasible
+        ? [
+          ...(light.exceeded.length ? [`At ${kg(light.mass_kg)} the takeoff still exceeds ${light.exceeded.join(', ')}.`] : []),
+          ...(light.implausible ? [`At ${kg(light.mass_kg)} the takeoff is beyond the plausibility bound of ${bound.label}.`] : []),
+        ].join(' ')
         : `At ${kg(light.mass_kg)}: ${light.result.message} (binding: ${lim}).`),
     }, lightSteps);
   }
@@ -401,13 +432,14 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     const mid = trial(0.5 * (lo.mass_kg + hi.mass_kg));
     if (mid.allowed) lo = mid; else hi = mid;
   }
-  const by: TakeoffMassLimit = hi.result.feasible ? hi.exceeded[0]! : infeasibleLimit(hi.result.reason);
+  const by: TakeoffMassLimit = trialLimit(hi);
   if (!hi.result.feasible) warnings.push(`Just above the greatest allowed mass the takeoff is infeasible: ${hi.result.message}`);
   if (hi.result.feasible && hi.result.engineOut?.v1Limited === 'vmcg') {
     warnings.push('V1 is held at its VMCG-based minimum near the limiting mass; the field length there is not strictly monotone in mass (the result is a mass where the distances stop fitting, within 10 kg).');
   }
-  const names: Record<DistanceLimit | 'climb', string> = {
+  const names: Record<DistanceLimit | 'climb' | 'plausibility', string> = {
     TORA: 'takeoff run available (TORA)', TODA: 'takeoff distance available (TODA)', ASDA: 'accelerate-stop distance available (ASDA)', climb: 'climb after lift-off',
+    plausibility: `plausibility bound of ${bound.label}`,
   };
   trace.push({ label: 'Bisection steps', value: it, unit: '' });
   return done({
@@ -415,14 +447,14 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     refusedMass_kg: hi.mass_kg,
     ...(hi.needs ? { refusedNeeds: hi.needs } : {}),
     ...(!hi.result.feasible ? { refusedReason: hi.result.reason } : {}),
-    message: `The ${names[by as DistanceLimit | 'climb']} limits the takeoff mass to ${kg(lo.mass_kg)} (MTOW ${kg(a.mtow_kg)}).`,
+    message: `The ${names[by as DistanceLimit | 'climb' | 'plausibility']} limits the takeoff mass to ${kg(lo.mass_kg)} (MTOW ${kg(a.mtow_kg)}).`,
   }, it);
 }
 
 // ---------------------------------------------------------------------------------------------
 // Greatest landing mass
 
-export type LandingMassLimit = 'LDA' | 'MLW' | 'none-feasible';
+export type LandingMassLimit = 'LDA' | 'MLW' | 'plausibility' | 'none-feasible';
 
 export interface MaxLandingMassInput {
   readonly aircraft: AircraftProfile;
@@ -439,6 +471,8 @@ export interface MaxLandingMassInput {
   readonly rule?: LandingRule;
   /** Lightest mass searched, kg (default OEW; OEW … MLW). */
   readonly minMass_kg?: number;
+  /** The aircraft's plausibility bound (default: computed from the aircraft, core/plausibility.ts). */
+  readonly plausibility?: PlausibilityBound;
 }
 
 export interface MaxLandingMassResult {
@@ -462,6 +496,9 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
   const a = validateAircraft(input.aircraft);
   const lda = inRange('lda_m', input.lda_m, DECLARED_DISTANCE_RANGE);
   const lower = inRange('minMass_kg', input.minMass_kg ?? a.oew_kg, { min: a.oew_kg, max: a.mlw_kg, unit: 'kg' });
+  // The LDA is at most 6 000 m; the bound only binds when it is below the LDA.
+  const bound = input.plausibility ?? aircraftPlausibilityBound(a);
+  const limit = Math.min(lda, bound.bound_m);
   const trace: RunwayCheckTraceEntry[] = [];
   const warnings: string[] = [];
   const kg = (x: number): string => `${x.toFixed(0)} kg`;
@@ -474,7 +511,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
       slope: input.slope ?? 0, headwind_mps: input.headwind_mps ?? 0, surface: input.surface,
       ...(input.rule !== undefined ? { rule: input.rule } : {}),
     });
-    return { mass_kg: m, r, allowed: r.status === 'ok' && r.required_m <= lda };
+    return { mass_kg: m, r, allowed: r.status === 'ok' && r.required_m <= limit };
   };
   const req = (t: { r: LandingResult }): number | undefined => (t.r.status === 'ok' ? t.r.required_m : undefined);
   const done = (o: Omit<MaxLandingMassResult, 'methodVersion' | 'iterations' | 'trace' | 'warnings'>, iterations: number): MaxLandingMassResult => {
@@ -497,7 +534,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
       status: 'none-feasible', limitedBy: 'none-feasible', refusedMass_kg: lower,
       ...(r.status === 'ok' ? { refusedRequired_m: r.required_m } : {}),
       message: r.status === 'ok'
-        ? `Even at ${kg(lower)} the landing needs ${r.required_m.toFixed(0)} m, more than the LDA (${lda} m).`
+        ? `Even at ${kg(lower)} the landing needs ${r.required_m.toFixed(0)} m, more than the ${limit < lda ? `plausibility bound of ${bound.label}` : `LDA (${lda} m)`}.`
         : `Even at ${kg(lower)} the landing is not possible here: ${r.reason}`,
     }, 0);
   }
@@ -512,9 +549,9 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
   trace.push({ label: 'Bisection steps', value: it, unit: '' });
   const hiReq = req(hi);
   return done({
-    status: 'ok', maxLandingMass_kg: lo.mass_kg, limitedBy: 'LDA', requiredAtMax_m: req(lo)!,
+    status: 'ok', maxLandingMass_kg: lo.mass_kg, limitedBy: limit < lda ? 'plausibility' : 'LDA', requiredAtMax_m: req(lo)!,
     refusedMass_kg: hi.mass_kg, ...(hiReq !== undefined ? { refusedRequired_m: hiReq } : {}),
-    message: `The LDA (${lda} m) limits the landing mass to ${kg(lo.mass_kg)} (MLW ${kg(a.mlw_kg)}).`,
+    message: `The ${limit < lda ? `plausibility bound of ${bound.label}` : `LDA (${lda} m)`} limits the landing mass to ${kg(lo.mass_kg)} (MLW ${kg(a.mlw_kg)}).`,
   }, it);
 }
 
@@ -636,6 +673,8 @@ export interface AssessExistingRunwayInput {
    * the route or the design mass); a study passes them for its second and later rows to save solves.
    */
   readonly solved?: { readonly takeoffMass: MaxTakeoffMassResult; readonly landingMass: MaxLandingMassResult };
+  /** The aircraft's plausibility bound (default: computed from the aircraft, core/plausibility.ts). */
+  readonly plausibility?: PlausibilityBound;
 }
 
 export interface ExistingRunwayAssessment extends ExistingRunwayCheck {
@@ -679,15 +718,22 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
   const warnings: string[] = [];
   const notes: string[] = [];
   const trace: RunwayCheckTraceEntry[] = [{ label: 'Design takeoff mass', value: tow, unit: 'kg' }];
+  const bound = input.plausibility ?? aircraftPlausibilityBound(a);
 
-  // Needs at the design takeoff mass.
+  // Needs at the design takeoff mass; none beyond the plausibility bound (that is not a length).
   const r = analyseTakeoff({ ...cond, mass_kg: tow });
-  const needs = r.feasible ? declaredNeeds(r) : undefined;
+  const rawNeeds = r.feasible ? declaredNeeds(r) : undefined;
+  const implausible = r.feasible && rawNeeds !== undefined && !allWithin(r, rawNeeds, bound);
+  const needs = implausible ? undefined : rawNeeds;
   const exceeded = needs ? exceededDistances(needs, { tora_m: tora, toda_m: toda, asda_m: asda }) : [];
   const climbLimited = r.climb.limited;
-  const takeoffOk = r.feasible && exceeded.length === 0 && !climbLimited;
+  const takeoffOk = r.feasible && !implausible && exceeded.length === 0 && !climbLimited;
   if (!r.feasible) notes.push(`At the design takeoff mass the takeoff is not possible here: ${r.message}`);
-  else if (exceeded.length) notes.push(`At the design takeoff mass the takeoff exceeds ${exceeded.join(', ')}.`);
+  else if (implausible) {
+    const f = checkPlausibility([...takeoffDistances(r), { what: 'takeoff run', value_m: rawNeeds!.takeoffRun_m }], bound,
+      { elevation_m: input.pressureAltitude_m, temperature_c: input.temperature_c, mass_kg: tow });
+    notes.push(`At the design takeoff mass: ${f?.reason ?? `the takeoff is beyond the plausibility bound of ${bound.label}.`}`);
+  } else if (exceeded.length) notes.push(`At the design takeoff mass the takeoff exceeds ${exceeded.join(', ')}.`);
   if (climbLimited) notes.push('At the design takeoff mass the V2 climb gradient is below its minimum.');
   if (needs) {
     trace.push({ label: 'Takeoff run needed', value: needs.takeoffRun_m, unit: 'm' });
@@ -703,14 +749,21 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
     ...(input.landingRule !== undefined ? { rule: input.landingRule } : {}),
   };
   const land = analyseLanding({ ...landingIn, mass_kg: lm });
-  const landingNeeded = land.status === 'ok' ? land.required_m : undefined;
+  const landingBeyond = land.status === 'ok' && !withinPlausibility(land.required_m, bound);
+  const landingNeeded = land.status === 'ok' && !landingBeyond ? land.required_m : undefined;
   const landingOk = landingNeeded !== undefined && landingNeeded <= lda;
   if (land.status !== 'ok') notes.push(`Landing at ${lm.toFixed(0)} kg is not possible here: ${land.reason}`);
+  else if (landingBeyond) {
+    const f = checkPlausibility([{ what: 'landing', value_m: land.required_m }], bound, {
+      elevation_m: input.pressureAltitude_m, temperature_c: input.landingTemperature_c ?? standardTemperatureC(input.pressureAltitude_m), mass_kg: lm,
+    });
+    notes.push(f!.reason);
+  }
   if (landingNeeded !== undefined) trace.push({ label: 'Landing runway needed', value: landingNeeded, unit: 'm' });
 
   // Greatest masses.
-  const mt = input.solved?.takeoffMass ?? maxTakeoffMassForRunway({ ...cond, direction: { tora_m: tora, toda_m: toda, asda_m: asda } });
-  const ml = input.solved?.landingMass ?? maxLandingMassForLda({ ...landingIn, lda_m: lda });
+  const mt = input.solved?.takeoffMass ?? maxTakeoffMassForRunway({ ...cond, direction: { tora_m: tora, toda_m: toda, asda_m: asda }, plausibility: bound });
+  const ml = input.solved?.landingMass ?? maxLandingMassForLda({ ...landingIn, lda_m: lda, plausibility: bound });
   warnings.push(...mt.warnings, ...ml.warnings);
   if (mt.status !== 'ok') notes.push(mt.message);
   if (ml.status !== 'ok') notes.push(ml.message);

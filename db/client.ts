@@ -6,11 +6,17 @@
  * Pragmas: WAL journal (readers never block the writer), synchronous = FULL (a committed transaction
  * survives a power cut, not only a process crash), foreign keys on, busy timeout 5000 ms (a writer
  * waits for another process's lock instead of failing with SQLITE_BUSY).
+ *
+ * Nothing here opens the database file except SQLite itself. POSIX advisory locks belong to the
+ * process, and closing any descriptor of the file releases all of them: a plain `fs` open and close of
+ * the file (to sniff its header, say) while a connection is open in the process lets another process
+ * delete the live -wal and -shm (docs/storage.md, "One owner of the database file"). SQLite's own
+ * connections are safe: it keeps such descriptors open until the process's last connection closes.
  */
 import Database from 'better-sqlite3';
 import { drizzle, type BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
 import { readMigrationFiles } from 'drizzle-orm/migrator';
-import { closeSync, mkdirSync, openSync, readSync, statSync } from 'node:fs';
+import { mkdirSync, statSync } from 'node:fs';
 import { dirname, isAbsolute, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import * as schema from './schema.js';
@@ -47,35 +53,26 @@ export class DatabaseFileError extends Error {
   }
 }
 
-const SQLITE_HEADER = 'SQLite format 3\u0000';
-
 /**
- * Checks that `file` can hold a Runwright database: not a directory, and either absent, empty or an
- * SQLite file (so that a mistyped path never overwrites an unrelated file). Returns the absolute path.
+ * Checks that `file` can hold a Runwright database: a path, not a directory, whose folder exists or
+ * can be created. Returns the absolute path. It never opens the file (see the note at the top):
+ * `openDatabase` refuses an existing file that is not an SQLite database, through SQLite, before it
+ * writes anything.
  */
 export function validateDatabaseFile(file: string, cwd = process.cwd()): string {
   if (file === ':memory:') return file;
   if (file.trim() === '' || file.includes('\u0000')) throw new DatabaseFileError(file, 'expected a file path');
   const abs = isAbsolute(file) ? file : resolve(cwd, file);
-  let size: number | undefined;
+  let exists = false;
   try {
     const st = statSync(abs);
     if (st.isDirectory()) throw new DatabaseFileError(file, 'is a directory; expected a file path such as data/runwright.sqlite');
-    size = st.size;
+    exists = true;
   } catch (e) {
     if (e instanceof DatabaseFileError) throw e;
     if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw new DatabaseFileError(file, `cannot be read (${(e as Error).message})`);
   }
-  if (size !== undefined && size > 0) {
-    const buf = Buffer.alloc(16);
-    const fd = openSync(abs, 'r');
-    try {
-      readSync(fd, buf, 0, 16, 0);
-    } finally {
-      closeSync(fd);
-    }
-    if (buf.toString('latin1') !== SQLITE_HEADER) throw new DatabaseFileError(file, 'exists but is not an SQLite database; refusing to touch it');
-  } else {
+  if (!exists) {
     const parent = dirname(abs);
     try {
       mkdirSync(parent, { recursive: true });
@@ -88,7 +85,7 @@ export function validateDatabaseFile(file: string, cwd = process.cwd()): string 
 
 /**
  * The database file named by the environment (`RUNWRIGHT_DB_FILE`), or data/runwright.sqlite;
- * validated (see `validateDatabaseFile`). Call once at start-up.
+ * validated (see `validateDatabaseFile`; `openDatabase` then refuses a file that is not SQLite).
  */
 export function databaseFileFromEnv(env: NodeJS.ProcessEnv = process.env, cwd = process.cwd()): string {
   const raw = env[DATABASE_FILE_ENV];
@@ -107,6 +104,14 @@ export function openDatabase(file: string, options: { readonly migrationsFolder?
   const sqlite = new Database(path);
   try {
     sqlite.pragma(`busy_timeout = ${BUSY_TIMEOUT_MS}`);
+    // Reads the header (nothing is written yet): a file that is not an SQLite database is refused
+    // here with SQLITE_NOTADB and left exactly as it was.
+    try {
+      sqlite.pragma('schema_version');
+    } catch (e) {
+      if ((e as { code?: string }).code === 'SQLITE_NOTADB') throw new DatabaseFileError(file, 'exists but is not an SQLite database; refusing to touch it');
+      throw e;
+    }
     if (path !== ':memory:') sqlite.pragma('journal_mode = WAL');
     sqlite.pragma('synchronous = FULL');
     sqlite.pragma('foreign_keys = ON');
@@ -149,4 +154,14 @@ export function applyMigrations(sqlite: Database.Database, migrationsFolder: str
     if (sqlite.inTransaction) sqlite.exec('ROLLBACK');
     throw e;
   }
+}
+
+/**
+ * The better-sqlite3 connection under a drizzle database or transaction (for prepared statements on
+ * hot paths; statements run in the caller's open transaction, if any).
+ */
+export function connectionOf(db: object): Database.Database {
+  const c = (db as { readonly $client?: unknown }).$client ?? (db as { readonly session?: { readonly client?: unknown } }).session?.client;
+  if (!(c instanceof Database)) throw new Error('internal: expected a drizzle database over better-sqlite3');
+  return c;
 }

@@ -96,6 +96,8 @@ export const aircraft = sqliteTable(
     referenceTableJson: text('reference_table_json'),
   },
   (t) => [
+    // The catalogue list pages in name order (LIMIT/OFFSET): without it every page sorts the table.
+    index('aircraft_name_order').on(t.name, t.id),
     check('aircraft_engine_count', sql`${t.engineCount} BETWEEN 1 AND 4`),
     check('aircraft_masses', sql`${t.oew_kg} < ${t.mlw_kg} AND ${t.mlw_kg} <= ${t.mtow_kg}`),
     check('aircraft_cruise_complete', sql`(${t.cruiseSpeed_mps} IS NULL) = (${t.cruiseAltitude_m} IS NULL)`),

@@ -10,8 +10,9 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { InputDomainError, type UnitSystem } from '../core/index.js';
 import { resultsCsv } from './export/resultsCsv.js';
+import { jsonDepthExcess, jsonDepthMessage } from './io/text.js';
 import { formatProblem } from './schemas/common.js';
-import { parseStudyDocument, studyOutput, type StudyOutput } from './study.js';
+import { parseStudyDocument, problemFromDomainError, studyOutput, type StudyOutput } from './study.js';
 
 export const USAGE = 'usage: npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us] [--date YYYY-MM-DD]';
 
@@ -89,6 +90,11 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
     io.stderr(`${args.file}: cannot read the file (${(e as NodeJS.ErrnoException).code ?? String(e)})\n`);
     return 2;
   }
+  const deep = jsonDepthExcess(text);
+  if (deep) {
+    io.stderr(`${args.file}: not accepted: the document is ${jsonDepthMessage(deep)}\n`);
+    return 2;
+  }
   let doc: unknown;
   try {
     doc = JSON.parse(text);
@@ -99,7 +105,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
   const parsed = parseStudyDocument(doc);
   if (!parsed.ok) {
     io.stderr(`${args.file}: ${parsed.problems.length} problem${parsed.problems.length === 1 ? '' : 's'}:\n`);
-    for (const p of parsed.problems) io.stderr(`  - ${formatProblem(p)} [field ${p.field}, value ${p.value === undefined ? 'missing' : JSON.stringify(p.value)}]\n`);
+    for (const p of parsed.problems) io.stderr(`  - ${formatProblem(p)} [field ${p.field}, value ${p.value === undefined || p.value === null ? 'missing' : JSON.stringify(p.value)}]\n`);
     return 2;
   }
   let out: StudyOutput;
@@ -107,7 +113,8 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
     out = studyOutput(parsed.input);
   } catch (e) {
     if (e instanceof InputDomainError) {
-      io.stderr(`${args.file}: 1 problem:\n  - ${e.field}: ${e.message} [field ${e.field.split('.').pop()}, value ${JSON.stringify(e.value) ?? 'missing'}]\n`);
+      const p = problemFromDomainError(e);
+      io.stderr(`${args.file}: 1 problem:\n  - ${formatProblem(p)} [field ${p.field}, value ${p.value === undefined ? 'missing' : JSON.stringify(p.value)}]\n`);
       return 2;
     }
     throw e;

@@ -3,8 +3,8 @@
  * the canonical input so a report or a file can be traced back to exactly what produced it.
  */
 import { createHash } from 'node:crypto';
-import { runStudy, type StudyInput, type StudyResult } from '../core/index.js';
-import { formatPath, parseAll, type Problem } from './schemas/common.js';
+import { InputDomainError, domainProblemText, runStudy, siteConditions, validateStudy, type StudyInput, type StudyResult } from '../core/index.js';
+import { echoValue, fieldPath, formatPath, parseAll, type Problem } from './schemas/common.js';
 import { studyCrossProblems, studyFileSchema, studyInputOf } from './schemas/study.js';
 
 export interface StudyOutput extends StudyResult {
@@ -40,10 +40,35 @@ export function studyOutput(input: StudyInput): StudyOutput {
   return { ...result, inputDigest: inputDigest(input) };
 }
 
-/** Validates a parsed JSON study document; returns the core input or every problem found. */
+/**
+ * A core InputDomainError as one entry of the documented problems list (docs/study-format.md): the
+ * path as the user's document names it (`path`, default the error's field: core names study fields
+ * by their file path), the last key as the field, the value (summarised when large) and the message.
+ */
+export function problemFromDomainError(e: InputDomainError, path: string = e.field): Problem {
+  const keys = fieldPath(path);
+  const field = [...keys].reverse().find((k) => typeof k === 'string');
+  return { path: formatPath(keys), field: field === undefined ? '(root)' : String(field), value: echoValue(e.value), message: domainProblemText(e.value, e.allowed, e.range) };
+}
+
+/**
+ * Validates a parsed JSON study document; returns the core input or every problem found. After the
+ * schema, core's own study and site checks run too (they are the schema's rules, restated so core never
+ * trusts its caller): whatever the engine would refuse is a problem here, with its path in the file.
+ */
 export function parseStudyDocument(doc: unknown): { ok: true; input: StudyInput } | { ok: false; problems: Problem[] } {
   const r = parseAll(studyFileSchema, doc);
-  if (r.ok) return { ok: true, input: studyInputOf(r.value) };
+  if (r.ok) {
+    const input = studyInputOf(r.value);
+    try {
+      validateStudy(input);
+      siteConditions(input);
+    } catch (e) {
+      if (!(e instanceof InputDomainError)) throw e;
+      return { ok: false, problems: [problemFromDomainError(e)] };
+    }
+    return { ok: true, input };
+  }
   // zod skips the study-level refinement when fields fail; list cross-reference problems anyway.
   const seen = new Set(r.problems.map((p) => p.path));
   const extra = studyCrossProblems(doc)

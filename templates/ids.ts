@@ -11,6 +11,10 @@ export const IDS = {
   whatifResult: 'whatif-result',
   /** Busy indicator shown while a long request runs. */
   busy: 'busy',
+  /** The catalogue page's list region (count, table, page links): search and paging swap it. */
+  aircraftResults: 'aircraft-results',
+  /** Suggestions of a fleet row's aircraft field (search as you type). */
+  aircraftChoices: 'aircraft-choices',
   /** Heading of the catalogue page's import panel (a failed import scrolls to it). */
   aircraftImport: 'aircraft-import',
   /** Heading of a site page's station-file import panel. */

@@ -19,6 +19,8 @@ export interface WhatIfSide {
   readonly governing?: string;
   /** Why it cannot be done here (when not ok). */
   readonly reason?: string;
+  /** Not ok because the requirement is beyond the aircraft's plausibility bound (core/plausibility.ts). */
+  readonly impractical?: boolean;
 }
 
 /** What the panel shows: the server's what-if outcome (server/whatif.ts computes it). */
@@ -27,6 +29,10 @@ export interface WhatIfOutcomeView {
   readonly landing: WhatIfSide;
   readonly required_m?: number;
   readonly governing?: 'takeoff' | 'landing';
+  /** Reason when a side is beyond the plausibility bound: the aircraft cannot practically operate here. */
+  readonly impractical?: string;
+  /** The aircraft's plausibility bound, m. */
+  readonly plausibilityBound_m?: number;
   readonly densityAltitude_m: number;
   readonly isaDeviation_c: number;
   readonly v1_mps?: number;
@@ -107,9 +113,10 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
         ) : o === undefined ? null : (
           <>
             <p class="headline">
-              Required length: <strong data-testid="whatif-required">{o.required_m === undefined ? 'not possible here' : fmtLengthBoth(o.required_m, units)}</strong>
+              Required length: <strong data-testid="whatif-required">{o.required_m !== undefined ? fmtLengthBoth(o.required_m, units) : o.impractical ? 'cannot practically operate here' : 'not possible here'}</strong>
               {o.governing ? <span class="muted"> ({o.governing} governs)</span> : null}
             </p>
+            {o.impractical ? <p class="cannot" data-testid="whatif-impractical">{o.impractical}</p> : null}
             {delta !== undefined ? (
               <p class="delta">
                 {delta === 0 ? 'Same as' : `${delta > 0 ? '+' : '−'}${fmt(Math.abs(delta), 'length', units)} against`} {p.baseline!.label}
@@ -118,8 +125,8 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
             ) : null}
             <table class="compact">
               <tbody>
-                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? caseLabel(o.takeoff.governing) : o.takeoff.reason}</td></tr>
-                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? caseLabel(o.landing.governing) : o.landing.reason}</td></tr>
+                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? caseLabel(o.takeoff.governing) : o.takeoff.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.takeoff.reason}</td></tr>
+                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? caseLabel(o.landing.governing) : o.landing.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.landing.reason}</td></tr>
                 <tr><th scope="row">Density altitude</th><td class="num">{fmt(o.densityAltitude_m, 'altitude', units)}</td><td>{fmtIsaDeviation(o.isaDeviation_c, units)}</td></tr>
                 <tr><th scope="row">Speeds</th><td colspan={2}>
                   {o.v1_mps !== undefined ? `V1 ${fmt(o.v1_mps, 'speed', units)}, ` : ''}VR {fmt(o.vr_mps, 'speed', units)}, V2 {fmt(o.v2_mps, 'speed', units)}

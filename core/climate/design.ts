@@ -14,8 +14,10 @@
  *   Tm = monthly mean of the daily maximum, both of the hottest month.
  *
  * Monthly mean temperature = the given mean, else (mean daily max + mean daily min)/2.
- * Validity: monthly values −90 °C to 60 °C; one to twelve distinct calendar months.
+ * Validity: monthly values in the study's field ranges (core/fields.ts: mean daily maximum −60 to
+ * 55 °C, mean daily minimum −80 to 50 °C, mean −70 to 55 °C); one to twelve distinct calendar months.
  */
+import { DESIGN_TEMPERATURE_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE, MONTHLY_MEAN_RANGE } from '../fields.js';
 import { check, inRange } from '../validate.js';
 
 /** Version stamp of the climate methods (design temperature, daily aggregation). */
@@ -122,9 +124,9 @@ function validateMonth(m: MonthlyNormal, i: number): ResolvedMonth {
   const f = `months[${i}]`;
   const month = inRange(`${f}.month`, m.month, { min: 1, max: 12, unit: '' });
   check(Number.isInteger(month), `${f}.month`, month, 'a whole month number 1..12');
-  const max = inRange(`${f}.meanMax_c`, m.meanMax_c, CLIMATE_TEMPERATURE_RANGE);
-  const min = m.meanMin_c === undefined ? undefined : inRange(`${f}.meanMin_c`, m.meanMin_c, CLIMATE_TEMPERATURE_RANGE);
-  const mean = m.mean_c === undefined ? undefined : inRange(`${f}.mean_c`, m.mean_c, CLIMATE_TEMPERATURE_RANGE);
+  const max = inRange(`${f}.meanMax_c`, m.meanMax_c, MONTHLY_MEAN_MAX_RANGE);
+  const min = m.meanMin_c === undefined ? undefined : inRange(`${f}.meanMin_c`, m.meanMin_c, MONTHLY_MEAN_MIN_RANGE);
+  const mean = m.mean_c === undefined ? undefined : inRange(`${f}.mean_c`, m.mean_c, MONTHLY_MEAN_RANGE);
   if (min !== undefined) {
     check(min <= max, `${f}.meanMin_c`, min, `at most meanMax_c (${max} °C)`);
   }
@@ -136,6 +138,23 @@ function validateMonth(m: MonthlyNormal, i: number): ResolvedMonth {
     'a value: a monthly mean (mean_c) or a mean daily minimum (meanMin_c) is needed to rank months by mean temperature',
   );
   return { month, meanMax_c: max, mean_c: (max + (min as number)) / 2, meanSource: 'max-min' };
+}
+
+/**
+ * A design temperature derived from monthly data must lie in the range a given one has
+ * (DESIGN_TEMPERATURE_RANGE, core/fields.ts). Throws InputDomainError on the hottest month's mean
+ * maximum, `${path}[i].meanMax_c` where i is its place in `months` as given.
+ */
+export function checkDerivedDesignTemperature(months: readonly MonthlyNormal[], d: DesignTemperatureResult, path: string): void {
+  const i = Math.max(0, months.findIndex((m) => m.month === d.hottestMonth));
+  for (const t of [d.art_c, d.maxMeanMax_c]) {
+    check(
+      t >= DESIGN_TEMPERATURE_RANGE.min && t <= DESIGN_TEMPERATURE_RANGE.max,
+      `${path}[${i}].meanMax_c`,
+      d.art_c,
+      `a hottest-month design temperature from ${DESIGN_TEMPERATURE_RANGE.min} to ${DESIGN_TEMPERATURE_RANGE.max} °C, the range of a given design temperature (${monthName(d.hottestMonth)} is the hottest month)`,
+    );
+  }
 }
 
 /**

@@ -122,11 +122,12 @@ function temperatureOrThrow(
   shown: string,
   unitHint: string,
 ): number {
-  if (c < CLIMATE_TEMPERATURE_RANGE.min || c > CLIMATE_TEMPERATURE_RANGE.max) {
-    throw new ClimateFileError(
-      where,
-      `temperature ${shown} is ${c.toFixed(1)} °C, outside ${CLIMATE_TEMPERATURE_RANGE.min}..${CLIMATE_TEMPERATURE_RANGE.max} °C${unitHint}`,
-    );
+  if (!(c >= CLIMATE_TEMPERATURE_RANGE.min && c <= CLIMATE_TEMPERATURE_RANGE.max)) {
+    const text = shown.length > 40 ? `${shown.slice(0, 40)}…` : shown;
+    const limit = c > CLIMATE_TEMPERATURE_RANGE.max ? `too large (maximum ${CLIMATE_TEMPERATURE_RANGE.max} °C)` : `too small (minimum ${CLIMATE_TEMPERATURE_RANGE.min} °C)`;
+    // A value too long for the machine ("1000…0") converts to no number at all: never print "Infinity".
+    const converted = Number.isFinite(c) ? ` is ${c.toFixed(1)} °C:` : ':';
+    throw new ClimateFileError(where, `temperature ${text}${converted} ${limit}${unitHint}`);
   }
   return c;
 }

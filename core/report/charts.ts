@@ -9,7 +9,7 @@
  */
 import type { AircraftProfile } from '../aircraft.js';
 import { payloadForRange, payloadRangeDiagram } from '../route/index.js';
-import { reservePolicyOf } from '../study/run.js';
+import { isOperating, reservePolicyOf } from '../study/run.js';
 import type { StudyInput, StudyResult, ScenarioResult } from '../study/types.js';
 import type { ChartModel, ChartPoint, ChartSeries } from './chart.js';
 
@@ -28,11 +28,13 @@ function longestTakeoffRun(result: StudyResult): { length_m: number; label: stri
 
 export function temperatureChart(result: StudyResult): ChartModel {
   const critical = new Set(result.scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null));
+  // Points beyond the plausibility bound have no length (core/plausibility.ts): the line stops there
+  // and the legend says why.
   const series: ChartSeries[] = result.sensitivity.map((c) => ({
-    name: c.aircraftName,
+    name: c.temperature.some((p) => p.impractical) ? `${c.aircraftName} (line ends where the requirement passes the plausibility bound)` : c.aircraftName,
     style: 'line',
     emphasis: critical.has(c.aircraft),
-    points: c.temperature.filter((p) => p.required_m !== null).map((p) => ({ x: p.temperature_c, y: p.required_m! })),
+    points: c.temperature.flatMap((p) => (p.required_m === null ? [] : [{ x: p.temperature_c, y: p.required_m }])),
   }));
   const tora = longestTakeoffRun(result);
   return {
@@ -52,7 +54,7 @@ export function temperatureChart(result: StudyResult): ChartModel {
 }
 
 export function existingRunwayChart(result: StudyResult, scenario: ScenarioResult, index: number): ChartModel {
-  const rows = scenario.rows.filter((r) => r.status === 'ok');
+  const rows = scenario.rows.filter(isOperating);
   const takeoff: ChartPoint[] = rows.map((r, i) => ({ x: i, y: r.requiredTakeoff_m }));
   const landing: ChartPoint[] = rows.map((r, i) => ({ x: i, y: r.requiredLanding_m }));
   const design = result.site.runways[0]!;

@@ -307,6 +307,26 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     docAnchors: ['returns the greater of the two'],
   },
   {
+    id: 'plausibility',
+    title: 'Plausibility bound',
+    summary:
+      'Near an aircraft\'s climb or thrust limit the takeoff model still returns a distance, which grows without limit ' +
+      'as the climb gradient goes to zero. A requirement (or a physics distance behind it: all engines to the screen ' +
+      'height; for transport and commuter categories engine-out continued takeoff, accelerate-stop, balanced field; ' +
+      'or the landing) above the aircraft\'s ' +
+      'bound is reported as "cannot practically operate here" with the reason, is never the critical aircraft, and ' +
+      'gives no length in the sweeps, the what-if or the existing-runway check.',
+    formulas: [
+      'bound = max(2.5 × ARFL, 5500 m)',
+      'impractical when any checked distance > bound',
+    ],
+    symbols: 'ARFL: aeroplane reference field length (flight-manual value, else the model at MTOW, sea level, ISA, dry); an ARFL above 5500 m does not raise the bound.',
+    limits: 'The factor 2.5 is a project convention (well beyond the 35 % at which the percentage corrections ask for a specific study); 5500 m is the length class of the longest paved runways (common practice, from memory).',
+    sources: ['AN14', 'ADM1'],
+    doc: 'study.md',
+    docAnchors: ['bound = max(2.5 × ARFL, 5 500 m)', 'cannot practically operate here'],
+  },
+  {
     id: 'classification',
     title: 'Classification',
     summary:

@@ -171,7 +171,9 @@ export function designTakeoffMass(input: DesignTakeoffMassInput): RouteResult {
     stageLength_m: s,
     requestedPayload_kg: P,
     loading,
-    designTakeoffMass_kg: loading.takeoffMass_kg,
+    // A loading capped at MTOW can land a rounding error above it (22800.000000000004 kg): the design
+    // mass is a takeoff mass, so it is held to MTOW within the route model's mass slack.
+    designTakeoffMass_kg: loading.takeoffMass_kg > m.mtow_kg && loading.takeoffMass_kg <= m.mtow_kg + ROUTE_MASS_SLACK_KG ? m.mtow_kg : loading.takeoffMass_kg,
     payloadOffload_kg: Math.max(0, P - loading.payload_kg),
     ...(limitedBy !== undefined ? { limitedBy } : {}),
     violated: status === 'ok' ? [] : violated,

@@ -17,9 +17,11 @@
  * (the rule's allowance already is the en-route contingency, so the two are not added); 'custom' uses
  * its own fraction, or the aircraft's when omitted.
  *
- * Validity: alternate distance 0–1500 km, reserve time 0–240 min, contingency fraction 0–0.2.
+ * Validity: the study's field ranges (core/fields.ts): alternate distance 0–2000 km, reserve time
+ * 0–240 min, contingency fraction 0–0.2.
  */
 import { InputDomainError } from '../errors.js';
+import { ALTERNATE_DISTANCE_RANGE_KM, CONTINGENCY_FRACTION_RANGE, RESERVE_TIME_RANGE_MIN } from '../fields.js';
 import { NM } from '../units.js';
 import { check, inRange } from '../validate.js';
 
@@ -79,9 +81,10 @@ export const INTERNATIONAL_TRIP_TIME_FRACTION = 0.1;
 /** Reserve time of the cruise-45min policy, min (14 CFR 121.639, 91.167). */
 export const CRUISE_RESERVE_MINUTES = 45;
 
-export const RESERVE_ALTERNATE_DISTANCE_RANGE = { min: 0, max: 1_500_000, unit: 'm' } as const;
-export const RESERVE_MINUTES_RANGE = { min: 0, max: 240, unit: 'min' } as const;
-export const RESERVE_CONTINGENCY_FRACTION_RANGE = { min: 0, max: 0.2, unit: '' } as const;
+/** The study's alternate-distance range (core/fields.ts), in metres. */
+export const RESERVE_ALTERNATE_DISTANCE_RANGE = { min: ALTERNATE_DISTANCE_RANGE_KM.min * 1000, max: ALTERNATE_DISTANCE_RANGE_KM.max * 1000, unit: 'm' } as const;
+export const RESERVE_MINUTES_RANGE = RESERVE_TIME_RANGE_MIN;
+export const RESERVE_CONTINGENCY_FRACTION_RANGE = CONTINGENCY_FRACTION_RANGE;
 
 /** A policy with every parameter filled in. */
 export interface ResolvedReserves {

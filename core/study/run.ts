@@ -16,8 +16,12 @@
  *    FAA AC 150/5000-17). Critical aircraft: the regular-use row that can operate with the greatest
  *    required length (ties: more operations, then the aircraft id). Recommended length: that
  *    requirement rounded up to the planning increment (roundUpToIncrement).
+ *    A row whose requirement (or a physics distance behind it) is beyond the aircraft's plausibility
+ *    bound (core/plausibility.ts) cannot practically operate: it has no requirement, is never the
+ *    critical aircraft, and is listed under the scenario's exclusions and warnings with the reason.
  * 4. Operations served: for each candidate length, the share of the scenario's annual operations
- *    whose requirement fits. Sensitivity: required length against temperature and elevation.
+ *    whose requirement fits. Sensitivity: required length against temperature and elevation; points
+ *    beyond the plausibility bound have no length (marked impractical).
  *
  * Pure and deterministic: the same input gives the same result. No rounding other than the named
  * planning-increment step.
@@ -25,14 +29,22 @@
 import type { AircraftProfile } from '../aircraft.js';
 import { airAt, standardTemperatureC } from '../atmosphere.js';
 import { classifyAircraft } from '../classify.js';
-import { designTemperatureFromMonthly } from '../climate/index.js';
+import { checkDerivedDesignTemperature, designTemperatureFromMonthly } from '../climate/index.js';
 import { CAUTIONS } from '../caution.js';
 import { InputDomainError } from '../errors.js';
+import {
+  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DESIGN_TEMPERATURE_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, ROUNDING_INCREMENT_RANGE,
+  RESERVE_TIME_RANGE_MIN, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM,
+} from '../fields.js';
 import { LANDING_RULE_LABELS, analyseLanding, referenceLandingSpeed } from '../landing.js';
 import { referenceLengthAtSite } from '../reference.js';
 import { requiredLength } from '../requirement.js';
+import {
+  aeroplaneReferenceFieldLength, checkPlausibility, plausibilityBound, takeoffDistances,
+  type CheckedDistance, type PlausibilityBound, type PlausibilityFinding,
+} from '../plausibility.js';
 import { designTakeoffMass, type ReservePolicy, type RouteResult } from '../route/index.js';
-import { analyseRunwayProfile, checkDeclaredDistances } from '../runway.js';
+import { analyseRunwayProfile, checkDeclaredDistances, checkProfileSlopes } from '../runway.js';
 import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
 import { validateAircraft } from '../aircraft.js';
@@ -45,7 +57,7 @@ import type {
 } from './types.js';
 
 /** Version of the study engine and the models it calls; changes whenever a number can change. */
-export const STUDY_METHOD_VERSION = 'runwright-methods-1';
+export const STUDY_METHOD_VERSION = 'runwright-methods-2';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = 15;
@@ -89,7 +101,7 @@ export function reservePolicyOf(r: StudyReserves): ReservePolicy {
 
 export function siteConditions(input: StudyInput): SiteConditions {
   const site = input.site;
-  inRange('site.elevation_m', site.elevation_m, { min: -400, max: 4500, unit: 'm' });
+  inRange('site.elevation_m', site.elevation_m, SITE_ELEVATION_RANGE);
   check(site.runways.length > 0, 'site.runways', site.runways.length, 'at least one runway');
   const warnings: string[] = [];
   let designTemperature_c: number;
@@ -97,6 +109,7 @@ export function siteConditions(input: StudyInput): SiteConditions {
   let climate: SiteConditions['climate'];
   if (site.climate) {
     const d = designTemperatureFromMonthly({ months: site.climate.monthly, includeOlderFormula: true });
+    checkDerivedDesignTemperature(site.climate.monthly, d, 'site.climate.monthly');
     climate = {
       source: site.climate.source,
       ...(site.climate.years === undefined ? {} : { years: site.climate.years }),
@@ -110,7 +123,7 @@ export function siteConditions(input: StudyInput): SiteConditions {
     warnings.push(...d.warnings);
   }
   if (site.designTemperature_c !== undefined) {
-    designTemperature_c = inRange('site.designTemperature_c', site.designTemperature_c, { min: -30, max: 55, unit: '°C' });
+    designTemperature_c = inRange('site.designTemperature_c', site.designTemperature_c, DESIGN_TEMPERATURE_RANGE);
     source = 'given';
   } else if (climate) {
     designTemperature_c = climate.art_c;
@@ -122,6 +135,7 @@ export function siteConditions(input: StudyInput): SiteConditions {
   const runways: RunwaySummary[] = site.runways.map((r, i) => {
     check(r.directions.length >= 1 && r.directions.length <= 2, `site.runways[${i}].directions`, r.directions.length, '1 or 2 directions');
     const prof = analyseRunwayProfile({ points: r.profile });
+    checkProfileSlopes(prof, `site.runways[${i}].profile`);
     const directions = r.directions.map((d, j) => {
       const dd = checkDeclaredDistances(d);
       warnings.push(...dd.warnings.map((w) => `Runway ${d.designator}: ${w}`));
@@ -175,7 +189,24 @@ class Evaluator {
   private readonly calibrations = new Map<string, TakeoffCalibrationResult>();
   /** Greatest takeoff and landing masses per aircraft and runway direction (independent of the row). */
   readonly solvedMasses = new Map<string, { takeoffMass: MaxTakeoffMassResult; landingMass: MaxLandingMassResult }>();
+  private readonly arfls = new Map<string, ReturnType<typeof aeroplaneReferenceFieldLength>>();
   constructor(readonly input: StudyInput, readonly site: SiteConditions) {}
+
+  /** Aeroplane reference field length (flight manual, else the model at MTOW, SL, ISA, dry; core/plausibility.ts). */
+  arfl(a: AircraftProfile): ReturnType<typeof aeroplaneReferenceFieldLength> {
+    let r = this.arfls.get(a.id);
+    if (!r) {
+      r = aeroplaneReferenceFieldLength(a);
+      this.arfls.set(a.id, r);
+    }
+    return r;
+  }
+
+  /** The aircraft's plausibility bound: the same one the what-if and the runway check apply. */
+  bound(a: AircraftProfile): PlausibilityBound {
+    const r = this.arfl(a);
+    return plausibilityBound(r.arfl_m, r.source);
+  }
 
   get options(): StudyOptions {
     return this.input.options;
@@ -256,11 +287,7 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
   // Aeroplane reference field length: the flight-manual value when the profile carries one, else the
   // model at MTOW, sea level, ISA, still air, zero slope, dry paved runway (ICAO Annex 14 definition),
   // whatever the study's design surface.
-  let arfl = a.reference?.takeoff_m;
-  if (arfl === undefined) {
-    const t = ev.takeoff(a, a.mtow_kg, { pressureAltitude_m: 0, temperature_c: 15, slope: 0 }, 1, 'dry');
-    arfl = t.feasible ? t.required_m : undefined;
-  }
+  const arfl = ev.arfl(a).arfl_m;
   const vref = referenceLandingSpeed({ aircraft: a });
   const c = classifyAircraft(a, { arfl_m: arfl ?? 9999, vref_mps: vref });
   const out: AircraftClassificationSummary = {
@@ -305,8 +332,8 @@ function evaluateRow(
   path: string,
 ): RowResult {
   const opts = ev.options;
-  inRange(`${path}.annualOperations`, row.annualOperations, { min: 0, max: 1e6, unit: 'operations/year' });
-  inRange(`${path}.stageLength_km`, row.stageLength_km, { min: 1, max: 20000, unit: 'km' });
+  inRange(`${path}.annualOperations`, row.annualOperations, ANNUAL_OPERATIONS_RANGE);
+  inRange(`${path}.stageLength_km`, row.stageLength_km, STAGE_LENGTH_RANGE_KM);
   inRange(`${path}.payload_kg`, row.payload_kg, { min: 0, max: a.maxPayload_kg, unit: 'kg' });
   const warnings: string[] = [];
   const regularUse = groupOperations >= opts.regularUseThreshold;
@@ -436,6 +463,12 @@ function evaluateRow(
     }
   }
 
+  // 4. Plausibility: a requirement beyond the aircraft's bound is a reasoned result, not a length.
+  const impractical = implausibleRow(ev, a, t, takeoffRequired, mass, landingRequired, landingMass);
+  if (impractical) {
+    return cannotOperate(base, route, row, impractical.reason, warnings, mass, routeSum, impractical);
+  }
+
   const req = requiredLength({ takeoff_m: takeoffRequired, landing_m: landingRequired });
   const existing: ExistingRunwayCheck[] = [];
   for (const rw of ev.site.runways) {
@@ -453,10 +486,10 @@ function evaluateRow(
         takeoffMass_kg: mass,
         landingMass_kg: landingMass,
         thrustScale: ev.thrustScale(a),
-        stageLength_m: row.stageLength_km * 1000,
-        payload_kg: row.payload_kg,
-        reserves: reservePolicyOf(opts.reserves),
+        // The route penalty needs the route model: only for profiles with cruise data.
+        ...(a.cruise ? { stageLength_m: row.stageLength_km * 1000, payload_kg: row.payload_kg, reserves: reservePolicyOf(opts.reserves) } : {}),
         passengerMass_kg: opts.passengerMass_kg,
+        plausibility: ev.bound(a),
         ...(solved ? { solved } : {}),
       });
       if (!solved) ev.solvedMasses.set(solvedKey, { takeoffMass: assessment.takeoffMass, landingMass: assessment.landingMass });
@@ -480,6 +513,31 @@ function evaluateRow(
   };
 }
 
+/**
+ * The plausibility finding of a row (core/plausibility.ts), or undefined when every length is within
+ * the aircraft's bound. Checked: the method's takeoff requirement, the physics distances behind it
+ * (named as the physics model's when another method gives the requirement), then the landing.
+ */
+function implausibleRow(
+  ev: Evaluator, a: AircraftProfile, t: TakeoffResult, takeoffRequired: number, takeoffMass_kg: number,
+  landingRequired: number, landingMass_kg: number,
+): PlausibilityFinding | undefined {
+  const bound = ev.bound(a);
+  const ctx = { elevation_m: ev.site.elevation_m, temperature_c: ev.site.designTemperature_c };
+  const physics = takeoffDistances(t);
+  const usesPhysics = t.feasible && takeoffRequired === t.required_m;
+  const takeoff: CheckedDistance[] = [
+    { what: 'takeoff', value_m: takeoffRequired },
+    ...(usesPhysics ? physics.slice(1) : physics.map((d) => ({ what: `physics model's ${d.what}`, value_m: d.value_m }))),
+  ];
+  return checkPlausibility(takeoff, bound, { ...ctx, mass_kg: takeoffMass_kg })
+    ?? checkPlausibility([{ what: 'landing', value_m: landingRequired }], bound, {
+      elevation_m: ev.site.elevation_m,
+      temperature_c: ev.options.landingTemperature === 'design' ? ev.site.designTemperature_c : standardTemperatureC(ev.site.elevation_m),
+      mass_kg: landingMass_kg,
+    });
+}
+
 function cannotOperate(
   base: Omit<RowResult, 'status' | 'reason' | 'takeoffMass_kg' | 'requiredTakeoff_m' | 'requiredLanding_m' | 'required_m' | 'governing' | 'route' | 'existing' | 'warnings'>,
   route: RouteResult | undefined,
@@ -488,16 +546,19 @@ function cannotOperate(
   warnings: string[],
   mass = route?.designTakeoffMass_kg ?? 0,
   routeSum = routeSummary(row, route, mass),
+  plausibility?: PlausibilityFinding,
 ): RowResult {
+  // No requirement: null (never 0, which would read like one); `reason` says why.
   return {
     ...base,
     status: 'cannot-operate',
     reason,
     takeoffMass_kg: mass,
-    requiredTakeoff_m: 0,
-    requiredLanding_m: 0,
-    required_m: 0,
+    requiredTakeoff_m: null,
+    requiredLanding_m: null,
+    required_m: null,
     governing: 'takeoff',
+    ...(plausibility ? { plausibility } : {}),
     route: routeSum,
     existing: [],
     warnings: dedupe([reason, ...warnings]),
@@ -512,9 +573,17 @@ function dedupe(list: readonly string[]): string[] {
 // Scenario
 
 /** Share of annual operations whose requirement fits each candidate length. */
+/** A row that can operate, with its requirement. */
+export type OperatingRow = RowResult & { readonly status: 'ok'; readonly required_m: number; readonly requiredTakeoff_m: number; readonly requiredLanding_m: number };
+
+/** Whether a row can operate (status ok, with a requirement). */
+export function isOperating(r: RowResult): r is OperatingRow {
+  return r.status === 'ok' && r.required_m !== null && r.requiredTakeoff_m !== null && r.requiredLanding_m !== null;
+}
+
 export function operationsServed(rows: readonly RowResult[], increment_m: number): OperationsServedPoint[] {
   const total = rows.reduce((s, r) => s + r.annualOperations, 0);
-  const ok = rows.filter((r) => r.status === 'ok');
+  const ok = rows.filter(isOperating);
   if (ok.length === 0 || total === 0) return [];
   const lo = Math.max(0, Math.floor(Math.min(...ok.map((r) => r.required_m)) / increment_m) * increment_m - increment_m);
   const hi = roundUpToIncrement(Math.max(...ok.map((r) => r.required_m)), increment_m);
@@ -532,8 +601,8 @@ export function operationsServed(rows: readonly RowResult[], increment_m: number
 }
 
 /** The critical aircraft: regular use, able to operate, greatest requirement; ties by operations, then id. */
-export function criticalRow(rows: readonly RowResult[]): RowResult | undefined {
-  const eligible = rows.filter((r) => r.regularUse && r.status === 'ok');
+export function criticalRow(rows: readonly RowResult[]): OperatingRow | undefined {
+  const eligible = rows.filter((r): r is OperatingRow => r.regularUse && isOperating(r));
   return [...eligible].sort(
     (x, y) => y.required_m - x.required_m || y.annualOperations - x.annualOperations || (x.aircraft < y.aircraft ? -1 : 1),
   )[0];
@@ -562,10 +631,16 @@ export function runStudy(input: StudyInput): StudyResult {
       return evaluateRow(ev, a, row, groupOps.get(a.group ?? a.id)!, classes, `scenarios[${i}].fleet[${j}]`);
     });
     const crit = criticalRow(rows);
-    const excluded = rows.filter((r) => r.status !== 'ok').map((r) => ({ aircraft: r.aircraft, reason: r.reason ?? 'cannot operate' }));
+    const excluded = rows.filter((r) => !isOperating(r)).map((r) => ({ aircraft: r.aircraft, reason: r.reason ?? 'cannot operate' }));
     const warnings: string[] = [];
+    // Rows beyond the plausibility bound are named with their reason: they would otherwise have set
+    // the recommendation (or been mistaken for one).
+    for (const r of rows) {
+      if (!r.plausibility) continue;
+      warnings.push(`${r.aircraftName}${r.regularUse ? ' (regular use)' : ''} is left out of the critical-aircraft selection: ${r.reason ?? r.plausibility.reason}`);
+    }
     if (!crit) warnings.push('No aircraft in regular use can operate at this site: no recommendation.');
-    const irregularLonger = crit ? rows.filter((r) => !r.regularUse && r.status === 'ok' && r.required_m > crit.required_m) : [];
+    const irregularLonger = crit ? rows.filter(isOperating).filter((r) => !r.regularUse && r.required_m > crit.required_m) : [];
     for (const r of irregularLonger) {
       warnings.push(`${r.aircraftName} needs more (${Math.round(r.required_m)} m) but is below the regular-use threshold (${r.groupOperations} of ${opts.regularUseThreshold} operations).`);
     }
@@ -611,7 +686,8 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
   const massBy = new Map<string, number>();
   for (const s of scenarios) {
     for (const r of s.rows) {
-      if (r.status !== 'ok') continue;
+      // Rows beyond the plausibility bound are swept too: the sweep shows where they become practical.
+      if (r.status !== 'ok' && !r.plausibility) continue;
       massBy.set(r.aircraft, Math.max(massBy.get(r.aircraft) ?? 0, r.takeoffMass_kg));
     }
   }
@@ -630,21 +706,28 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
       const l = ev.landing(a, a.mlw_kg, elev);
       return l.status === 'ok' ? l.required_m : null;
     };
-    const req = (elev: number, temp: number, landing: number | null): number | null => {
+    const bound = ev.bound(a);
+    // The same bound as the rows: a point beyond it is marked impractical and has no length.
+    const req = (elev: number, temp: number, landing: number | null): { required_m: number | null; impractical?: true } => {
       const t = ev.takeoff(a, mass, { pressureAltitude_m: elev, temperature_c: temp, slope: site.designSlope });
-      if (!t.feasible || landing === null) return null;
-      return Math.max(t.required_m, landing);
+      if (!t.feasible) return { required_m: null };
+      const ctx = { elevation_m: elev, temperature_c: temp, mass_kg: mass };
+      if (checkPlausibility(takeoffDistances(t), bound, ctx)) return { required_m: null, impractical: true };
+      if (landing === null) return { required_m: null };
+      if (checkPlausibility([{ what: 'landing', value_m: landing }], bound, ctx)) return { required_m: null, impractical: true };
+      return { required_m: Math.max(t.required_m, landing) };
     };
     const landingHere = landingAt(site.pressureAltitude_m);
     out.push({
       aircraft: a.id,
       aircraftName: a.name,
       mass_kg: mass,
-      temperature: temps.map((temperature_c) => ({ temperature_c, required_m: req(site.pressureAltitude_m, temperature_c, landingHere) })),
+      plausibilityBound_m: bound.bound_m,
+      temperature: temps.map((temperature_c) => ({ temperature_c, ...req(site.pressureAltitude_m, temperature_c, landingHere) })),
       elevation: elevations.map((elevation_m) => {
         // Same deviation from ISA as the design day at the site.
         const temp = Math.max(-60, Math.min(60, standardTemperatureC(elevation_m) + site.isaDeviation_c));
-        return { elevation_m, required_m: req(elevation_m, temp, landingAt(elevation_m)) };
+        return { elevation_m, ...req(elevation_m, temp, landingAt(elevation_m)) };
       }),
     });
   }
@@ -664,10 +747,18 @@ export function validateStudy(input: StudyInput): void {
   });
   input.scenarios.forEach((s, i) => {
     check(s.fleet.length > 0, `scenarios[${i}].fleet`, s.fleet.length, 'at least one fleet row');
-    s.fleet.forEach((r, j) => check(ids.has(r.aircraft), `scenarios[${i}].fleet[${j}].aircraft`, r.aircraft, `one of the study's aircraft ids (${[...ids].join(', ')})`));
+    s.fleet.forEach((r, j) => {
+      check(ids.has(r.aircraft), `scenarios[${i}].fleet[${j}].aircraft`, r.aircraft, `one of the study's aircraft ids (${[...ids].join(', ')})`);
+      const a = input.aircraft.find((x) => x.id === r.aircraft)!;
+      inRange(`scenarios[${i}].fleet[${j}].payload_kg`, r.payload_kg, { min: 0, max: a.maxPayload_kg, unit: 'kg' });
+    });
   });
   const o = input.options;
-  inRange('options.regularUseThreshold', o.regularUseThreshold, { min: 1, max: 100000, unit: 'operations/year' });
-  inRange('options.roundingIncrement_m', o.roundingIncrement_m, { min: 1, max: 500, unit: 'm' });
-  inRange('options.passengerMass_kg', o.passengerMass_kg, { min: 50, max: 200, unit: 'kg' });
+  inRange('options.regularUseThreshold', o.regularUseThreshold, REGULAR_USE_THRESHOLD_RANGE);
+  inRange('options.roundingIncrement_m', o.roundingIncrement_m, ROUNDING_INCREMENT_RANGE);
+  inRange('options.passengerMass_kg', o.passengerMass_kg, PASSENGER_MASS_RANGE);
+  const r = o.reserves;
+  if (r.alternate_km !== undefined) inRange('options.reserves.alternate_km', r.alternate_km, ALTERNATE_DISTANCE_RANGE_KM);
+  if (r.holding_min !== undefined) inRange('options.reserves.holding_min', r.holding_min, RESERVE_TIME_RANGE_MIN);
+  if (r.contingencyFraction !== undefined) inRange('options.reserves.contingencyFraction', r.contingencyFraction, CONTINGENCY_FRACTION_RANGE);
 }

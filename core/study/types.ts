@@ -6,6 +6,7 @@
 import type { AircraftProfile } from '../aircraft.js';
 import type { Surface } from '../surface.js';
 import type { ProfilePoint } from '../runway.js';
+import type { PlausibilityFinding } from '../plausibility.js';
 
 export interface MonthlyClimate {
   /** Calendar month 1–12. */
@@ -285,10 +286,19 @@ export interface RowResult {
    * design mass minus the climb-limited mass the takeoff is sized at), kg; absent when not climb-limited.
    */
   readonly climbOffload_kg?: number;
-  readonly requiredTakeoff_m: number;
-  readonly requiredLanding_m: number;
-  readonly required_m: number;
+  /**
+   * Requirements, m; null when the row cannot operate (status 'cannot-operate', `reason` says why):
+   * a row that cannot operate has no requirement, and never a 0 that reads like one.
+   */
+  readonly requiredTakeoff_m: number | null;
+  readonly requiredLanding_m: number | null;
+  readonly required_m: number | null;
   readonly governing: 'takeoff' | 'landing';
+  /**
+   * Present when a requirement (or a physics distance behind it) is beyond the plausibility bound
+   * (core/plausibility.ts): the row is 'cannot-operate' with this finding's reason.
+   */
+  readonly plausibility?: PlausibilityFinding;
   readonly route: RouteSummary;
   readonly takeoff?: TakeoffSummary;
   readonly landing?: LandingSummary;
@@ -326,9 +336,21 @@ export interface SensitivityCurve {
   readonly aircraftName: string;
   /** Mass used (the greatest design takeoff mass of the aircraft across scenarios), kg. */
   readonly mass_kg: number;
-  readonly temperature: readonly { readonly temperature_c: number; readonly required_m: number | null }[];
-  readonly elevation: readonly { readonly elevation_m: number; readonly required_m: number | null }[];
+  /** Plausibility bound of the aircraft, m (core/plausibility.ts); points beyond it have no length. */
+  readonly plausibilityBound_m: number;
+  readonly temperature: readonly SensitivityPoint<'temperature_c'>[];
+  readonly elevation: readonly SensitivityPoint<'elevation_m'>[];
 }
+
+/**
+ * One point of a sensitivity sweep. `required_m` is null where the aircraft cannot operate:
+ * `impractical` marks a point whose requirement is beyond the plausibility bound (not a length),
+ * otherwise the takeoff or the landing is not possible there.
+ */
+export type SensitivityPoint<K extends 'temperature_c' | 'elevation_m'> = { readonly [P in K]: number } & {
+  readonly required_m: number | null;
+  readonly impractical?: true;
+};
 
 export interface StudyResult {
   readonly methodVersion: string;

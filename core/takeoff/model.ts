@@ -23,6 +23,7 @@ import { airAt } from '../atmosphere.js';
 import { stallSpeed, validateAircraft, type AircraftProfile } from '../aircraft.js';
 import { check, inRange } from '../validate.js';
 import { InputDomainError } from '../errors.js';
+import { RUNWAY_SLOPE_RANGE } from '../fields.js';
 import { friction, SURFACES } from '../surface.js';
 import { engineModel, type PropulsionAir, type EngineModel } from '../propulsion.js';
 import { G0 } from '../units.js';
@@ -45,7 +46,7 @@ export const STOP_INTERVALS = 4;
 export const TAKEOFF_INPUT_RANGES = {
   pressureAltitude_m: { min: -400, max: 4500, unit: 'm' },
   temperature_c: { min: -60, max: 60, unit: '°C' },
-  slope: { min: -0.03, max: 0.03, unit: '' },
+  slope: RUNWAY_SLOPE_RANGE,
   headwind_mps: { min: -15, max: 25, unit: 'm/s' },
   thrustScale: { min: 0.3, max: 2, unit: '' },
   clMaxScale: { min: 0.7, max: 1.3, unit: '' },

@@ -7,7 +7,8 @@
  * Renaming an aircraft (updating with a new id) carries the new id into fleet rows (ON UPDATE CASCADE);
  * saved results keep the input they were computed from and never change.
  */
-import { asc, eq, getTableColumns, inArray, sql } from 'drizzle-orm';
+import { asc, eq, getTableColumns, inArray, or, sql, type SQL } from 'drizzle-orm';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { validateAircraft, type AircraftProfile, type CruiseData, type ReferenceLengths, type ReferenceTable } from '../../core/index.js';
 import { AircraftInUseError, DuplicateIdError, NotFoundError, type ScenarioUse } from '../errors.js';
 import { aircraft, fleetRows, scenarios, studies } from '../schema.js';
@@ -281,4 +282,223 @@ export function deleteAircraft(db: Db, id: string): void {
 /** Number of aircraft in the catalogue. */
 export function countAircraft(db: Db): number {
   return db.select({ n: sql<number>`count(*)` }).from(aircraft).get()!.n;
+}
+
+// ---------------------------------------------------------------------------- paging and search
+
+/** Longest catalogue search term, characters (a longer one is cut). */
+export const AIRCRAFT_SEARCH_MAX = 100;
+
+/** A LIKE pattern matching `term` anywhere, with `%`, `_` and the escape character taken literally. */
+export function likeContains(term: string): string {
+  return `%${term.replace(/[\\%_]/g, (ch) => `\\${ch}`)}%`;
+}
+
+/** Rows whose id, name, group, certification or engine type contains the term (ASCII case-insensitive). */
+function matching(term: string | undefined): SQL | undefined {
+  const t = (term ?? '').trim().slice(0, AIRCRAFT_SEARCH_MAX);
+  if (t === '') return undefined;
+  const p = likeContains(t);
+  const like = (col: SQLiteColumn) => sql`${col} LIKE ${p} ESCAPE '\\'`;
+  return or(like(aircraft.id), like(aircraft.name), like(aircraft.group), like(aircraft.certification), like(aircraft.engineType));
+}
+
+export interface AircraftPageQuery {
+  /** Substring of the id, name, group, certification or engine type; blank for every aircraft. */
+  readonly search?: string;
+  /** Rows per page (at least 1). */
+  readonly limit: number;
+  /** Rows skipped, in name-then-id order (0 or more). */
+  readonly offset: number;
+}
+
+/** Number of aircraft matching the search (every aircraft for a blank one). */
+export function countAircraftMatching(db: Db, search: string | undefined): number {
+  return db.select({ n: sql<number>`count(*)` }).from(aircraft).where(matching(search)).get()!.n;
+}
+
+/**
+ * One page of the catalogue in name-then-id order: the list pages and the API read a bounded slice
+ * (index `aircraft_name_order`) instead of the whole table.
+ */
+export function pageAircraft(db: Db, q: AircraftPageQuery): AircraftProfile[] {
+  return db.select().from(aircraft).where(matching(q.search)).orderBy(asc(aircraft.name), asc(aircraft.id))
+    .limit(Math.max(1, Math.floor(q.limit))).offset(Math.max(0, Math.floor(q.offset))).all().map(rowToAircraft);
+}
+
+/** Ids and names of at most `limit` aircraft matching the search, in name order (pickers). */
+export function aircraftChoices(db: Db, search: string | undefined, limit: number): { id: string; name: string }[] {
+  return db.select({ id: aircraft.id, name: aircraft.name }).from(aircraft).where(matching(search))
+    .orderBy(asc(aircraft.name), asc(aircraft.id)).limit(Math.max(1, Math.floor(limit))).all();
+}
+
+/** Names of the given aircraft ids that exist (fleet rows name their aircraft without loading the catalogue). */
+export function aircraftNames(db: Db, ids: readonly string[]): Map<string, string> {
+  const out = new Map<string, string>();
+  const unique = [...new Set(ids)];
+  for (let i = 0; i < unique.length; i += 500) {
+    const chunk = unique.slice(i, i + 500);
+    for (const r of db.select({ id: aircraft.id, name: aircraft.name }).from(aircraft).where(inArray(aircraft.id, chunk)).all()) out.set(r.id, r.name);
+  }
+  return out;
+}
+
+/** The profiles of the given ids that exist (a form checks its rows without loading the catalogue). */
+export function aircraftByIds(db: Db, ids: readonly string[]): Map<string, AircraftProfile> {
+  const out = new Map<string, AircraftProfile>();
+  const unique = [...new Set(ids)];
+  for (let i = 0; i < unique.length; i += 500) {
+    const chunk = unique.slice(i, i + 500);
+    for (const r of db.select().from(aircraft).where(inArray(aircraft.id, chunk)).all()) out.set(r.id, rowToAircraft(r));
+  }
+  return out;
+}
+
+// ------------------------------------------------------------------------------------- bulk import
+
+/** One column of the aircraft table: the row key, its SQL name, and whether it holds text. */
+export interface AircraftColumn { readonly key: keyof AircraftInsert; readonly name: string; readonly text: boolean }
+
+/** Every column of the aircraft table, in one fixed order (the order of the packed rows below). */
+export const AIRCRAFT_COLUMNS: readonly AircraftColumn[] = Object.entries(getTableColumns(aircraft)).map(([key, c]) => ({
+  key: key as keyof AircraftInsert, name: c.name, text: c.dataType === 'string',
+}));
+const TEXT_COLUMNS = AIRCRAFT_COLUMNS.filter((c) => c.text);
+const NUMBER_COLUMNS = AIRCRAFT_COLUMNS.filter((c) => !c.text);
+
+/**
+ * Aircraft table rows packed for a worker thread to hand to the main thread cheaply: the numbers in
+ * one Float64Array (NaN for a missing value: a validated value is always finite) and the text cells
+ * in one string joined by NUL (which no imported text can hold), with a null mask. Copying this
+ * across threads costs milliseconds where an array of row objects costs hundreds (structured clone
+ * builds every object on the receiving thread, blocking its event loop); the typed arrays are
+ * transferred, not copied.
+ */
+export interface PackedAircraft {
+  readonly count: number;
+  readonly numbers: Float64Array;
+  readonly texts: string;
+  readonly textNull: Uint8Array;
+  /** The ids alone, joined by NUL (the commit checks them before it reads the rows). */
+  readonly ids: string;
+}
+
+/** Packs profiles (already validated) as table rows. */
+export function packAircraft(profiles: readonly AircraftProfile[]): PackedAircraft {
+  const n = profiles.length;
+  const numbers = new Float64Array(n * NUMBER_COLUMNS.length);
+  const textNull = new Uint8Array(n * TEXT_COLUMNS.length);
+  const texts: string[] = [];
+  profiles.forEach((p, i) => {
+    const row = aircraftToRow(p) as Record<string, unknown>;
+    NUMBER_COLUMNS.forEach((c, k) => {
+      const v = row[c.key];
+      numbers[i * NUMBER_COLUMNS.length + k] = v === null || v === undefined ? Number.NaN : (v as number);
+    });
+    TEXT_COLUMNS.forEach((c, k) => {
+      const v = row[c.key];
+      if (v === null || v === undefined) textNull[i * TEXT_COLUMNS.length + k] = 1;
+      texts.push(v === null || v === undefined ? '' : String(v));
+    });
+  });
+  return { count: n, numbers, texts: texts.join('\u0000'), textNull, ids: profiles.map((p) => p.id).join('\u0000') };
+}
+
+/** Reads packed rows back in order, one parameter array per row (in AIRCRAFT_COLUMNS order). */
+class PackedReader {
+  private row = 0;
+  private at = 0;
+  constructor(private readonly p: PackedAircraft) {}
+  get done(): boolean { return this.row >= this.p.count; }
+  next(): (string | number | null)[] {
+    const i = this.row++;
+    const texts: (string | null)[] = [];
+    for (let k = 0; k < TEXT_COLUMNS.length; k++) {
+      let end = this.p.texts.indexOf('\u0000', this.at);
+      if (end < 0) end = this.p.texts.length;
+      const cell = this.p.texts.slice(this.at, end);
+      this.at = end + 1;
+      texts.push(this.p.textNull[i * TEXT_COLUMNS.length + k] === 1 ? null : cell);
+    }
+    let t = 0;
+    let m = 0;
+    return AIRCRAFT_COLUMNS.map((c) => {
+      if (c.text) return texts[t++]!;
+      const v = this.p.numbers[i * NUMBER_COLUMNS.length + m++]!;
+      return Number.isNaN(v) ? null : v;
+    });
+  }
+}
+
+/** The ids of packed rows, in order. */
+export function packedIds(p: PackedAircraft): string[] {
+  return p.count === 0 ? [] : p.ids.split('\u0000');
+}
+
+/** Thrown by a bulk import that would overwrite aircraft without being asked to; names the rows. */
+export class ExistingAircraftError extends Error {
+  override readonly name = 'ExistingAircraftError';
+  constructor(
+    /** Indices, in the import, of the rows whose id is already in the catalogue (ascending). */
+    readonly rows: readonly number[],
+    readonly ids: readonly string[],
+  ) {
+    super(`${ids.length} aircraft already in the catalogue: ${ids.slice(0, 5).map((id) => `"${id}"`).join(', ')}${ids.length > 5 ? ', …' : ''}`);
+  }
+}
+
+/** Rows per step of a bulk import (each step takes about 1 ms; see `bulkImportAircraft`). */
+export const BULK_STEP_ROWS = 100;
+
+const q = (name: string) => `"${name}"`;
+const COLUMN_LIST = AIRCRAFT_COLUMNS.map((c) => q(c.name)).join(', ');
+const VALUES = AIRCRAFT_COLUMNS.map(() => '?').join(', ');
+const INSERT_SQL = `INSERT INTO aircraft (${COLUMN_LIST}) VALUES (${VALUES})`;
+/**
+ * Replacing keeps the aircraft's reference table when the import has none (a CSV never carries one);
+ * an update in place, so fleet rows that use the aircraft stay valid.
+ */
+const UPSERT_SQL = `${INSERT_SQL} ON CONFLICT(id) DO UPDATE SET ${AIRCRAFT_COLUMNS.filter((c) => c.key !== 'id')
+  .map((c) => (c.key === 'referenceTableJson' ? `${q(c.name)} = coalesce(excluded.${q(c.name)}, aircraft.${q(c.name)})` : `${q(c.name)} = excluded.${q(c.name)}`))
+  .join(', ')}`;
+
+/**
+ * The steps of a bulk import of packed, validated rows on connection `sqlite`, which the caller has
+ * put in a write transaction (and rolls back on a throw): checks which ids exist (refusing with
+ * ExistingAircraftError unless `replace`), then inserts, or replaces in place. The generator yields
+ * every BULK_STEP_ROWS rows, so a caller may let the event loop run between steps; the caller that
+ * does so must keep every other write of the process out until it commits (db/bulk.ts).
+ */
+export function* bulkImportAircraft(
+  sqlite: import('better-sqlite3').Database,
+  rows: PackedAircraft,
+  options: { readonly replace: boolean },
+): Generator<void, { created: string[]; replaced: string[] }> {
+  const ids = packedIds(rows);
+  const existing = new Set<string>();
+  for (let i = 0; i < ids.length; i += 500) {
+    const chunk = ids.slice(i, i + 500);
+    const found = sqlite.prepare(`SELECT id FROM aircraft WHERE id IN (${chunk.map(() => '?').join(', ')})`).pluck().all(...chunk) as string[];
+    for (const id of found) existing.add(id);
+    yield;
+  }
+  if (existing.size > 0 && !options.replace) {
+    const at = ids.flatMap((id, i) => (existing.has(id) ? [i] : []));
+    throw new ExistingAircraftError(at, at.map((i) => ids[i]!));
+  }
+  const stmt = sqlite.prepare(options.replace ? UPSERT_SQL : INSERT_SQL);
+  const reader = new PackedReader(rows);
+  while (!reader.done) {
+    for (let k = 0; k < BULK_STEP_ROWS && !reader.done; k++) stmt.run(reader.next());
+    yield;
+  }
+  return { created: ids.filter((id) => !existing.has(id)), replaced: ids.filter((id) => existing.has(id)) };
+}
+
+/** Runs every step of a generator at once (the synchronous driver). */
+export function runSteps<T>(steps: Generator<void, T>): T {
+  for (;;) {
+    const r = steps.next();
+    if (r.done) return r.value;
+  }
 }

@@ -1,11 +1,13 @@
 /**
  * Results as CSV: one line per fleet row of every scenario, in the study's display units; the unit of
  * each column is in its header; the first line is the caution, as a '#' comment. Same result, same bytes.
+ * A row that cannot operate has empty requirement cells and its reason in the `reason` column.
  */
 import { stringify } from 'csv-stringify/sync';
 import { CAUTION_TEXT, type UnitSystem } from '../../core/index.js';
 import type { StudyOutput } from '../study.js';
 import { unitOf } from '../../templates/format.js';
+import { csvSafeRecords } from '../io/csvSafe.js';
 
 const round = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : '');
 
@@ -15,7 +17,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
   const L = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(len.from(v), 0));
   const M = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(mass.from(v), 0));
   const header = [
-    'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status',
+    'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status', 'reason',
     `takeoff_mass_${mass.symbol}`, `required_takeoff_${len.symbol}`, `required_landing_${len.symbol}`, `required_${len.symbol}`,
     'governing_side', 'takeoff_governing_case', 'runway_design_code', 'aerodrome_code', 'critical',
     `recommended_length_${len.symbol}`, 'warnings',
@@ -27,6 +29,8 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
       const critical = s.criticalAircraft === r.aircraft;
       rows.push([
         s.name, r.aircraft, r.aircraftName, String(r.annualOperations), String(r.groupOperations), r.regularUse ? 'yes' : 'no', r.status,
+        // Why a row has no requirement (cannot operate, or beyond the plausibility bound): never a bare blank.
+        r.reason ?? '',
         M(r.takeoffMass_kg), ok ? L(r.requiredTakeoff_m) : '', ok ? L(r.requiredLanding_m) : '', ok ? L(r.required_m) : '',
         ok ? r.governing : '', r.takeoff?.governing ?? '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
         critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '', r.warnings.join(' | '),
@@ -34,5 +38,5 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
     }
   }
   // The caution travels with the numbers: a leading comment line (csv-parse reads it with `comment: '#'`).
-  return `# ${CAUTION_TEXT}\n` + stringify([header, ...rows], { record_delimiter: '\n' });
+  return `# ${CAUTION_TEXT}\n` + stringify(csvSafeRecords([header, ...rows]), { record_delimiter: '\n' });
 }

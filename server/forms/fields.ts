@@ -58,6 +58,14 @@ export function rangeText(spec: Pick<NumberSpec, 'kind' | 'min' | 'max'>, system
   return `allowed ${lo} to ${hi}${u.symbol ? ` ${u.symbol}` : ''}`;
 }
 
+/** "maximum 19,685 ft" / "minimum −400 m": one limit of the range in the user's unit (limits swap when the unit runs backwards). */
+export function limitText(spec: Pick<NumberSpec, 'kind' | 'min' | 'max'>, system: UnitSystem, which: 'min' | 'max'): string {
+  const u = unitOf(spec.kind, system);
+  const flipped = u.from(spec.min) > u.from(spec.max);
+  const si = (which === 'max') !== flipped ? spec.max : spec.min;
+  return `${which === 'max' ? 'maximum' : 'minimum'} ${fmtLimit(si, spec.kind, system)}${u.symbol ? ` ${u.symbol}` : ''}`;
+}
+
 /**
  * Reads one number field: converts it from the user's unit to SI and checks the range. Returns the SI
  * value, or undefined (blank and optional, or invalid with the message put into `errors`).
@@ -69,8 +77,13 @@ export function readNumber(values: FormValues, spec: NumberSpec, system: UnitSys
     return undefined;
   }
   const typed = parseTyped(raw);
+  if (typed === Number.POSITIVE_INFINITY || typed === Number.NEGATIVE_INFINITY) {
+    // "1e309" is a number too large for the machine: say so, with the limit, never "Infinity".
+    errors[spec.name] = `${typed > 0 ? 'too large' : 'too small'} (${limitText(spec, system, typed > 0 ? 'max' : 'min')})`;
+    return undefined;
+  }
   if (typed === undefined || !Number.isFinite(typed)) {
-    errors[spec.name] = `"${raw}" is not a number; ${rangeText(spec, system)}`;
+    errors[spec.name] = `${JSON.stringify(raw.length > 40 ? `${raw.slice(0, 40)}…` : raw)} is not a number; ${rangeText(spec, system)}`;
     return undefined;
   }
   const si = unitOf(spec.kind, system).to(typed);

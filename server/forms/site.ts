@@ -6,12 +6,14 @@
  */
 import { z } from 'zod';
 import {
+  CLIMATE_YEARS_RANGE, DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE,
+  MONTHLY_MEAN_RANGE, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE,
   InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances,
   type MonthlyClimate, type ProfilePoint, type RunwayDirectionInput, type RunwayInput, type SiteClimate, type UnitSystem,
 } from '../../core/index.js';
 import { unitOf } from '../../templates/format.js';
 import { climateSchema, runwaySchema } from '../schemas/study.js';
-import { num, text } from '../schemas/common.js';
+import { numIn, text } from '../schemas/common.js';
 import type { FormResult } from './aircraft.js';
 import { localiseMessage, parseTyped, rangeText, readChoice, readNumber, readText, type FieldErrors, type FormValues } from './fields.js';
 
@@ -28,29 +30,29 @@ export const monthField = (m: number, which: 'max' | 'min' | 'mean'): string => 
 /** The site's own fields (the relaxed form: a site may be saved before its runways and climate). */
 export const siteFieldsSchema = z.strictObject({
   name: text(120),
-  elevation_m: num(-400, 4500, 'm'),
-  designTemperature_c: num(-30, 55, '°C').optional(),
+  elevation_m: numIn(SITE_ELEVATION_RANGE),
+  designTemperature_c: numIn(DESIGN_TEMPERATURE_RANGE).optional(),
   climate: climateSchema.optional(),
 });
 
-const T_RANGE = { min: -60, max: 60 };
+const within = (r: { readonly min: number; readonly max: number }) => ({ min: r.min, max: r.max });
 
 export function readSiteForm(values: FormValues, system: UnitSystem): FormResult<SiteFields> {
   const errors: FieldErrors = {};
   const name = readText(values, 'name', { required: true, max: 120 }, errors);
-  const elevation_m = readNumber(values, { name: 'elevation', kind: 'altitude', min: -400, max: 4500, required: true }, system, errors);
-  const designTemperature_c = readNumber(values, { name: 'designTemperature', kind: 'temperature', min: -30, max: 55, required: false }, system, errors);
+  const elevation_m = readNumber(values, { name: 'elevation', kind: 'altitude', ...within(SITE_ELEVATION_RANGE), required: true }, system, errors);
+  const designTemperature_c = readNumber(values, { name: 'designTemperature', kind: 'temperature', ...within(DESIGN_TEMPERATURE_RANGE), required: false }, system, errors);
   const anyClimate = MONTH_KEYS.some((m) => (['max', 'min', 'mean'] as const).some((w) => (values[monthField(m, w)] ?? '').trim() !== ''))
     || (values.climateSource ?? '').trim() !== '';
   let climate: SiteClimate | undefined;
   if (anyClimate) {
     const source = readText(values, 'climateSource', { required: true, max: 300 }, errors);
-    const years = readNumber(values, { name: 'climateYears', kind: 'count', min: 1, max: 200, required: false, integer: true }, system, errors);
+    const years = readNumber(values, { name: 'climateYears', kind: 'count', ...within(CLIMATE_YEARS_RANGE), required: false, integer: true }, system, errors);
     const monthly: MonthlyClimate[] = [];
     for (const m of MONTH_KEYS) {
-      const max = readNumber(values, { name: monthField(m, 'max'), kind: 'temperature', ...T_RANGE, required: true }, system, errors);
-      const min = readNumber(values, { name: monthField(m, 'min'), kind: 'temperature', ...T_RANGE, required: false }, system, errors);
-      const mean = readNumber(values, { name: monthField(m, 'mean'), kind: 'temperature', ...T_RANGE, required: false }, system, errors);
+      const max = readNumber(values, { name: monthField(m, 'max'), kind: 'temperature', ...within(MONTHLY_MEAN_MAX_RANGE), required: true }, system, errors);
+      const min = readNumber(values, { name: monthField(m, 'min'), kind: 'temperature', ...within(MONTHLY_MEAN_MIN_RANGE), required: false }, system, errors);
+      const mean = readNumber(values, { name: monthField(m, 'mean'), kind: 'temperature', ...within(MONTHLY_MEAN_RANGE), required: false }, system, errors);
       if (max !== undefined && min !== undefined && min > max) errors[monthField(m, 'min')] = 'the mean daily minimum is above the mean daily maximum';
       if (max !== undefined && min === undefined && mean === undefined && errors[monthField(m, 'min')] === undefined && errors[monthField(m, 'mean')] === undefined) {
         errors[monthField(m, 'min')] = 'missing; give the mean daily minimum or the mean: months are ranked by their mean temperature';
@@ -91,8 +93,8 @@ export function readProfileText(raw: string, system: UnitSystem, errors: FieldEr
     if (e === undefined) { problems.push(`line ${i + 1}: elevation "${parts[1]}" is not a number`); return; }
     const cm = len.to(c);
     const em = alt.to(e);
-    if (cm < 0 || cm > 6000) { problems.push(`line ${i + 1}: chainage ${parts[0]} is out of range; ${rangeText({ kind: 'length', min: 0, max: 6000 }, system)}`); return; }
-    if (em < -400 || em > 4500) { problems.push(`line ${i + 1}: elevation ${parts[1]} is out of range; ${rangeText({ kind: 'altitude', min: -400, max: 4500 }, system)}`); return; }
+    if (!Number.isFinite(cm) || cm < RUNWAY_CHAINAGE_RANGE.min || cm > RUNWAY_CHAINAGE_RANGE.max) { problems.push(`line ${i + 1}: chainage ${parts[0]} is out of range; ${rangeText({ kind: 'length', ...within(RUNWAY_CHAINAGE_RANGE) }, system)}`); return; }
+    if (!Number.isFinite(em) || em < RUNWAY_POINT_ELEVATION_RANGE.min || em > RUNWAY_POINT_ELEVATION_RANGE.max) { problems.push(`line ${i + 1}: elevation ${parts[1]} is out of range; ${rangeText({ kind: 'altitude', ...within(RUNWAY_POINT_ELEVATION_RANGE) }, system)}`); return; }
     points.push({ chainage_m: cm, elevation_m: em });
   });
   if (problems.length > 0) errors.profile = problems.slice(0, 10).join('; ');
@@ -117,7 +119,7 @@ export function readRunwayForm(values: FormValues, system: UnitSystem): FormResu
     if (designator === '') errors[directionField(i, 'designator')] = 'missing; a runway designator 01 to 36, optionally L, C or R';
     const d: Record<string, number> = {};
     for (const f of DIRECTION_FIELDS) {
-      const v = readNumber(values, { name: directionField(i, f), kind: 'length', min: 200, max: 6000, required: true }, system, errors);
+      const v = readNumber(values, { name: directionField(i, f), kind: 'length', ...within(DECLARED_LENGTH_RANGE), required: true }, system, errors);
       if (v !== undefined) d[`${f}_m`] = v;
     }
     if (designator !== '' && Object.keys(d).length === 4) directions.push({ designator, ...(d as { tora_m: number; toda_m: number; asda_m: number; lda_m: number }) });

@@ -2,7 +2,11 @@
  * Study forms → SI: the study (name, site, options) and a scenario (name and fleet rows). Numbers are
  * converted from the user's units; the options are then checked by the study file's zod schema.
  */
-import { SURFACES, type FleetRowInput, type StudyOptions, type UnitSystem } from '../../core/index.js';
+import {
+  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, FLEET_PAYLOAD_RANGE, PASSENGER_MASS_RANGE,
+  REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
+  type FleetRowInput, type StudyOptions, type UnitSystem,
+} from '../../core/index.js';
 import { fmtInput } from '../../templates/format.js';
 import { optionsSchema } from '../schemas/study.js';
 import { ident } from '../schemas/common.js';
@@ -25,15 +29,15 @@ export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: r
   const siteId = /^\d+$/.test(siteRaw) && siteIds.includes(Number(siteRaw)) ? Number(siteRaw) : undefined;
   if (siteId === undefined) errors.siteId = siteIds.length === 0 ? 'create a site first' : 'choose one of the sites';
   const units = readChoice(values, 'units', ['si', 'us'] as const, errors, system);
-  const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', min: 1, max: 100000, required: true, integer: true }, system, errors);
-  const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', min: 1, max: 500, required: true }, system, errors);
+  const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', min: REGULAR_USE_THRESHOLD_RANGE.min, max: REGULAR_USE_THRESHOLD_RANGE.max, required: true, integer: true }, system, errors);
+  const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', min: ROUNDING_INCREMENT_RANGE.min, max: ROUNDING_INCREMENT_RANGE.max, required: true }, system, errors);
   const surface = readChoice(values, 'surface', SURFACES, errors, 'dry');
   const method = readChoice(values, 'method', METHODS, errors, 'physics');
   const policy = readChoice(values, 'reservePolicy', POLICIES, errors, 'cruise-45min');
-  const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', min: 0, max: 2_000_000, required: policy === 'custom' }, system, errors);
-  const holding_min = readNumber(values, { name: 'holding', kind: 'count', min: 0, max: 180, required: policy === 'custom' }, system, errors);
-  const contingencyPct = readNumber(values, { name: 'contingency', kind: 'count', min: 0, max: 20, required: false }, system, errors);
-  const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', min: 50, max: 200, required: true }, system, errors);
+  const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', min: ALTERNATE_DISTANCE_RANGE_KM.min * 1000, max: ALTERNATE_DISTANCE_RANGE_KM.max * 1000, required: policy === 'custom' }, system, errors);
+  const holding_min = readNumber(values, { name: 'holding', kind: 'count', min: RESERVE_TIME_RANGE_MIN.min, max: RESERVE_TIME_RANGE_MIN.max, required: policy === 'custom' }, system, errors);
+  const contingencyPct = readNumber(values, { name: 'contingency', kind: 'count', min: CONTINGENCY_FRACTION_RANGE.min * 100, max: CONTINGENCY_FRACTION_RANGE.max * 100, required: false }, system, errors);
+  const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', min: PASSENGER_MASS_RANGE.min, max: PASSENGER_MASS_RANGE.max, required: true }, system, errors);
   const landingTemperature = readChoice(values, 'landingTemperature', ['isa', 'design'] as const, errors, 'isa');
   const landingMass = readChoice(values, 'landingMass', ['mlw', 'route'] as const, errors, 'mlw');
   if (Object.keys(errors).length > 0 || name === undefined || siteId === undefined) return { ok: false, errors };
@@ -116,9 +120,9 @@ export function readScenarioForm(
     const aircraft = fields[0]!;
     if (aircraft === '') errors[rowField(i, 'aircraft')] = 'choose an aircraft';
     else if (!ident.safeParse(aircraft).success || !catalogue.has(aircraft)) errors[rowField(i, 'aircraft')] = `"${aircraft}" is not in the catalogue`;
-    const ops = readNumber(values, { name: rowField(i, 'ops'), kind: 'count', min: 0, max: 1_000_000, required: true, integer: true }, system, errors);
-    const stage_m = readNumber(values, { name: rowField(i, 'stage'), kind: 'distance', min: 1000, max: 20_000_000, required: true }, system, errors);
-    const maxPayload = catalogue.get(aircraft)?.maxPayload_kg ?? 150_000;
+    const ops = readNumber(values, { name: rowField(i, 'ops'), kind: 'count', min: ANNUAL_OPERATIONS_RANGE.min, max: ANNUAL_OPERATIONS_RANGE.max, required: true, integer: true }, system, errors);
+    const stage_m = readNumber(values, { name: rowField(i, 'stage'), kind: 'distance', min: STAGE_LENGTH_RANGE_KM.min * 1000, max: STAGE_LENGTH_RANGE_KM.max * 1000, required: true }, system, errors);
+    const maxPayload = catalogue.get(aircraft)?.maxPayload_kg ?? FLEET_PAYLOAD_RANGE.max;
     const payload = readNumber(values, { name: rowField(i, 'payload'), kind: 'mass', min: 0, max: maxPayload, required: true }, system, errors);
     if (ops !== undefined && stage_m !== undefined && payload !== undefined && errors[rowField(i, 'aircraft')] === undefined) {
       fleet.push({ aircraft, annualOperations: ops, stageLength_km: stage_m / 1000, payload_kg: payload });

@@ -10,26 +10,24 @@
  * once, and every always-required column; every row is validated with the same zod schema as the JSON
  * file; ids must be unique in the file. Any problem rejects the file (ImportError, listing line, column
  * and reason) before anything is written; otherwise everything is written in one transaction.
+ * `parseAircraftCsv` does the checking without a database (a worker thread runs it); the commit is
+ * shared with the JSON import (server/catalogue.ts).
  * A blank cell is "missing", never zero. The reference table (a 3-D grid) is not carried by the CSV.
  */
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import type { z } from 'zod';
 import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type FleetRowInput } from '../../core/index.js';
-import {
-  createAircraftMany,
-  existingAircraftIds,
-  getAircraft,
-  listAircraft,
-  updateAircraft,
-} from '../../db/repos/aircraft.js';
+import { existingAircraftIds, listAircraft } from '../../db/repos/aircraft.js';
 import { getScenario, setScenarioFleet } from '../../db/repos/studies.js';
 import { NotFoundError } from '../../db/errors.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
+import { commitCatalogue, packValidated, type ParsedCatalogue } from '../catalogue.js';
 import { aircraftSchema } from '../schemas/aircraft.js';
 import { fleetRowSchema } from '../schemas/study.js';
 import { ImportError, MAX_PROBLEMS, type ImportProblem } from './errors.js';
+import { PLAIN_NUMBER, csvSafeRecords, restoreCsvCell } from './csvSafe.js';
 import { decodeUtf8 } from './text.js';
 
 type CellKind = 'text' | 'number';
@@ -97,7 +95,7 @@ function toCsv(columns: readonly CsvColumn[], rows: readonly unknown[]): string 
       return v === undefined || v === null ? '' : String(v);
     }),
   );
-  return stringify([columns.map((c) => c.header), ...records], { record_delimiter: '\n' });
+  return stringify(csvSafeRecords([columns.map((c) => c.header), ...records]), { record_delimiter: '\n' });
 }
 
 /** Aircraft profiles as catalogue CSV text (header row, then one row per profile, in the given order). */
@@ -206,13 +204,13 @@ function checkHeader(header: readonly string[], columns: readonly CsvColumn[], w
   if (problems.length > 0) throw new ImportError(what, problems.slice(0, MAX_PROBLEMS));
 }
 
-const NUMBER_RE = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+const NUMBER_RE = PLAIN_NUMBER;
 
 /** Builds the nested object of one row: blank cells are left out; numbers parsed strictly. */
 function rowObject(header: readonly string[], columns: ReadonlyMap<string, CsvColumn>, cells: readonly string[]): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   header.forEach((h, i) => {
-    const raw = (cells[i] ?? '').trim();
+    const raw = restoreCsvCell((cells[i] ?? '').trim());
     if (raw === '') return;
     const col = columns.get(h)!;
     const value = col.kind === 'number' ? (NUMBER_RE.test(raw) ? Number(raw) : raw) : raw;
@@ -272,8 +270,8 @@ export interface AircraftCsvImportResult {
   readonly replaced: readonly string[];
 }
 
-/** Imports an aircraft catalogue CSV (all or nothing). Throws ImportError listing every problem found. */
-export function importAircraftCsv(db: Db, input: string | Uint8Array, options: AircraftCsvImportOptions = {}): AircraftCsvImportResult {
+/** Parses and checks an aircraft catalogue CSV (no database). Throws ImportError listing every problem found. */
+export function parseAircraftCsv(input: string | Uint8Array): ParsedCatalogue {
   const what = 'aircraft CSV';
   const text = decodeUtf8(input, what);
   const { rows } = parseRows(text, what, AIRCRAFT_CSV_COLUMNS, aircraftSchema);
@@ -281,35 +279,18 @@ export function importAircraftCsv(db: Db, input: string | Uint8Array, options: A
   const problems: ImportProblem[] = [];
   const firstLine = new Map<string, number>();
   for (const { line, value } of rows) {
+    if (problems.length >= MAX_PROBLEMS) break;
     const prev = firstLine.get(value.id);
     if (prev !== undefined) problems.push({ line, field: 'id', reason: `duplicate id "${value.id}" (also on line ${prev})` });
     else firstLine.set(value.id, line);
   }
-  if (problems.length > 0) throw new ImportError(what, problems.slice(0, MAX_PROBLEMS));
+  if (problems.length > 0) throw new ImportError(what, problems);
+  return { what, rows: packValidated(rows.map((r) => r.value)), lines: Int32Array.from(rows, (r) => r.line) };
+}
 
-  return transaction(db, (tx) => {
-    const existing = existingAircraftIds(tx, rows.map((r) => r.value.id));
-    if (existing.size > 0 && options.onExisting !== 'replace') {
-      throw new ImportError(
-        what,
-        rows
-          .filter((r) => existing.has(r.value.id))
-          .slice(0, MAX_PROBLEMS)
-          .map((r) => ({ line: r.line, field: 'id', reason: `aircraft "${r.value.id}" is already in the catalogue; remove the row, or import with "replace existing aircraft"` })),
-      );
-    }
-    const fresh = rows.filter((r) => !existing.has(r.value.id)).map((r) => r.value);
-    createAircraftMany(tx, fresh);
-    const replaced: string[] = [];
-    for (const { value } of rows) {
-      if (!existing.has(value.id)) continue;
-      const table = getAircraft(tx, value.id)?.reference?.table;
-      const profile: AircraftProfile = table === undefined ? value : { ...value, reference: { ...value.reference, table } };
-      updateAircraft(tx, value.id, profile);
-      replaced.push(value.id);
-    }
-    return { created: fresh.map((a) => a.id), replaced };
-  });
+/** Imports an aircraft catalogue CSV (all or nothing). Throws ImportError listing every problem found. */
+export function importAircraftCsv(db: Db, input: string | Uint8Array, options: AircraftCsvImportOptions = {}): AircraftCsvImportResult {
+  return commitCatalogue(db, parseAircraftCsv(input), { replace: options.onExisting === 'replace' });
 }
 
 /**

@@ -189,10 +189,49 @@ function describe(c: string): string {
 }
 
 /**
+ * Deepest nesting of arrays and objects any JSON document read by Runwright may have. A study file
+ * needs about 8 levels; the cap keeps a hostile document (thousands of `[`) from overflowing the stack
+ * of the validators and of the error reply that echoes it.
+ */
+export const MAX_JSON_DEPTH = 64;
+
+/**
+ * Where `text` first opens an array or object deeper than `max` levels (0-based character offset,
+ * 1-based line and column), or undefined. One pass without recursion; brackets inside strings do not
+ * count. Works on any text (a syntax error elsewhere is left to the parser).
+ */
+export function jsonDepthExcess(text: string, max = MAX_JSON_DEPTH): { offset: number; line: number; char: number } | undefined {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c) i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+      continue;
+    }
+    if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) {
+      depth++;
+      if (depth > max) return { offset: i, ...textPlace(text, i) };
+    } else if (c === 0x5d || c === 0x7d) depth = Math.max(0, depth - 1);
+  }
+  return undefined;
+}
+
+/** The message for a document nested deeper than MAX_JSON_DEPTH. */
+export function jsonDepthMessage(at: { line: number; char: number }, max = MAX_JSON_DEPTH): string {
+  return `nested more than ${max} levels deep (line ${at.line}, column ${at.char}); a Runwright document needs far fewer`;
+}
+
+/**
  * Parses JSON text. On a syntax error throws ImportError naming the line, the column and what was
- * expected there (a truncated file is reported at its end).
+ * expected there (a truncated file is reported at its end); a document nested deeper than
+ * MAX_JSON_DEPTH is refused the same way before it is parsed.
  */
 export function parseJsonText(text: string, what: string): unknown {
+  const deep = jsonDepthExcess(text);
+  if (deep) throw new ImportError(what, [{ line: deep.line, column: deep.char, reason: `not accepted: ${jsonDepthMessage(deep)}` }]);
   try {
     return JSON.parse(text) as unknown;
   } catch (e) {
@@ -264,4 +303,75 @@ export function locateJsonPath(text: string, path: readonly PropertyKey[]): { li
     // fall through with the current position
   }
   return textPlace(text, Math.min(s.i, text.length));
+}
+
+/**
+ * For each element of the array at `prefix` (object keys from the top) of JSON `text` (already known
+ * to parse), the 1-based line and column where the value of its `key` starts (the element's own
+ * start when it has no such key). One pass over the text, for the messages of large imports.
+ */
+export function locateArrayItemKeys(text: string, prefix: readonly string[], key: string): { line: number; char: number }[] {
+  const s = new Scanner(text);
+  const offsets: number[] = [];
+  s.ws();
+  for (const k of prefix) {
+    if (s.peek() !== '{') return [];
+    s.i++;
+    for (;;) {
+      s.ws();
+      if (s.peek() === '}') return [];
+      const keyStart = s.i;
+      s.string();
+      const name = JSON.parse(text.slice(keyStart, s.i)) as string;
+      s.ws();
+      s.i++; // ':'
+      s.ws();
+      if (name === k) break;
+      s.value(0);
+      s.ws();
+      if (s.peek() === ',') s.i++;
+    }
+  }
+  if (s.peek() !== '[') return [];
+  s.i++;
+  for (;;) {
+    s.ws();
+    if (s.peek() === ']') break;
+    const start = s.i;
+    let at = start;
+    if (s.peek() === '{') {
+      s.i++;
+      for (;;) {
+        s.ws();
+        if (s.peek() === '}') { s.i++; break; }
+        const keyStart = s.i;
+        s.string();
+        const name = JSON.parse(text.slice(keyStart, s.i)) as string;
+        s.ws();
+        s.i++; // ':'
+        s.ws();
+        if (name === key && at === start) at = s.i;
+        s.value(1);
+        s.ws();
+        if (s.peek() === ',') s.i++;
+      }
+    } else s.value(0);
+    offsets.push(at);
+    s.ws();
+    if (s.peek() === ',') s.i++;
+  }
+  // Offsets ascend: one walk over the line breaks places them all.
+  const out: { line: number; char: number }[] = [];
+  let line = 1;
+  let lineStart = 0;
+  let nl = text.indexOf('\n');
+  for (const off of offsets) {
+    while (nl >= 0 && nl < off) {
+      line++;
+      lineStart = nl + 1;
+      nl = text.indexOf('\n', nl + 1);
+    }
+    out.push({ line, char: off - lineStart + 1 });
+  }
+  return out;
 }

@@ -10,6 +10,32 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { rebuildError, runTask, type SerialError, type TaskName, type Tasks } from './tasks.js';
 
+/** What each task is, for messages ("… took longer than 120 s"). */
+const TASK_LABEL: Record<TaskName, string> = {
+  study: 'computing the study',
+  climate: 'reading the station file',
+  catalogue: 'checking the catalogue file',
+  pdf: 'drawing the appendix PDF',
+};
+
+/** A job ran longer than the pool's limit and was stopped (the web app answers 503 with this message). */
+export class JobTimeoutError extends Error {
+  constructor(readonly task: TaskName, readonly limitMs: number) {
+    const seconds = limitMs >= 10_000 ? Math.round(limitMs / 1000) : limitMs / 1000;
+    const what = TASK_LABEL[task] ?? task;
+    super(`${what.charAt(0).toUpperCase()}${what.slice(1)} took longer than ${seconds} s and was stopped; nothing was changed. Try again later; a smaller study or file finishes sooner.`);
+    this.name = 'JobTimeoutError';
+  }
+}
+
+/** The pool cannot take jobs (closed, or its worker threads cannot start); the web app answers 503. */
+export class JobUnavailableError extends Error {
+  constructor(reason: string) {
+    super(`The server cannot run long computations right now (${reason}); nothing was changed. Try again later.`);
+    this.name = 'JobUnavailableError';
+  }
+}
+
 export interface JobRunner {
   run<K extends TaskName>(task: K, input: Tasks[K]['input']): Promise<Tasks[K]['output']>;
   /** Stops the workers (pending jobs are rejected). */
@@ -27,7 +53,8 @@ export function inlineJobs(): JobRunner {
 }
 
 interface Pending { resolve: (v: unknown) => void; reject: (e: Error) => void; timer: NodeJS.Timeout }
-interface Slot { worker: Worker; pending: Map<number, Pending>; ready: boolean }
+/** `stopped`: terminated on purpose (a job ran past the limit), so its exit is not a start-up failure. */
+interface Slot { worker: Worker; pending: Map<number, Pending>; ready: boolean; stopped: boolean }
 
 export interface WorkerJobsOptions {
   /** Worker threads (default: cores − 1, at least 1, at most 4). */
@@ -73,7 +100,7 @@ export function workerJobs(options: WorkerJobsOptions = {}): JobRunner {
   const spawn = (): Slot => {
     const worker = new Worker(BOOT, { eval: true, workerData: { entry: ENTRY, tsx } });
     worker.unref();
-    const slot: Slot = { worker, pending: new Map(), ready: false };
+    const slot: Slot = { worker, pending: new Map(), ready: false, stopped: false };
     worker.on('message', (m: { id?: number; ok?: boolean; output?: unknown; error?: SerialError; ready?: boolean }) => {
       if (m.ready) { slot.ready = true; startupFailures = 0; return; }
       if (m.id === undefined) return;
@@ -90,7 +117,7 @@ export function workerJobs(options: WorkerJobsOptions = {}): JobRunner {
       const i = slots.indexOf(slot);
       if (i < 0 || closed) return;
       slots.splice(i, 1);
-      if (!slot.ready && ++startupFailures >= MAX_STARTUP_FAILURES) {
+      if (!slot.ready && !slot.stopped && ++startupFailures >= MAX_STARTUP_FAILURES) {
         broken = new Error(`worker threads cannot start: ${e.message}`);
         console.error(broken.message);
         return;
@@ -98,7 +125,7 @@ export function workerJobs(options: WorkerJobsOptions = {}): JobRunner {
       if (!broken) slots.push(spawn());
     };
     worker.on('error', (e) => fail(e));
-    worker.on('exit', (code) => { if (!closed) fail(new Error(`a worker thread stopped (exit code ${code})`)); });
+    worker.on('exit', (code) => { if (!closed) fail(new JobUnavailableError(`a worker thread stopped (exit code ${code})`)); });
     return slot;
   };
   for (let i = 0; i < size; i++) slots.push(spawn());
@@ -106,14 +133,18 @@ export function workerJobs(options: WorkerJobsOptions = {}): JobRunner {
   return {
     mode: 'workers',
     run(task, input) {
-      if (closed) return Promise.reject(new Error('the job pool is closed'));
-      if (broken || slots.length === 0) return Promise.reject(broken ?? new Error('no worker thread is available'));
+      if (closed) return Promise.reject(new JobUnavailableError('the job pool is closed'));
+      if (broken || slots.length === 0) return Promise.reject(new JobUnavailableError(broken?.message ?? 'no worker thread is available'));
       const slot = slots.reduce((a, b) => (b.pending.size < a.pending.size ? b : a));
       const id = nextId++;
       return new Promise((resolve, reject) => {
         const timer = setTimeout(() => {
           slot.pending.delete(id);
-          reject(new Error(`the computation took longer than ${Math.round(timeoutMs / 1000)} s and was stopped`));
+          reject(new JobTimeoutError(task, timeoutMs));
+          // Replace the worker at once, so that the next job does not land on the one being stopped.
+          slot.stopped = true;
+          const i = slots.indexOf(slot);
+          if (i >= 0 && !closed) slots.splice(i, 1, spawn());
           void slot.worker.terminate();
         }, timeoutMs);
         timer.unref();

@@ -1,52 +1,48 @@
 /**
  * The long-running tasks, as plain functions of plain data (they run inline or in a worker thread):
- * computing a study, reading a climate station file, and importing a catalogue file into a database
- * file (on a connection of its own: WAL lets the server's connection read meanwhile). Errors are
- * carried across the thread boundary as plain objects and rebuilt with their type (ImportError,
- * InputDomainError, DuplicateIdError).
+ * computing a study, reading a climate station file, drawing an appendix PDF (pdfTask.ts), and
+ * parsing and checking a catalogue file (the main thread then commits the validated rows: no task
+ * ever opens the database; docs/storage.md, "One owner of the database file"). Errors are carried
+ * across the thread boundary as plain objects and rebuilt with their type (ImportError, InputDomainError, DuplicateIdError).
  */
 import { InputDomainError, type StudyInput } from '../../core/index.js';
-import { openDatabase } from '../../db/client.js';
 import { DuplicateIdError } from '../../db/errors.js';
-import { importAircraftJson, type CatalogueImportResult } from '../catalogue.js';
-import { importAircraftCsv } from '../io/csv.js';
+import { catalogueTransferList, parseAircraftJson, type ParsedCatalogue } from '../catalogue.js';
+import { parseAircraftCsv } from '../io/csv.js';
 import { readClimateFile, type ClimateFileInput, type ClimateFileResult } from '../io/climate.js';
 import { ImportError, type ImportProblem } from '../io/errors.js';
+import { pdfTransferList, renderPdfTask, type PdfTaskInput } from './pdfTask.js';
 import { studyOutput, type StudyOutput } from '../study.js';
 
-export interface CatalogueImportTask {
-  /** Database file to import into (never ':memory:': another thread cannot see that database). */
-  readonly dbFile: string;
+export interface CatalogueParseTask {
   readonly format: 'csv' | 'json';
   readonly data: Uint8Array;
-  readonly replace: boolean;
 }
 
 export interface Tasks {
   study: { input: StudyInput; output: StudyOutput };
   climate: { input: ClimateFileInput; output: ClimateFileResult };
-  catalogue: { input: CatalogueImportTask; output: CatalogueImportResult };
+  catalogue: { input: CatalogueParseTask; output: ParsedCatalogue };
+  pdf: { input: PdfTaskInput; output: Uint8Array };
 }
 
-/** Imports a catalogue file into the database file, on a connection opened for the purpose. */
-export function importCatalogueFile(t: CatalogueImportTask): CatalogueImportResult {
-  if (t.dbFile === ':memory:') throw new Error('a catalogue import in a worker needs a database file');
-  const { db, sqlite } = openDatabase(t.dbFile);
-  try {
-    return t.format === 'json'
-      ? importAircraftJson(db, t.data, { replace: t.replace })
-      : importAircraftCsv(db, t.data, { onExisting: t.replace ? 'replace' : 'reject' });
-  } finally {
-    sqlite.close();
-  }
+/** Parses and checks a catalogue file: validated rows for the main thread to commit (no database). */
+export function parseCatalogueFile(t: CatalogueParseTask): ParsedCatalogue {
+  return t.format === 'json' ? parseAircraftJson(t.data) : parseAircraftCsv(t.data);
+}
+
+/** Buffers of a task's output to transfer (not copy) back to the main thread. */
+export function transferList(name: TaskName, output: unknown): ArrayBuffer[] {
+  return name === 'catalogue' ? catalogueTransferList(output as ParsedCatalogue) : name === 'pdf' ? pdfTransferList(output as Uint8Array) : [];
 }
 export type TaskName = keyof Tasks;
 
-export function runTask<K extends TaskName>(name: K, input: Tasks[K]['input']): Tasks[K]['output'] {
+export function runTask<K extends TaskName>(name: K, input: Tasks[K]['input']): Tasks[K]['output'] | Promise<Tasks[K]['output']> {
   switch (name) {
     case 'study': return studyOutput(input as StudyInput) as Tasks[K]['output'];
     case 'climate': return readClimateFile(input as ClimateFileInput) as Tasks[K]['output'];
-    case 'catalogue': return importCatalogueFile(input as CatalogueImportTask) as Tasks[K]['output'];
+    case 'catalogue': return parseCatalogueFile(input as CatalogueParseTask) as Tasks[K]['output'];
+    case 'pdf': return renderPdfTask(input as PdfTaskInput) as Promise<Tasks[K]['output']>;
     default: throw new Error(`unknown task ${String(name)}`);
   }
 }

@@ -5,7 +5,8 @@
  */
 import type { ChartModel, UnitSystem } from '../../core/index.js';
 import { layoutChart, type Box, type LaidOutChart } from '../../templates/charts/layout.js';
-import { pdfText } from './text.js';
+import { FONT } from './fonts.js';
+import { drawText, pdfText, textWidth } from './text.js';
 
 type Doc = PDFKit.PDFDocument;
 
@@ -35,9 +36,9 @@ function dashOf(dash: string): number[] | undefined {
 /** Text with its baseline at (x, y), anchored at start, middle or end. Never wraps or breaks pages. */
 function label(doc: Doc, text: string, x: number, y: number, anchor: 'start' | 'middle' | 'end' = 'start'): void {
   const s = pdfText(text);
-  const w = doc.widthOfString(s);
+  const w = textWidth(doc, s);
   const left = anchor === 'start' ? x : anchor === 'middle' ? x - w / 2 : x - w;
-  doc.text(s, left, y, { lineBreak: false, baseline: 'alphabetic' });
+  drawText(doc, s, left, y, { lineBreak: false, baseline: 'alphabetic' });
 }
 
 interface LegendItem { readonly name: string; readonly colour: string; readonly dash?: number[]; readonly width: number; readonly bar: boolean }
@@ -57,13 +58,13 @@ export function legendHeight(doc: Doc, model: ChartModel, units: UnitSystem, wid
 }
 
 function drawLegend(doc: Doc, items: readonly LegendItem[], x: number, y: number, width: number, draw: boolean): number {
-  doc.font('Helvetica').fontSize(7);
+  doc.font(FONT.regular).fontSize(7);
   const lineH = 11;
   let cx = x;
   let cy = y;
   for (const it of items) {
     const name = pdfText(it.name);
-    const w = 20 + doc.widthOfString(name) + 12;
+    const w = 20 + textWidth(doc, name) + 12;
     if (cx > x && cx + w > x + width) {
       cx = x;
       cy += lineH;
@@ -99,7 +100,7 @@ export function drawChart(doc: Doc, model: ChartModel, units: UnitSystem, x: num
   doc.translate(x, y);
 
   // Title
-  doc.font('Helvetica-Bold').fontSize(8.5).fillColor(INK);
+  doc.font(FONT.bold).fontSize(8.5).fillColor(INK);
   label(doc, c.title, box.width / 2, 14, 'middle');
 
   // Plot frame and grid
@@ -110,7 +111,7 @@ export function drawChart(doc: Doc, model: ChartModel, units: UnitSystem, x: num
   doc.rect(plot.x0, plot.y1, plot.x1 - plot.x0, plot.y0 - plot.y1).stroke();
 
   // Ticks
-  doc.font('Helvetica').fontSize(7).fillColor(MUTED);
+  doc.font(FONT.regular).fontSize(7).fillColor(MUTED);
   for (const t of c.yTicks) label(doc, t.label, plot.x0 - 4, t.pos + 2.5, 'end');
   for (const t of c.xTicks) {
     doc.lineWidth(0.6).strokeColor(AXIS).moveTo(t.pos, plot.y0).lineTo(t.pos, plot.y0 + 3).stroke();
@@ -125,7 +126,7 @@ export function drawChart(doc: Doc, model: ChartModel, units: UnitSystem, x: num
   }
 
   // Axis labels
-  doc.font('Helvetica').fontSize(7.5).fillColor(INK);
+  doc.font(FONT.regular).fontSize(7.5).fillColor(INK);
   label(doc, c.xLabel, (plot.x0 + plot.x1) / 2, box.height - 6, 'middle');
   const midY = (plot.y0 + plot.y1) / 2;
   doc.save();
@@ -157,8 +158,8 @@ export function drawChart(doc: Doc, model: ChartModel, units: UnitSystem, x: num
     setDash(doc, [3, 2]);
     doc.moveTo(r.x1, r.y1).lineTo(r.x2, r.y2).stroke();
     doc.restore();
-    doc.font('Helvetica').fontSize(6.5);
-    const lw = doc.widthOfString(pdfText(r.label));
+    doc.font(FONT.regular).fontSize(6.5);
+    const lw = textWidth(doc, pdfText(r.label));
     const lx = r.anchor === 'end' ? r.lx - lw : r.lx;
     doc.save();
     doc.fillOpacity(0.85).rect(lx - 1.5, r.ly - 6.5, lw + 3, 8.5).fill('#ffffff');

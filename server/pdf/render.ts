@@ -1,5 +1,5 @@
 /**
- * The study appendix as a PDF (pdfkit, built-in Helvetica/Courier, vector charts).
+ * The study appendix as a PDF (pdfkit, embedded fonts from fonts.ts, vector charts).
  *
  * `renderAppendixPdf({ input, output, clock, version })` builds the report model
  * (core/report/model.ts) and draws it: a title page with the cautions, the findings and the contents;
@@ -9,8 +9,9 @@
  * ("study-input.json") beside the printed SHA-256 digest, so the appendix can be regenerated.
  *
  * Determinism: the document dates come from the injected clock, the PDF file ID is derived by pdfkit
- * from the document information (which holds those dates), fonts are the standard ones (nothing
- * embedded with a random subset tag), so the same study and date give the same bytes.
+ * from the document information (which holds those dates), and the embedded font subsets are named and
+ * built deterministically by pdfkit (the subset tag comes from the font's order in the document, the
+ * glyphs from the text), so the same study and date give the same bytes.
  */
 import PDFDocument from 'pdfkit';
 import type { StudyInput, UnitSystem } from '../../core/index.js';
@@ -21,7 +22,8 @@ import {
 import { fmt, fmtLengthBoth, fmtNumber, fmtPct, unitOf, UNIT_SYSTEM_LABELS } from '../../templates/format.js';
 import { canonicalJson, inputDigest, type StudyOutput } from '../study.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';
-import { pdfText } from './text.js';
+import { FONT, registerFonts } from './fonts.js';
+import { drawText, pdfText, textHeight, textWidth } from './text.js';
 
 type Doc = PDFKit.PDFDocument;
 
@@ -167,25 +169,25 @@ class Writer {
   }
 
   text(s: string, x: number, y: number, opts: PDFKit.Mixins.TextOptions = {}): void {
-    this.doc.text(pdfText(s), x, y, opts);
+    drawText(this.doc, pdfText(s), x, y, opts);
   }
 
   /** Height of `s` wrapped to `width`; a text that fits on one line skips pdfkit's line wrapper. */
   height(s: string, width: number, opts: PDFKit.Mixins.TextOptions = {}): number {
     const p = pdfText(s);
     if (!p.includes('\n') && this.widthOf(p) <= width) return this.doc.currentLineHeight(true) + (opts.lineGap ?? 0);
-    return this.doc.heightOfString(p, { width, ...opts });
+    return textHeight(this.doc, p, width, opts);
   }
 
   private readonly widths = new Map<string, number>();
 
-  /** Width of an already WinAnsi-safe one-line text in the current font and size (memoised: tables repeat values). */
+  /** Width of an already sanitised (`pdfText`) one-line text in the current font and size (memoised: tables repeat values). */
   widthOf(p: string): number {
     const d = this.doc as unknown as { _font?: { name?: string }; _fontSize?: number };
     const key = `${d._font?.name ?? ''}|${d._fontSize ?? 0}|${p}`;
     let w = this.widths.get(key);
     if (w === undefined) {
-      w = this.doc.widthOfString(p);
+      w = textWidth(this.doc, p);
       this.widths.set(key, w);
     }
     return w;
@@ -195,8 +197,8 @@ class Writer {
   boxText(s: string, x: number, y: number, width: number, align: 'left' | 'right' = 'left'): void {
     const p = pdfText(s);
     const w = p.includes('\n') ? Infinity : this.widthOf(p);
-    if (w <= width) this.doc.text(p, align === 'right' ? x + width - w : x, y, { lineBreak: false });
-    else this.doc.text(p, x, y, { width, align });
+    if (w <= width) drawText(this.doc, p, align === 'right' ? x + width - w : x, y, { lineBreak: false });
+    else drawText(this.doc, p, x, y, { width, align });
   }
 
   // --- sections -------------------------------------------------------------------------
@@ -205,7 +207,7 @@ class Writer {
     const doc = this.doc;
     if (s.newPage && doc.y > MARGIN.top + 1) this.newPage();
     const size = s.level === 1 ? 14 : 11;
-    doc.font('Helvetica-Bold').fontSize(size);
+    doc.font(FONT.bold).fontSize(size);
     const title = `${s.number}  ${s.title}`;
     const h = this.height(title, CONTENT_W);
     // Keep a heading with at least a few lines of what follows.
@@ -242,7 +244,7 @@ class Writer {
   paragraph(text: string, style: 'normal' | 'note' | 'caution' | 'strong'): void {
     const doc = this.doc;
     if (style === 'caution') return this.cautionBox(null, text);
-    const font = style === 'note' ? 'Helvetica-Oblique' : style === 'strong' ? 'Helvetica-Bold' : 'Helvetica';
+    const font = style === 'note' ? FONT.italic : style === 'strong' ? FONT.bold : FONT.regular;
     const size = style === 'note' ? 7.8 : 9;
     doc.font(font).fontSize(size).fillColor(style === 'note' ? MUTED : INK);
     const h = this.height(text, CONTENT_W, { lineGap: 1.5 });
@@ -254,7 +256,7 @@ class Writer {
 
   subheading(text: string): void {
     const doc = this.doc;
-    doc.font('Helvetica-Bold').fontSize(9.5);
+    doc.font(FONT.bold).fontSize(9.5);
     this.ensure(14 + 50);
     doc.y += 4;
     doc.fillColor(INK);
@@ -266,9 +268,9 @@ class Writer {
     const doc = this.doc;
     const pad = 8;
     const w = CONTENT_W - 2 * pad;
-    doc.font('Helvetica-Bold').fontSize(9.5);
+    doc.font(FONT.bold).fontSize(9.5);
     const th = title ? this.height(title, w) + 3 : 0;
-    doc.font('Helvetica').fontSize(9);
+    doc.font(FONT.regular).fontSize(9);
     const bh = this.height(text, w, { lineGap: 1.5 });
     const h = th + bh + 2 * pad;
     this.ensure(h + 6);
@@ -279,10 +281,10 @@ class Writer {
     doc.restore();
     doc.fillColor(INK);
     if (title) {
-      doc.font('Helvetica-Bold').fontSize(9.5);
+      doc.font(FONT.bold).fontSize(9.5);
       this.text(title, MARGIN.left + pad, y + pad, { width: w });
     }
-    doc.font('Helvetica').fontSize(9);
+    doc.font(FONT.regular).fontSize(9);
     this.text(text, MARGIN.left + pad, y + pad + th, { width: w, lineGap: 1.5 });
     doc.y = y + h + 8;
   }
@@ -296,17 +298,17 @@ class Writer {
       const v = it.value;
       const mono = 'text' in v && v.mono === true;
       const valueFont = (): void => {
-        if (mono) doc.font('Courier').fontSize(7.2);
-        else doc.font(isBold(v) || ('kind' in v && v.kind === 'lengthBoth') ? 'Helvetica-Bold' : 'Helvetica').fontSize(9);
+        if (mono) doc.font(FONT.mono).fontSize(7.2);
+        else doc.font(isBold(v) || ('kind' in v && v.kind === 'lengthBoth') ? FONT.bold : FONT.regular).fontSize(9);
       };
-      doc.font('Helvetica').fontSize(8.5);
+      doc.font(FONT.regular).fontSize(8.5);
       const lh = this.height(it.label, lw);
       valueFont();
       const vh = this.height(value, vw);
       const h = Math.max(lh, vh) + 3;
       this.ensure(h);
       const y = doc.y;
-      doc.font('Helvetica').fontSize(8.5).fillColor(MUTED);
+      doc.font(FONT.regular).fontSize(8.5).fillColor(MUTED);
       this.boxText(it.label, MARGIN.left, y + 0.5, lw);
       valueFont();
       doc.fillColor(INK);
@@ -318,7 +320,7 @@ class Writer {
 
   list(items: readonly string[], ordered: boolean): void {
     const doc = this.doc;
-    doc.font('Helvetica').fontSize(8.8).fillColor(INK);
+    doc.font(FONT.regular).fontSize(8.8).fillColor(INK);
     const indent = 14;
     items.forEach((item, i) => {
       const h = this.height(item, CONTENT_W - indent, { lineGap: 1.2 });
@@ -335,7 +337,7 @@ class Writer {
     const doc = this.doc;
     const pad = 5;
     const w = CONTENT_W - 2 * pad - 10;
-    doc.font('Courier').fontSize(7.8);
+    doc.font(FONT.mono).fontSize(7.8);
     const hs = lines.map((l) => this.height(l, w, { lineGap: 1 }));
     const h = hs.reduce((a, b) => a + b + 2, 0) + 2 * pad - 2;
     this.ensure(h + 4);
@@ -343,7 +345,7 @@ class Writer {
     doc.save();
     doc.rect(MARGIN.left + 10, y, CONTENT_W - 10, h).fill('#f4f6f8');
     doc.restore();
-    doc.fillColor(INK).font('Courier').fontSize(7.8);
+    doc.fillColor(INK).font(FONT.mono).fontSize(7.8);
     let cy = y + pad;
     lines.forEach((l, i) => {
       this.text(l, MARGIN.left + 10 + pad, cy, { width: w, lineGap: 1 });
@@ -372,27 +374,27 @@ class Writer {
     const xs = widths.map((_, i) => MARGIN.left + widths.slice(0, i).reduce((a, b) => a + b, 0));
     const align = (i: number): 'left' | 'right' => columns[i]!.align ?? (columns[i]!.kind ? 'right' : 'left');
     const heads = columns.map((c) => headerText(c, units));
-    doc.font('Helvetica-Bold').fontSize(size);
+    doc.font(FONT.bold).fontSize(size);
     const headH = Math.max(...heads.map((h, i) => this.height(h, widths[i]! - 2 * pad))) + 2 * pad;
 
     const texts = rows.map((r) => ('cells' in r ? r.cells.map((c, i) => cellText(c, columns[i], units)) : null));
     const rowH = rows.map((r, k) => {
       if ('group' in r) {
-        doc.font('Helvetica-Bold').fontSize(size);
+        doc.font(FONT.bold).fontSize(size);
         return this.height(r.group, CONTENT_W - 2 * pad) + 2 * pad;
       }
       if ('note' in r) {
-        doc.font('Helvetica-Oblique').fontSize(size - 0.4);
+        doc.font(FONT.italic).fontSize(size - 0.4);
         return this.height(r.note, CONTENT_W - 2 * pad - NOTE_INDENT) + 2 * pad;
       }
       return Math.max(...texts[k]!.map((t, i) => {
-        doc.font(isBold(r.cells[i]!) ? 'Helvetica-Bold' : 'Helvetica').fontSize(size);
+        doc.font(isBold(r.cells[i]!) ? FONT.bold : FONT.regular).fontSize(size);
         return this.height(t, widths[i]! - 2 * pad);
       })) + 2 * pad;
     });
 
     const drawCaption = (continued: boolean): void => {
-      doc.font('Helvetica-Bold').fontSize(8.2).fillColor(INK);
+      doc.font(FONT.bold).fontSize(8.2).fillColor(INK);
       const c = continued ? `${caption} (continued)` : caption;
       this.text(c, MARGIN.left, doc.y, { width: CONTENT_W });
       doc.y += 2;
@@ -402,14 +404,14 @@ class Writer {
       doc.save();
       doc.rect(MARGIN.left, y, CONTENT_W, headH).fill(HEAD_FILL);
       doc.restore();
-      doc.font('Helvetica-Bold').fontSize(size).fillColor(INK);
+      doc.font(FONT.bold).fontSize(size).fillColor(INK);
       heads.forEach((h, i) => this.boxText(h, xs[i]! + pad, y + pad, widths[i]! - 2 * pad, align(i)));
       doc.lineWidth(0.6).strokeColor(RULE).moveTo(MARGIN.left, y + headH).lineTo(MARGIN.left + CONTENT_W, y + headH).stroke();
       doc.y = y + headH;
     };
 
     // Caption, header and the first row (and a group row with its first row) stay together.
-    doc.font('Helvetica-Bold').fontSize(8.2);
+    doc.font(FONT.bold).fontSize(8.2);
     const capH = this.height(caption, CONTENT_W) + 2;
     // A group row stays with the row after it; a data row with the note rows that follow it.
     const keepH = (k: number): number => {
@@ -441,16 +443,16 @@ class Writer {
         doc.save();
         doc.rect(MARGIN.left, y, CONTENT_W, h).fill(GROUP_FILL);
         doc.restore();
-        doc.font('Helvetica-Bold').fontSize(size).fillColor(INK);
+        doc.font(FONT.bold).fontSize(size).fillColor(INK);
         this.boxText(r.group, MARGIN.left + pad, y + pad, CONTENT_W - 2 * pad);
       } else if ('note' in r) {
-        doc.font('Helvetica-Oblique').fontSize(size - 0.4).fillColor(MUTED);
+        doc.font(FONT.italic).fontSize(size - 0.4).fillColor(MUTED);
         this.text(r.note, MARGIN.left + pad + NOTE_INDENT, y + pad, { width: CONTENT_W - 2 * pad - NOTE_INDENT });
         doc.fillColor(INK);
       } else {
         r.cells.forEach((c, i) => {
           if (i >= columns.length) return;
-          doc.font(isBold(c) ? 'Helvetica-Bold' : 'Helvetica').fontSize(size).fillColor(INK);
+          doc.font(isBold(c) ? FONT.bold : FONT.regular).fontSize(size).fillColor(INK);
           this.boxText(texts[k]![i]!, xs[i]! + pad, y + pad, widths[i]! - 2 * pad, align(i));
         });
       }
@@ -460,7 +462,7 @@ class Writer {
     });
     doc.y += 3;
     if (note) {
-      doc.font('Helvetica-Oblique').fontSize(7).fillColor(MUTED);
+      doc.font(FONT.italic).fontSize(7).fillColor(MUTED);
       this.ensure(10);
       this.text(note, MARGIN.left, doc.y, { width: CONTENT_W });
       doc.fillColor(INK);
@@ -475,13 +477,13 @@ class Writer {
     const m = this.model;
     const t = m.title;
     doc.y = MARGIN.top - 10;
-    doc.font('Helvetica-Bold').fontSize(8).fillColor(MUTED);
+    doc.font(FONT.bold).fontSize(8).fillColor(MUTED);
     this.text('RUNWAY LENGTH STUDY  |  APPENDIX', MARGIN.left, doc.y, { characterSpacing: 1.2 });
     doc.y += 6;
-    doc.font('Helvetica-Bold').fontSize(19).fillColor(INK);
+    doc.font(FONT.bold).fontSize(19).fillColor(INK);
     this.text(t.study, MARGIN.left, doc.y, { width: CONTENT_W });
     doc.y += 2;
-    doc.font('Helvetica').fontSize(12).fillColor(INK);
+    doc.font(FONT.regular).fontSize(12).fillColor(INK);
     this.text(t.site, MARGIN.left, doc.y, { width: CONTENT_W });
     doc.y += 10;
     this.facts([
@@ -493,7 +495,7 @@ class Writer {
     ]);
     this.cautionBox(m.caution.title, m.caution.text);
 
-    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK);
+    doc.font(FONT.bold).fontSize(10).fillColor(INK);
     this.text('Findings', MARGIN.left, doc.y);
     doc.y += 3;
     const shown = m.recommendations.slice(0, 8);
@@ -516,7 +518,7 @@ class Writer {
     doc.switchToPage(0);
     doc.y = startY;
     const heading = (): void => {
-      doc.font('Helvetica-Bold').fontSize(10).fillColor(INK);
+      doc.font(FONT.bold).fontSize(10).fillColor(INK);
       this.text(page === 0 ? 'Contents' : 'Contents (continued)', MARGIN.left, doc.y);
       doc.y += 6;
     };
@@ -530,25 +532,27 @@ class Writer {
       }
       const s = e.section;
       const indent = s.level === 1 ? 0 : 18;
-      doc.font(s.level === 1 ? 'Helvetica-Bold' : 'Helvetica').fontSize(s.level === 1 ? 9 : 8.6).fillColor(INK);
+      doc.font(s.level === 1 ? FONT.bold : FONT.regular).fontSize(s.level === 1 ? 9 : 8.6).fillColor(INK);
       const title = pdfText(`${s.number}  ${s.title}`);
       const num = String(e.page);
       const x = MARGIN.left + indent;
-      const numW = doc.widthOfString(num);
+      const numW = textWidth(doc, num);
       const maxTitle = CONTENT_W - indent - numW - 30;
       let shown = title;
-      if (doc.widthOfString(shown) > maxTitle) {
-        while (shown.length > 4 && doc.widthOfString(`${shown}...`) > maxTitle) shown = shown.slice(0, -1);
-        shown = `${shown}...`;
+      if (textWidth(doc, shown) > maxTitle) {
+        // Cut by characters (not UTF-16 units), so a CJK or astral character is never split.
+        const chars = [...shown];
+        while (chars.length > 4 && textWidth(doc, `${chars.join('')}...`) > maxTitle) chars.pop();
+        shown = `${chars.join('')}...`;
       }
-      const tw = doc.widthOfString(shown);
+      const tw = textWidth(doc, shown);
       const y = doc.y;
-      doc.text(shown, x, y, { lineBreak: false, goTo: s.id });
-      doc.text(num, MARGIN.left + CONTENT_W - numW, y, { lineBreak: false, goTo: s.id });
-      doc.font('Helvetica').fillColor(RULE);
+      drawText(doc, shown, x, y, { lineBreak: false, goTo: s.id });
+      drawText(doc, num, MARGIN.left + CONTENT_W - numW, y, { lineBreak: false, goTo: s.id });
+      doc.font(FONT.regular).fillColor(RULE);
       const dotsW = MARGIN.left + CONTENT_W - numW - 4 - (x + tw + 4);
-      const dot = doc.widthOfString('. ');
-      if (dotsW > dot) doc.text('. '.repeat(Math.floor(dotsW / dot)), x + tw + 4, y, { lineBreak: false });
+      const dot = textWidth(doc, '. ');
+      if (dotsW > dot) drawText(doc, '. '.repeat(Math.floor(dotsW / dot)), x + tw + 4, y, { lineBreak: false });
       doc.fillColor(INK);
       doc.y = y + TOC_LINE;
     }
@@ -564,23 +568,23 @@ class Writer {
       const keepBottom = doc.page.margins.bottom;
       doc.page.margins.bottom = 0;
       if (i > 0) {
-        doc.font('Helvetica').fontSize(7.5).fillColor(MUTED);
+        doc.font(FONT.regular).fontSize(7.5).fillColor(MUTED);
         const right = pdfText(t.site);
-        const rw = Math.min(doc.widthOfString(right), CONTENT_W * 0.4);
+        const rw = Math.min(textWidth(doc, right), CONTENT_W * 0.4);
         const left = pdfText(`Runway length study appendix: ${t.study}`);
-        doc.text(left, MARGIN.left, 32, { width: CONTENT_W - rw - 12, lineBreak: false, ellipsis: true, height: 10 });
-        doc.text(right, MARGIN.left + CONTENT_W - rw, 32, { width: rw, lineBreak: false, ellipsis: true, height: 10, align: 'right' });
+        drawText(doc, left, MARGIN.left, 32, { width: CONTENT_W - rw - 12, lineBreak: false, ellipsis: true, height: 10 });
+        drawText(doc, right, MARGIN.left + CONTENT_W - rw, 32, { width: rw, lineBreak: false, ellipsis: true, height: 10, align: 'right' });
         doc.lineWidth(0.5).strokeColor(RULE).moveTo(MARGIN.left, 44).lineTo(MARGIN.left + CONTENT_W, 44).stroke();
       }
       const fy = PAGE_H - 42;
       doc.lineWidth(0.5).strokeColor(RULE).moveTo(MARGIN.left, fy - 4).lineTo(MARGIN.left + CONTENT_W, fy - 4).stroke();
-      doc.font('Helvetica-Bold').fontSize(7.5).fillColor(INK);
+      doc.font(FONT.bold).fontSize(7.5).fillColor(INK);
       const pageText = `Page ${i + 1} of ${total}`;
-      const pw = doc.widthOfString(pageText);
-      doc.text(pageText, MARGIN.left + CONTENT_W - pw, fy, { lineBreak: false });
-      doc.font('Helvetica').fontSize(7).fillColor(MUTED);
-      doc.text(pdfText('Preliminary planning estimate; not for flight planning or dispatch.'), MARGIN.left, fy, { lineBreak: false });
-      doc.text(pdfText(`Issued ${t.date}  |  Runwright ${t.version}  |  methods ${t.methodVersion}  |  input SHA-256 ${t.inputDigest.slice(0, 16)}...`), MARGIN.left, fy + 10, { lineBreak: false });
+      const pw = textWidth(doc, pageText);
+      drawText(doc, pageText, MARGIN.left + CONTENT_W - pw, fy, { lineBreak: false });
+      doc.font(FONT.regular).fontSize(7).fillColor(MUTED);
+      drawText(doc, pdfText('Preliminary planning estimate; not for flight planning or dispatch.'), MARGIN.left, fy, { lineBreak: false });
+      drawText(doc, pdfText(`Issued ${t.date}  |  Runwright ${t.version}  |  methods ${t.methodVersion}  |  input SHA-256 ${t.inputDigest.slice(0, 16)}...`), MARGIN.left, fy + 10, { lineBreak: false });
       doc.page.margins.bottom = keepBottom;
     }
     doc.fillColor(INK);
@@ -624,6 +628,7 @@ export function renderAppendixPdf(args: AppendixPdfArgs): Promise<Buffer> {
       ModDate: when,
     },
   });
+  registerFonts(doc);
   const chunks: Buffer[] = [];
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on('data', (c: Buffer) => chunks.push(c));

@@ -1,28 +1,34 @@
 /**
- * Aircraft catalogue routes: list (with key figures), create, edit, duplicate, delete (with a
- * confirmation page), CSV/JSON import and export, and the detail page with its live what-if panel.
+ * Aircraft catalogue routes: list (50 a page, searchable, with key figures), create, edit, duplicate,
+ * delete (with a confirmation page), CSV/JSON import and export, and the detail page with its live
+ * what-if panel.
  */
 import { Hono, type Context } from 'hono';
 import type { AircraftProfile, UnitSystem } from '../../core/index.js';
 import {
-  aircraftUses, createAircraft, deleteAircraft, duplicateAircraft, getAircraft, listAircraft, updateAircraft,
+  AIRCRAFT_SEARCH_MAX, aircraftChoices, aircraftUses, countAircraft, countAircraftMatching, createAircraft, deleteAircraft, duplicateAircraft, getAircraft,
+  pageAircraft, updateAircraft,
 } from '../../db/repos/aircraft.js';
+import type { BulkWriter } from '../../db/bulk.js';
 import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
 import type { Db } from '../../db/types.js';
 import {
-  AircraftDetailPage, AircraftFormPage, AircraftListPage, aircraftFormValues,
+  AircraftDetailPage, AircraftFormPage, AircraftListPage, AircraftResults, aircraftFormValues,
 } from '../../templates/pages/aircraft.js';
+import { IDS } from '../../templates/ids.js';
 import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
+import { AircraftChoices } from '../../templates/pages/studies.js';
 import { WhatIfPanel, WhatIfResult, type WhatIfProps } from '../../templates/whatif.js';
 import { aircraftFigures } from '../aircraftFigures.js';
-import { exportAircraftJson, importAircraftJson } from '../catalogue.js';
+import { commitCatalogue, commitCatalogueBulk, exportAircraftJson } from '../catalogue.js';
 import { readAircraftForm } from '../forms/aircraft.js';
 import { formValues, type FormValues } from '../forms/fields.js';
 import { readWhatIfForm, startingConditions, type WhatIfConditions } from '../forms/whatif.js';
-import { exportAircraftCsv, importAircraftCsv } from '../io/csv.js';
+import { exportAircraftCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
 import type { AppEnv } from '../web/env.js';
+import { FLEET_SUGGESTIONS, LIST_PAGE_SIZE, choosePage } from '../web/paging.js';
 import { fragment, isHtmx, page, seeOther, viewOf } from '../web/page.js';
 import { whatIf, type WhatIfOutcome } from '../whatif.js';
 import { InputDomainError } from '../../core/index.js';
@@ -31,11 +37,23 @@ import { download, notFound, formUnits } from './common.js';
 export interface AircraftRouteDeps {
   readonly db: Db;
   readonly jobs: JobRunner;
-  /** The database file, when there is one: large catalogue imports then run in a worker thread. */
-  readonly dbFile?: string;
+  /** The server's bulk connection: catalogue imports commit on it without blocking the event loop. */
+  readonly bulk?: BulkWriter;
 }
 
 const path = (id: string): string => `/aircraft/${encodeURIComponent(id)}`;
+
+/** Longest aircraft id (the id rule, server/schemas/common.ts `ident`). */
+const MAX_ID_LENGTH = 64;
+
+/**
+ * The id of the n-th copy of aircraft `id`: "<id>-copy", then "<id>-copy-2", …; the source id is cut
+ * before the suffix so the copy keeps the id rule (at most 64 characters, starting as the source does).
+ */
+export function copyIdFor(id: string, n: number): string {
+  const suffix = n <= 1 ? '-copy' : `-copy-${n}`;
+  return `${id.slice(0, MAX_ID_LENGTH - suffix.length)}${suffix}`;
+}
 
 /** Reference conditions of the aircraft what-if: sea level, ISA, MTOW, dry, still air, level. */
 function referenceConditions(a: AircraftProfile): WhatIfConditions {
@@ -77,9 +95,23 @@ export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {
   const { db } = deps;
   const app = new Hono<AppEnv>();
 
+  /**
+   * The catalogue page: one page of 50 aircraft (`page`, 1-based) matching the search (`q`), read as a
+   * bounded slice; an htmx request aimed at the list region gets only that region.
+   */
   const listPage = (c: Context<AppEnv>, extra: { imported?: number; deleted?: string; importProblems?: string[]; importValues?: FormValues }, status: 200 | 422 = 200) => {
-    const rows = listAircraft(db).map((profile) => ({ profile, figures: aircraftFigures(profile) }));
-    return page(c, { title: 'Aircraft', status }, () => <AircraftListPage rows={rows} {...extra} />);
+    const search = (c.req.query('q') ?? '').trim().slice(0, AIRCRAFT_SEARCH_MAX);
+    const catalogueSize = countAircraft(db);
+    const total = search === '' ? catalogueSize : countAircraftMatching(db, search);
+    const choice = choosePage(c.req.query('page'), total, LIST_PAGE_SIZE);
+    const rows = pageAircraft(db, { search, limit: LIST_PAGE_SIZE, offset: choice.offset }).map((profile) => ({ profile, figures: aircraftFigures(profile) }));
+    const props = {
+      rows, total, catalogueSize, page: choice.page, pages: choice.pages, offset: choice.offset, search, searchMax: AIRCRAFT_SEARCH_MAX,
+      ...(choice.problem ? { pageProblem: choice.problem } : {}), ...extra,
+    };
+    const code = status === 200 && choice.invalid ? 400 : status;
+    if (isHtmx(c) && c.req.header('hx-target') === IDS.aircraftResults) return fragment(c, { status: code }, () => <AircraftResults {...props} />);
+    return page(c, { title: 'Aircraft', status: code }, () => <AircraftListPage {...props} />);
   };
 
   app.get('/', (c) => {
@@ -89,6 +121,15 @@ export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {
       ...(imported !== undefined && /^\d+$/.test(imported) ? { imported: Number(imported) } : {}),
       ...(deleted !== undefined ? { deleted } : {}),
     });
+  });
+
+  // Suggestions for a fleet row's aircraft field (a datalist fragment): ids cannot start with "_", so
+  // this never shadows an aircraft. The term is `q`, or the field's own value (`r<n>_aircraft`).
+  app.get('/_choices', (c) => {
+    const query = c.req.query();
+    const term = query.q ?? Object.entries(query).find(([k]) => /^r\d{1,3}_aircraft$/.test(k))?.[1] ?? '';
+    const aircraft = aircraftChoices(db, term.trim().slice(0, AIRCRAFT_SEARCH_MAX), FLEET_SUGGESTIONS);
+    return fragment(c, {}, () => <AircraftChoices aircraft={aircraft} />);
   });
 
   app.get('/export.csv', (c) => download(c, exportAircraftCsv(db), 'text/csv; charset=utf-8', 'aircraft.csv'));
@@ -104,11 +145,10 @@ export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {
     const bytes = new Uint8Array(await file.arrayBuffer());
     const replace = values.replace === 'yes';
     try {
-      const r = deps.dbFile !== undefined && deps.dbFile !== ':memory:' && deps.jobs.mode === 'workers'
-        ? await deps.jobs.run('catalogue', { dbFile: deps.dbFile, format, data: bytes, replace })
-        : format === 'json'
-          ? importAircraftJson(db, bytes, { replace })
-          : importAircraftCsv(db, bytes, { onExisting: replace ? 'replace' : 'reject' });
+      // Parsing and checking run in the job pool; the main thread commits the validated rows (workers
+      // never open the database). On the bulk connection the commit leaves the event loop free.
+      const parsed = await deps.jobs.run('catalogue', { format, data: bytes });
+      const r = deps.bulk ? await commitCatalogueBulk(deps.bulk, parsed, { replace }) : commitCatalogue(db, parsed, { replace });
       return seeOther(c, `/aircraft?imported=${r.created.length + r.replaced.length}`);
     } catch (e) {
       if (e instanceof ImportError) return fail(e.problems.map(formatProblem));
@@ -196,8 +236,8 @@ export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {
     const id = c.req.param('id');
     const src = getAircraft(db, id);
     if (!src) return notFound(c, 'aircraft', id);
-    let copyId = `${id}-copy`.slice(0, 64);
-    for (let n = 2; getAircraft(db, copyId); n++) copyId = `${id}-copy-${n}`.slice(-64);
+    let copyId = copyIdFor(src.id, 1);
+    for (let n = 2; getAircraft(db, copyId); n++) copyId = copyIdFor(src.id, n);
     duplicateAircraft(db, id, { id: copyId });
     return seeOther(c, `${path(copyId)}/edit`);
   });

@@ -9,18 +9,20 @@ import { z } from 'zod';
 import { InputDomainError, SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type StudyInput } from '../../core/index.js';
 import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
 import {
-  createAircraftMany, deleteAircraft, getAircraft, listAircraft, updateAircraft,
+  AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
 } from '../../db/repos/aircraft.js';
 import { createSite, getSite, listSites } from '../../db/repos/sites.js';
 import { createStudy, deleteStudy, getStudy, listStudies } from '../../db/repos/studies.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
+import { jsonDepthExcess, jsonDepthMessage } from '../io/text.js';
 import type { JobRunner } from '../jobs/index.js';
 import { aircraftSchema } from '../schemas/aircraft.js';
 import { num, oneOf, parseAll, type Problem } from '../schemas/common.js';
-import { canonicalJson, parseStudyDocument } from '../study.js';
+import { canonicalJson, parseStudyDocument, problemFromDomainError } from '../study.js';
 import { StudyService } from '../studies/state.js';
 import type { AppEnv } from '../web/env.js';
+import { API_LIST_DEFAULT, API_LIST_MAX, chooseOffset } from '../web/paging.js';
 import { whatIf } from '../whatif.js';
 import { idParam } from './common.js';
 
@@ -40,11 +42,28 @@ const notFound = (c: Context, what: string, id: string | number | undefined) =>
 async function jsonBody(c: Context): Promise<{ ok: true; value: unknown } | { ok: false; response: Response }> {
   const text = await c.req.text();
   if (text.trim() === '') return { ok: false, response: c.json({ error: 'bad-request', message: 'a JSON request body is required' }, 400) };
+  // Depth first: a deeply nested body would overflow the validators and the reply that echoes it.
+  const deep = jsonDepthExcess(text);
+  if (deep) {
+    const message = `the body is ${jsonDepthMessage(deep)}`;
+    return { ok: false, response: c.json({ error: 'invalid', message, problems: [{ path: '(root)', field: '(root)', value: null, message }] }, 422) };
+  }
   try {
     return { ok: true, value: JSON.parse(text) as unknown };
   } catch (e) {
     return { ok: false, response: c.json({ error: 'bad-json', message: `the body is not valid JSON: ${(e as Error).message}` }, 400) };
   }
+}
+
+/**
+ * Where a core field of the requirement computation lives in the request body: the aircraft's own
+ * fields under `aircraft` (e.g. "aircraft.tailUpSpeed_mps"), the conditions under `conditions` (the
+ * models call the elevation the pressure altitude).
+ */
+export function requirementPath(field: string): string {
+  if (field === 'aircraft' || field.startsWith('aircraft.')) return field;
+  if (field === 'pressureAltitude_m') return 'conditions.elevation_m';
+  return `conditions.${field}`;
 }
 
 /** The study of the database as a study file document. */
@@ -53,7 +72,9 @@ function studyDocument(input: StudyInput): Record<string, unknown> {
 }
 
 const requirementSchema = z.strictObject({
-  aircraft: z.union([z.string(), aircraftSchema]),
+  aircraft: z.union([z.string(), aircraftSchema], {
+    error: (iss) => (iss.input === undefined || iss.input === null ? 'missing; an aircraft id or an aircraft profile is required' : 'an aircraft id (text) or an aircraft profile (an object) is required'),
+  }),
   conditions: z.strictObject({
     elevation_m: num(TAKEOFF_INPUT_RANGES.pressureAltitude_m.min, TAKEOFF_INPUT_RANGES.pressureAltitude_m.max, 'm'),
     temperature_c: num(TAKEOFF_INPUT_RANGES.temperature_c.min, TAKEOFF_INPUT_RANGES.temperature_c.max, '°C'),
@@ -87,7 +108,22 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
   }));
 
   // Aircraft ----------------------------------------------------------------------------------
-  app.get('/aircraft', (c) => c.json(listAircraft(db)));
+  // The catalogue pages (it may hold tens of thousands of profiles): `limit` (default 100, at most
+  // 1,000), `offset`, `q` (search); the total is in X-Total-Count and the next page in Link.
+  app.get('/aircraft', (c) => {
+    const paging = chooseOffset({ limit: c.req.query('limit'), offset: c.req.query('offset') }, API_LIST_DEFAULT, API_LIST_MAX);
+    if (!paging.ok) return c.json({ error: 'bad-request', message: paging.problems.join('; '), problems: paging.problems }, 400);
+    const q = (c.req.query('q') ?? '').trim().slice(0, AIRCRAFT_SEARCH_MAX);
+    const { limit, offset } = paging.value;
+    const total = countAircraftMatching(db, q);
+    const rows = pageAircraft(db, { search: q, limit, offset });
+    c.header('X-Total-Count', String(total));
+    if (offset + rows.length < total) {
+      const next = new URLSearchParams({ ...(q !== '' ? { q } : {}), limit: String(limit), offset: String(offset + limit) });
+      c.header('Link', `</api/aircraft?${next.toString()}>; rel="next"`);
+    }
+    return c.json(rows);
+  });
   app.get('/aircraft/:id', (c) => {
     const a = getAircraft(db, c.req.param('id'));
     return a ? c.json(a) : notFound(c, 'aircraft', c.req.param('id'));
@@ -217,7 +253,13 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
     if (!body.ok) return body.response;
     const parsed = parseStudyDocument(body.value);
     if (!parsed.ok) return invalid(c, parsed.problems);
-    return c.json(await jobs.run('study', parsed.input));
+    try {
+      return c.json(await jobs.run('study', parsed.input));
+    } catch (e) {
+      // A rule only the run can check (it depends on the computed masses) is still the user's field.
+      if (e instanceof InputDomainError) return invalid(c, [problemFromDomainError(e)]);
+      throw e;
+    }
   });
 
   app.post('/compute/requirement', async (c) => {
@@ -241,9 +283,7 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
       });
       return c.json({ aircraft: a.id, conditions: { ...cond, mass_kg: cond.mass_kg ?? a.mtow_kg }, ...outcome });
     } catch (e) {
-      if (e instanceof InputDomainError) {
-        return invalid(c, [{ path: `conditions.${e.field.replace(/^aircraft\./, '')}`, field: e.field.split('.').pop() ?? e.field, value: e.value, message: `${String(e.value)} is not allowed; expected ${e.allowed}` }]);
-      }
+      if (e instanceof InputDomainError) return invalid(c, [problemFromDomainError(e, requirementPath(e.field))]);
       throw e;
     }
   });

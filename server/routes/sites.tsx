@@ -22,6 +22,7 @@ import { readRunwayForm, readSiteForm } from '../forms/site.js';
 import { CLIMATE_FILE_FORMATS, type ClimateFileFormat } from '../io/climate.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
+import { pageOfList } from '../web/paging.js';
 import type { AppEnv } from '../web/env.js';
 import { page, seeOther, viewOf } from '../web/page.js';
 import { formUnits, idParam, notFound } from './common.js';
@@ -124,7 +125,8 @@ export function siteRoutes(deps: SiteRouteDeps): Hono<AppEnv> {
 
   app.get('/', (c) => {
     const deleted = c.req.query('deleted');
-    return page(c, { title: 'Sites' }, () => <SitesListPage sites={listSites(db)} {...(deleted !== undefined ? { deleted } : {})} />);
+    const l = pageOfList(listSites(db), c.req.query('page'));
+    return page(c, { title: 'Sites', status: l.status }, () => <SitesListPage sites={l.rows} paging={l.paging} {...(deleted !== undefined ? { deleted } : {})} />);
   });
 
   app.get('/new', (c) => page(c, { title: 'New site' }, () => <SiteFormPage mode="new" action="/sites" values={{}} errors={{}} cancel="/sites" />));

@@ -7,7 +7,7 @@ import { Hono, type Context } from 'hono';
 import {
   InputDomainError, siteConditions, type AircraftProfile, type StudyInput, type UnitSystem,
 } from '../../core/index.js';
-import { listAircraft } from '../../db/repos/aircraft.js';
+import { aircraftByIds, aircraftChoices, aircraftNames, countAircraft } from '../../db/repos/aircraft.js';
 import { getSite, listSites } from '../../db/repos/sites.js';
 import {
   addScenario, createStudy, deleteScenario, deleteStudy, getScenario, getStudy, listStudies, updateScenario, updateStudy,
@@ -23,6 +23,7 @@ import { ViewContext } from '../../templates/view.js';
 import { WhatIfPanel, WhatIfResult, type WhatIfProps } from '../../templates/whatif.js';
 import { resultsCsv } from '../export/resultsCsv.js';
 import { formValues, type FormValues } from '../forms/fields.js';
+import { FLEET_SELECT_MAX, FLEET_SUGGESTIONS, pageOfList } from '../web/paging.js';
 import { newStudyValues, readScenarioForm, readStudyForm, scenarioFormValues, studyFormValues } from '../forms/study.js';
 import { readWhatIfForm, startingConditions, type WhatIfConditions } from '../forms/whatif.js';
 import { exportFleetCsv, importFleetCsv } from '../io/csv.js';
@@ -117,6 +118,8 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
   const app = new Hono<AppEnv>();
   /** Rendered results content by saved-result id, units and whether it is current (no per-user data inside). */
   const rendered = new Lru<string, Uint8Array>(64);
+  /** Results CSV and JSON downloads of saved results, by kind, saved-result id and units. */
+  const files = new Lru<string, Uint8Array>(8);
 
   const studyOr404 = (c: Context<AppEnv>) => {
     const id = idParam(c.req.param('id'));
@@ -126,7 +129,8 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
 
   app.get('/', (c) => {
     const deleted = c.req.query('deleted');
-    return page(c, { title: 'Studies' }, () => <StudiesListPage studies={listStudies(db)} {...(deleted !== undefined ? { deleted } : {})} />);
+    const l = pageOfList(listStudies(db), c.req.query('page'));
+    return page(c, { title: 'Studies', status: l.status }, () => <StudiesListPage studies={l.rows} paging={l.paging} {...(deleted !== undefined ? { deleted } : {})} />);
   });
 
   app.get('/new', (c) => {
@@ -153,7 +157,7 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     const state = service.state(s.id);
     const latest = state.ready ? service.latest(state) : undefined;
     const units = viewOf(c, s.options.units).units;
-    const names = new Map(listAircraft(db).map((a) => [a.id, a.name]));
+    const names = aircraftNames(db, s.scenarios.flatMap((x) => x.fleet.map((r) => r.aircraft)));
     const site = getSite(db, s.siteId);
     const w = studyWhatIf(s.id, state.input, latest?.loaded, {}, units);
     const notice = ({ created: 'Study created: add scenarios with their fleet rows.', saved: 'Saved.', 'scenario-deleted': 'Scenario deleted.' } as Record<string, string>)[c.req.query('notice') ?? ''];
@@ -214,7 +218,15 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     return s && sc && sc.studyId === s.id ? { study: s, scenario: sc } : undefined;
   };
 
-  const catalogueChoices = () => listAircraft(db);
+  /**
+   * The aircraft a fleet row offers: the whole catalogue as a select while it is small, else a
+   * bounded list of suggestions for a text field (a large catalogue never renders into every row).
+   */
+  const catalogueChoices = (values: FormValues, rows: number) => {
+    if (countAircraft(db) <= FLEET_SELECT_MAX) return { aircraft: aircraftChoices(db, undefined, FLEET_SELECT_MAX), complete: true };
+    const typed = Array.from({ length: rows }, (_, i) => (values[`r${i}_aircraft`] ?? '').trim()).filter((x) => x !== '');
+    return { aircraft: aircraftChoices(db, undefined, FLEET_SUGGESTIONS), complete: false, names: aircraftNames(db, typed) };
+  };
 
   app.post('/:id/scenarios', async (c) => {
     const s = studyOr404(c);
@@ -230,7 +242,7 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
   const scenarioPage = (c: Context<AppEnv>, x: NonNullable<ReturnType<typeof scenarioOf>>, values: FormValues, errors: Record<string, string>, rows: number, status: 200 | 422 = 200, importProblems?: string[]) =>
     page(c, { title: `Scenario ${x.scenario.name}`, status, units: x.study.options.units }, () => (
       <ScenarioFormPage studyId={x.study.id} studyName={x.study.name} scenarioId={x.scenario.id} values={values} errors={errors} rows={rows}
-        aircraft={catalogueChoices()} {...(importProblems ? { importProblems } : {})} />
+        {...catalogueChoices(values, rows)} {...(importProblems ? { importProblems } : {})} />
     ));
 
   app.get('/:id/scenarios/:sid', (c) => {
@@ -248,7 +260,7 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     const values = formValues(await c.req.parseBody());
     const units = formUnits(c, values, x.study.options.units);
     const rows = Math.min(200, Math.max(1, Number(values.rows) || 1));
-    const catalogue = new Map(listAircraft(db).map((a) => [a.id, a]));
+    const catalogue = aircraftByIds(db, Array.from({ length: rows }, (_, i) => (values[`r${i}_aircraft`] ?? '').trim()).filter((x) => x !== ''));
     const r = readScenarioForm(values, units, rows, catalogue);
     if (!r.ok) return scenarioPage(c, x, values, r.errors, rows, 422);
     updateScenario(db, x.scenario.id, r.value);
@@ -356,14 +368,21 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     if (!x) return notFound(c, 'study', c.req.param('id'));
     if (!x.latest) return seeOther(c, `/studies/${x.study.id}/results`);
     const units = viewOf(c, x.latest.loaded.output.options.units).units;
-    return download(c, resultsCsv(x.latest.loaded.output, units), 'text/csv; charset=utf-8', `${x.study.name}-results.csv`);
+    // A saved result never changes: its files are built once (a large study's take tens of ms).
+    const key = `csv:${x.latest.loaded.saved.id}:${units}`;
+    let bytes = files.get(key);
+    if (bytes === undefined) files.set(key, (bytes = Buffer.from(resultsCsv(x.latest.loaded.output, units), 'utf8')));
+    return download(c, bytes, 'text/csv; charset=utf-8', `${x.study.name}-results.csv`);
   });
 
   app.get('/:id/results.json', (c) => {
     const x = currentResult(c);
     if (!x) return notFound(c, 'study', c.req.param('id'));
     if (!x.latest) return seeOther(c, `/studies/${x.study.id}/results`);
-    return download(c, `${JSON.stringify(x.latest.loaded.output, null, 2)}\n`, 'application/json; charset=utf-8', `${x.study.name}-results.json`);
+    const key = `json:${x.latest.loaded.saved.id}`;
+    let bytes = files.get(key);
+    if (bytes === undefined) files.set(key, (bytes = Buffer.from(`${JSON.stringify(x.latest.loaded.output, null, 2)}\n`, 'utf8')));
+    return download(c, bytes, 'application/json; charset=utf-8', `${x.study.name}-results.json`);
   });
 
   app.get('/:id/results/rows/:s/:r', (c) => {

@@ -6,9 +6,11 @@
 import { z } from 'zod';
 import {
   AIRCRAFT_FIELDS, CERTIFICATION_BASES, CRUISE_FIELDS, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
-  InputDomainError, validateAircraft, type AircraftProfile, type FieldSpec,
+  InputDomainError, REFERENCE_LENGTH_RANGE, REFERENCE_TABLE_ELEVATION_RANGE, REFERENCE_TABLE_LENGTH_RANGE,
+  REFERENCE_TABLE_MASS_RANGE, REFERENCE_TABLE_TEMPERATURE_RANGE, domainProblemText, validateAircraft,
+  type AircraftProfile, type FieldSpec,
 } from '../../core/index.js';
-import { ident, num, oneOf, text } from './common.js';
+import { fieldPath, ident, num, numIn, oneOf, text } from './common.js';
 
 function shapeOf(fields: readonly FieldSpec[]): Record<string, z.ZodType> {
   const shape: Record<string, z.ZodType> = {};
@@ -19,18 +21,18 @@ function shapeOf(fields: readonly FieldSpec[]): Record<string, z.ZodType> {
   return shape;
 }
 
-const axis = (min: number, max: number, unit: string) => z.array(num(min, max, unit)).min(1).max(20);
+const axis = (range: Parameters<typeof numIn>[0]) => z.array(numIn(range)).min(1).max(20);
 
 export const referenceTableSchema = z.strictObject({
-  mass_kg: axis(300, 600000, 'kg'),
-  elevation_m: axis(-400, 4500, 'm'),
-  temperature_c: axis(-40, 55, '°C'),
-  length_m: z.array(z.array(z.array(num(100, 6000, 'm')))),
+  mass_kg: axis(REFERENCE_TABLE_MASS_RANGE),
+  elevation_m: axis(REFERENCE_TABLE_ELEVATION_RANGE),
+  temperature_c: axis(REFERENCE_TABLE_TEMPERATURE_RANGE),
+  length_m: z.array(z.array(z.array(numIn(REFERENCE_TABLE_LENGTH_RANGE)))),
 });
 
 export const referenceSchema = z.strictObject({
-  takeoff_m: num(100, 5000, 'm').optional(),
-  landing_m: num(100, 5000, 'm').optional(),
+  takeoff_m: numIn(REFERENCE_LENGTH_RANGE).optional(),
+  landing_m: numIn(REFERENCE_LENGTH_RANGE).optional(),
   table: referenceTableSchema.optional(),
 });
 
@@ -89,10 +91,6 @@ export const aircraftSchema = z.strictObject(baseShape).superRefine((a, ctx) => 
     validateAircraft(a as unknown as AircraftProfile, '');
   } catch (e) {
     if (!(e instanceof InputDomainError)) throw e;
-    const path = e.field.replace(/^\./, '').split('.').flatMap((k) => {
-      const m = /^(.*?)\[(\d+)\]/.exec(k);
-      return m ? [m[1]!, Number(m[2])] : [k];
-    });
-    ctx.addIssue({ code: 'custom', path, input: e.value, message: `${String(e.value)} is not allowed; expected ${e.allowed}` });
+    ctx.addIssue({ code: 'custom', path: fieldPath(e.field), input: e.value, message: domainProblemText(e.value, e.allowed, e.range) });
   }
 }) as unknown as z.ZodType<AircraftProfile>;

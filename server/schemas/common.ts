@@ -3,6 +3,59 @@
  * zod is the edge converter: raw values in, SI core input out. A blank is "missing", never zero.
  */
 import { z } from 'zod';
+import { IDENTIFIER_PATTERN, IDENTIFIER_RULE, InputDomainError, domainProblemText, formatValue } from '../../core/index.js';
+
+/**
+ * A short, safe rendering of a received value for messages: strings cut to 60 characters, lists and
+ * objects named by their size (never serialised: a hostile value may be huge or deeply nested).
+ */
+export function previewValue(v: unknown): string {
+  return v === undefined || v === null || v === '' ? 'missing' : formatValue(v);
+}
+
+/** The value echoed in a problem: primitives as received (long strings cut), lists and objects summarised. */
+export function echoValue(v: unknown): unknown {
+  if (typeof v === 'string') return v.length > 200 ? `${v.slice(0, 200)}…` : v;
+  if (v !== null && typeof v === 'object') return previewValue(v);
+  if (typeof v === 'number' && !Number.isFinite(v)) return null;
+  return v;
+}
+
+/**
+ * The message for a value that should be a finite number in [min, max]: "missing", "too large
+ * (maximum …)" for +Infinity (a cell of 1e309), "too small (minimum …)" for −Infinity, or "not a
+ * number". `allowed` is the range sentence ("allowed 0 to 2000 km").
+ */
+export function notANumberMessage(input: unknown, min: number, max: number, unit: string): string {
+  const u = unit ? ` ${unit}` : '';
+  const allowed = `allowed ${min} to ${max}${u}`;
+  if (input === undefined || input === null || input === '') return `missing; ${allowed}`;
+  if (input === Number.POSITIVE_INFINITY) return `too large (maximum ${max}${u})`;
+  if (input === Number.NEGATIVE_INFINITY) return `too small (minimum ${min}${u})`;
+  if (typeof input === 'number') return `not a number; ${allowed}`;
+  return `${previewValue(input)} is not a number; ${allowed}`;
+}
+
+const EXPECTED: Readonly<Record<string, string>> = {
+  object: 'an object', array: 'a list', string: 'text', number: 'a number', boolean: 'true or false', int: 'a whole number',
+};
+
+/**
+ * zod's own messages in the house wording, for every schema of the process (the pieces below set their
+ * own): a member left out is "missing; <what> is required" (never "received undefined"), a wrong type
+ * names the value shortly. Other issues keep their schema's message.
+ */
+z.config({
+  customError: (iss) => {
+    if (iss.code === 'invalid_type') {
+      const what = EXPECTED[iss.expected] ?? String(iss.expected);
+      return iss.input === undefined || iss.input === null ? `missing; ${what} is required` : `${previewValue(iss.input)} is not ${what}`;
+    }
+    if (iss.code === 'invalid_union') return iss.input === undefined || iss.input === null ? 'missing' : `${previewValue(iss.input)} is not one of the accepted forms`;
+    if (iss.code === 'unrecognized_keys') return `unknown member${iss.keys.length === 1 ? '' : 's'} ${iss.keys.slice(0, 5).map((k) => JSON.stringify(k.length > 40 ? `${k.slice(0, 40)}…` : k)).join(', ')}${iss.keys.length > 5 ? ` and ${iss.keys.length - 5} more` : ''}`;
+    return undefined;
+  },
+});
 
 /** A finite number in [min, max] (SI unit `unit`), with messages naming the range and unit. */
 export function num(min: number, max: number, unit: string) {
@@ -11,17 +64,15 @@ export function num(min: number, max: number, unit: string) {
   const outOfRange = (iss: { input?: unknown }) => `${String(iss.input)} is out of range; ${allowed}`;
   // zod 4 numbers refuse NaN and ±Infinity; min/max appear in the exported JSON Schema.
   return z
-    .number({
-      error: (iss) =>
-        iss.input === undefined || iss.input === null || iss.input === ''
-          ? `missing; ${allowed}`
-          : typeof iss.input === 'number'
-            ? `${String(iss.input)} is not a finite number; ${allowed}`
-            : `${JSON.stringify(iss.input)} is not a number; ${allowed}`,
-    })
+    .number({ error: (iss) => notANumberMessage(iss.input, min, max, unit) })
     .min(min, { error: outOfRange })
     .max(max, { error: outOfRange })
     .meta({ description: `${allowed}` });
+}
+
+/** A finite number in a core field range (core/fields.ts): the edge and the engine share the range. */
+export function numIn(range: { readonly min: number; readonly max: number; readonly unit: string }) {
+  return num(range.min, range.max, range.unit);
 }
 
 /** A whole number in [min, max]. */
@@ -39,10 +90,46 @@ export const text = (max: number) =>
 
 export const ident = z
   .string({ error: (iss) => (iss.input === undefined ? 'missing; an identifier is required' : 'must be text') })
-  .regex(/^[a-z0-9][a-z0-9._-]{0,63}$/i, { error: 'letters, digits, dot, dash or underscore; 1 to 64 characters, starting with a letter or digit' });
+  .regex(IDENTIFIER_PATTERN, { error: IDENTIFIER_RULE });
 
 export function oneOf<const T extends readonly [string, ...string[]]>(values: T) {
-  return z.enum(values, { error: (iss) => `${JSON.stringify(iss.input)} is not allowed; one of ${values.join(', ')}` });
+  return z.enum(values, {
+    error: (iss) => (iss.input === undefined || iss.input === null || iss.input === ''
+      ? `missing; one of ${values.join(', ')}`
+      : `${previewValue(iss.input)} is not allowed; one of ${values.join(', ')}`),
+  });
+}
+
+/** Keys of a core field path: "points[2].chainage_m" → ["points", 2, "chainage_m"]. */
+export function fieldPath(field: string): (string | number)[] {
+  const out: (string | number)[] = [];
+  for (const part of field.replace(/^\./, '').split('.')) {
+    const m = /^([^[]*)((?:\[\d+\])*)$/.exec(part);
+    if (!m) { out.push(part); continue; }
+    if (m[1]) out.push(m[1]);
+    for (const idx of m[2]!.matchAll(/\[(\d+)\]/g)) out.push(Number(idx[1]));
+  }
+  return out;
+}
+
+/**
+ * Runs one of core's own checks inside a zod refinement, so the edge refuses exactly what the engine
+ * would: an InputDomainError becomes an issue at its field (keys mapped by `rename`, e.g. core's
+ * "points" → the file's "profile"), with the same text the engine gives.
+ */
+export function coreCheck(
+  ctx: z.RefinementCtx, run: () => void, rename: (keys: (string | number)[]) => (string | number)[] = (k) => k,
+): boolean {
+  // Only once the shape holds: the range problems are already listed field by field.
+  if ((ctx as { issues?: readonly unknown[] }).issues?.length) return false;
+  try {
+    run();
+    return true;
+  } catch (e) {
+    if (!(e instanceof InputDomainError)) throw e;
+    ctx.addIssue({ code: 'custom', path: rename(fieldPath(e.field)), input: e.value, message: domainProblemText(e.value, e.allowed, e.range) });
+    return false;
+  }
 }
 
 export interface Problem {
@@ -67,7 +154,7 @@ export function problemsFrom(error: z.ZodError): Problem[] {
     return {
       path: formatPath(i.path),
       field: field === undefined ? '(root)' : String(field),
-      value: (i as { input?: unknown }).input,
+      value: echoValue((i as { input?: unknown }).input),
       message: i.message,
     };
   });

@@ -1,51 +1,78 @@
 /**
  * The study file (docs/study-format.md): JSON, SI quantities with the unit as a key suffix.
  * Validated here at the edge; every problem is reported with its JSON path, value and allowed range.
+ * Ranges come from core/fields.ts and core's own checks (runway profile, declared distances, climate,
+ * payload within the aircraft's maximum) run inside the schema, so a file the schema accepts is never
+ * refused by the engine.
  * The JSON Schema in docs/study.schema.json is exported from this schema (scripts/export-schema.ts).
  */
 import { z } from 'zod';
-import { SURFACES, type StudyInput } from '../../core/index.js';
+import {
+  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, CONTINGENCY_FRACTION_RANGE,
+  DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE,
+  MONTHLY_MEAN_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE,
+  RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
+  analyseRunwayProfile, checkDerivedDesignTemperature, checkProfileSlopes, checkRunwayDeclaredDistances,
+  designTemperatureFromMonthly, type StudyInput,
+} from '../../core/index.js';
 import { aircraftSchema } from './aircraft.js';
-import { ident, int, num, oneOf, text } from './common.js';
+import { coreCheck, ident, int, numIn, oneOf, text } from './common.js';
+
+const intIn = (r: { readonly min: number; readonly max: number; readonly unit: string }) => int(r.min, r.max, r.unit);
 
 export const monthlyClimateSchema = z.strictObject({
   month: int(1, 12, ''),
-  meanMax_c: num(-60, 60, '°C'),
-  meanMin_c: num(-80, 50, '°C').optional(),
-  mean_c: num(-70, 55, '°C').optional(),
+  meanMax_c: numIn(MONTHLY_MEAN_MAX_RANGE),
+  meanMin_c: numIn(MONTHLY_MEAN_MIN_RANGE).optional(),
+  mean_c: numIn(MONTHLY_MEAN_RANGE).optional(),
 });
+
+/** Core's climate keys ("months[3].mean_c") as the file's ("monthly[3].mean_c"). */
+const monthsAsMonthly = (k: (string | number)[]) => (k[0] === 'months' ? ['monthly', ...k.slice(1)] : k);
 
 export const climateSchema = z.strictObject({
   source: text(300),
-  years: int(1, 200, 'years').optional(),
+  years: intIn(CLIMATE_YEARS_RANGE).optional(),
   monthly: z.array(monthlyClimateSchema).length(12, { error: 'exactly 12 monthly values, one per month' })
     .refine((ms) => new Set(ms.map((m) => m.month)).size === 12, { error: 'each month 1 to 12 exactly once' }),
+}).superRefine((c, ctx) => {
+  // The engine's design-temperature rules: a mean or a minimum for each month, the mean between the
+  // minimum and the maximum, and a hottest month inside the design-temperature range.
+  coreCheck(ctx, () => checkDerivedDesignTemperature(c.monthly, designTemperatureFromMonthly({ months: c.monthly }), 'months'), monthsAsMonthly);
 });
 
 export const profilePointSchema = z.strictObject({
-  chainage_m: num(0, 6000, 'm'),
-  elevation_m: num(-400, 4500, 'm'),
+  chainage_m: numIn(RUNWAY_CHAINAGE_RANGE),
+  elevation_m: numIn(RUNWAY_POINT_ELEVATION_RANGE),
 });
 
 export const runwayDirectionSchema = z.strictObject({
   designator: z.string().regex(/^(0[1-9]|[12][0-9]|3[0-6])[LCR]?$/, { error: 'a runway designator 01 to 36, optionally L, C or R' }),
-  tora_m: num(200, 6000, 'm'),
-  toda_m: num(200, 6000, 'm'),
-  asda_m: num(200, 6000, 'm'),
-  lda_m: num(200, 6000, 'm'),
+  tora_m: numIn(DECLARED_LENGTH_RANGE),
+  toda_m: numIn(DECLARED_LENGTH_RANGE),
+  asda_m: numIn(DECLARED_LENGTH_RANGE),
+  lda_m: numIn(DECLARED_LENGTH_RANGE),
 });
+
+/** Core's profile keys ("points[2].chainage_m") as the file's ("profile[2].chainage_m"). */
+const pointsAsProfile = (k: (string | number)[]) => (k[0] === 'points' ? ['profile', ...k.slice(1)] : k);
 
 export const runwaySchema = z.strictObject({
   name: text(40),
   pavement: oneOf(['paved', 'grass']),
   profile: z.array(profilePointSchema).min(2, { error: 'at least 2 centreline points' }).max(500),
   directions: z.array(runwayDirectionSchema).min(1).max(2),
+}).superRefine((r, ctx) => {
+  // The engine's runway rules: chainage increasing, a profile at most 8 km long, average slope and
+  // effective gradient inside the models' range (steeper stretches only warn), declared-distance rules.
+  coreCheck(ctx, () => checkProfileSlopes(analyseRunwayProfile({ points: r.profile }), 'profile'), pointsAsProfile);
+  coreCheck(ctx, () => checkRunwayDeclaredDistances({ directions: r.directions }));
 });
 
 export const siteSchema = z.strictObject({
   name: text(120),
-  elevation_m: num(-400, 4500, 'm'),
-  designTemperature_c: num(-30, 55, '°C').optional(),
+  elevation_m: numIn(SITE_ELEVATION_RANGE),
+  designTemperature_c: numIn(DESIGN_TEMPERATURE_RANGE).optional(),
   climate: climateSchema.optional(),
   runways: z.array(runwaySchema).min(1, { error: 'at least one runway' }).max(8),
 }).refine((s) => s.designTemperature_c !== undefined || s.climate !== undefined, {
@@ -55,9 +82,9 @@ export const siteSchema = z.strictObject({
 
 export const fleetRowSchema = z.strictObject({
   aircraft: ident,
-  annualOperations: int(0, 1000000, 'operations/year'),
-  stageLength_km: num(1, 20000, 'km'),
-  payload_kg: num(0, 150000, 'kg'),
+  annualOperations: intIn(ANNUAL_OPERATIONS_RANGE),
+  stageLength_km: numIn(STAGE_LENGTH_RANGE_KM),
+  payload_kg: numIn(FLEET_PAYLOAD_RANGE),
 });
 
 export const scenarioSchema = z.strictObject({
@@ -67,20 +94,20 @@ export const scenarioSchema = z.strictObject({
 
 export const reservesSchema = z.strictObject({
   policy: oneOf(['cruise-45min', 'international', 'custom']),
-  alternate_km: num(0, 2000, 'km').optional(),
-  holding_min: num(0, 180, 'min').optional(),
-  contingencyFraction: num(0, 0.2, '').optional(),
+  alternate_km: numIn(ALTERNATE_DISTANCE_RANGE_KM).optional(),
+  holding_min: numIn(RESERVE_TIME_RANGE_MIN).optional(),
+  contingencyFraction: numIn(CONTINGENCY_FRACTION_RANGE).optional(),
 });
 
 export const optionsSchema = z.strictObject({
-  regularUseThreshold: int(1, 100000, 'operations/year').default(500),
+  regularUseThreshold: intIn(REGULAR_USE_THRESHOLD_RANGE).default(500),
   /** Default 50 m, or 100 ft (30.48 m) when the study is in US units (resolved in studyInputOf). */
-  roundingIncrement_m: num(1, 500, 'm').optional(),
+  roundingIncrement_m: numIn(ROUNDING_INCREMENT_RANGE).optional(),
   surface: oneOf(SURFACES as unknown as readonly [string, ...string[]]).default('dry'),
   method: oneOf(['physics', 'reference-icao', 'reference-authority', 'calibrated']).default('physics'),
   units: oneOf(['si', 'us']).default('si'),
   reserves: reservesSchema.default({ policy: 'cruise-45min' }),
-  passengerMass_kg: num(50, 200, 'kg').default(95),
+  passengerMass_kg: numIn(PASSENGER_MASS_RANGE).default(95),
   landingTemperature: oneOf(['isa', 'design']).default('isa'),
   landingMass: oneOf(['mlw', 'route']).default('mlw'),
 });
@@ -106,12 +133,16 @@ export function studyCrossProblems(raw: unknown): { path: (string | number)[]; v
   const doc = raw as { aircraft?: unknown; scenarios?: unknown } | null;
   if (!doc || typeof doc !== 'object') return out;
   const ids = new Map<string, number>();
+  const maxPayload = new Map<string, unknown>();
   if (Array.isArray(doc.aircraft)) {
     doc.aircraft.forEach((a: unknown, i) => {
       const id = (a as { id?: unknown } | null)?.id;
       if (typeof id !== 'string') return;
       if (ids.has(id)) out.push({ path: ['aircraft', i, 'id'], value: id, message: `duplicate aircraft id "${id}" (also aircraft[${ids.get(id)}])` });
-      else ids.set(id, i);
+      else {
+        ids.set(id, i);
+        maxPayload.set(id, (a as { maxPayload_kg?: unknown }).maxPayload_kg);
+      }
     });
   }
   if (Array.isArray(doc.scenarios)) {
@@ -122,6 +153,12 @@ export function studyCrossProblems(raw: unknown): { path: (string | number)[]; v
         const ref = (row as { aircraft?: unknown } | null)?.aircraft;
         if (typeof ref === 'string' && !ids.has(ref)) {
           out.push({ path: ['scenarios', i, 'fleet', j, 'aircraft'], value: ref, message: `unknown aircraft "${ref}"; one of ${[...ids.keys()].join(', ')}` });
+        }
+        // The engine's rule: a row's payload is at most its aircraft's maximum payload.
+        const payload = (row as { payload_kg?: unknown } | null)?.payload_kg;
+        const max = typeof ref === 'string' ? maxPayload.get(ref) : undefined;
+        if (typeof payload === 'number' && typeof max === 'number' && payload > max && payload <= FLEET_PAYLOAD_RANGE.max) {
+          out.push({ path: ['scenarios', i, 'fleet', j, 'payload_kg'], value: payload, message: `${payload} is not allowed; expected at most the maximum payload of "${ref}" (${max} kg)` });
         }
       });
     });

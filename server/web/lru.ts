@@ -18,6 +18,10 @@ export class Lru<K, V> {
     while (this.map.size > this.capacity) this.map.delete(this.map.keys().next().value as K);
   }
 
+  delete(key: K): void {
+    this.map.delete(key);
+  }
+
   get size(): number {
     return this.map.size;
   }

@@ -30,7 +30,7 @@ export function viewOf(c: Context<AppEnv>, units?: UnitSystem): View {
 
 export interface PageOptions {
   readonly title: string;
-  readonly status?: 200 | 401 | 404 | 409 | 413 | 422 | 500 | 501;
+  readonly status?: 200 | 400 | 401 | 404 | 409 | 413 | 422 | 429 | 500 | 501 | 503;
   /** Unit system of the page (a study's); default the user's. */
   readonly units?: UnitSystem;
 }
@@ -91,7 +91,7 @@ export function pageWithContent(c: Context<AppEnv>, opts: PageOptions, content: 
 }
 
 /** Renders a fragment (a panel) in the view context, for htmx requests that target that panel. */
-export function fragment(c: Context<AppEnv>, opts: { status?: 200 | 422; units?: UnitSystem }, body: () => Child): Response {
+export function fragment(c: Context<AppEnv>, opts: { status?: 200 | 400 | 422; units?: UnitSystem }, body: () => Child): Response {
   const status = opts.status ?? 200;
   headers(c, status);
   const html = <ViewContext.Provider value={viewOf(c, opts.units)}>{body()}</ViewContext.Provider>;
@@ -104,8 +104,43 @@ export function seeOther(c: Context, location: string): Response {
   return c.redirect(location, 303);
 }
 
-/** A same-site path to go back to, or the fallback: refuses absolute and protocol-relative URLs. */
+/** Control characters, format characters (zero-width, bidi) and whitespace of any kind. */
+const UNSAFE_CHAR = /[\p{Cc}\p{Cf}\p{Z}\s]/u;
+const BACK_BASE = 'http://host.invalid';
+const MAX_BACK_LENGTH = 2048;
+
+/** The character rules for a local path: starts with one `/`, no `\`, no control or space character. */
+function localPathShape(p: string): boolean {
+  return p.startsWith('/') && p[1] !== '/' && !p.includes('\\') && !UNSAFE_CHAR.test(p);
+}
+
+/**
+ * A same-site path to go back to (`back`, `next`), or `fallback`. Browsers follow the WHATWG URL
+ * parser, which drops tabs and newlines anywhere, trims control characters and spaces and reads `\` as
+ * `/`, so `/\t/evil.example` would be `//evil.example`, another site. Accepted: a path that starts with
+ * exactly one `/`, holds no backslash, control, format or space character, is not protocol-relative or
+ * backslash-relative once percent-decoded (`/%2F%2Fevil`, `/%09/evil`), and that resolves against a
+ * placeholder origin to the same origin and to exactly itself (no dot segments, no characters the
+ * parser would rewrite). Anything else, or a path longer than 2,048 characters, gives the fallback.
+ */
 export function safeBack(path: string | undefined, fallback: string): string {
-  if (path === undefined || !path.startsWith('/') || path.startsWith('//') || path.includes('\\')) return fallback;
-  return path;
+  if (path === undefined || path.length > MAX_BACK_LENGTH || !localPathShape(path)) return fallback;
+  const cut = path.search(/[?#]/);
+  const pathname = cut < 0 ? path : path.slice(0, cut);
+  let decoded: string;
+  try {
+    decoded = decodeURIComponent(pathname);
+  } catch {
+    return fallback;
+  }
+  if (!localPathShape(decoded)) return fallback;
+  let resolved: URL;
+  try {
+    resolved = new URL(path, BACK_BASE);
+  } catch {
+    return fallback;
+  }
+  const again = resolved.pathname + resolved.search + resolved.hash;
+  if (resolved.origin !== BACK_BASE || again !== path) return fallback;
+  return again;
 }

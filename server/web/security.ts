@@ -3,22 +3,28 @@
  * headers and request body limits. Documented in docs/web.md ("Security").
  *
  * - Access token (RUNWRIGHT_ACCESS_TOKEN): when set, every request needs it, as `Authorization:
- *   Bearer <token>` or as the session cookie set by the sign-in form; only the sign-in form and the
- *   stylesheet are open. Browsers asking for a page are sent to /login; everything else gets 401.
+ *   Bearer <token>` or as the session cookie set by the sign-in form (a random session id that
+ *   expires after 12 hours and is deleted on sign-out: server/web/sessions.ts); only the sign-in form
+ *   and the stylesheet are open. Browsers asking for a page are sent to /login; everything else gets 401.
  * - CSRF: a random per-browser token in an HttpOnly SameSite=Lax cookie must come back in the `_csrf`
  *   form field or the `x-csrf-token` header on POST/PUT/PATCH/DELETE (double submit); a request whose
  *   Origin names another host, or whose Sec-Fetch-Site is cross-site, is refused. The JSON API (/api/)
  *   is exempt from the token but accepts request bodies only as application/json, which a page on
- *   another site cannot send without a CORS preflight (never granted).
+ *   another site cannot send without a CORS preflight (never granted). `Origin: null` (sandboxed
+ *   frames, data: and file: pages, cross-site redirects) is refused on unsafe methods.
+ * - Caching: every answer that does not set its own Cache-Control (the static files do) is
+ *   `no-store`, errors (401, 403, 413, 415, 429) and /health included.
  * - Body limits: 413 beyond `maxBodyBytes`, or `maxUploadBytes` on the file-import routes and /api/.
  */
-import { createHash, createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
+import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { getConnInfo } from '@hono/node-server/conninfo';
 import type { Context, MiddlewareHandler } from 'hono';
 import { getCookie, setCookie, deleteCookie } from 'hono/cookie';
 import { bodyLimit } from 'hono/body-limit';
 import { secureHeaders } from 'hono/secure-headers';
 import { CSRF_FIELD, CSRF_HEADER } from '../../templates/view.js';
 import type { AppEnv } from './env.js';
+import type { SessionStore } from './sessions.js';
 
 export const CSRF_COOKIE = 'rw_csrf';
 export const ACCESS_COOKIE = 'rw_access';
@@ -34,11 +40,6 @@ function sameBytes(a: string, b: string): boolean {
   return timingSafeEqual(ha, hb);
 }
 
-/** The value kept in the session cookie: an HMAC of a fixed label under the access token. */
-export function accessCookieValue(token: string): string {
-  return createHmac('sha256', token).update('runwright-session-v1').digest('base64url');
-}
-
 export function isApiPath(path: string): boolean {
   return path === '/api' || path.startsWith('/api/');
 }
@@ -47,26 +48,26 @@ function wantsHtml(c: Context): boolean {
   return c.req.method === 'GET' && (c.req.header('accept') ?? '').includes('text/html') && !isApiPath(c.req.path);
 }
 
-/** Whether this request carries the access token (header or session cookie). */
-export function hasAccess(c: Context, token: string): boolean {
+/** Whether this request carries the access token (bearer header) or a live session cookie. */
+export function hasAccess(c: Context, token: string, sessions: SessionStore): boolean {
   const auth = c.req.header('authorization');
   if (auth !== undefined) {
     const m = /^Bearer\s+(.+)$/i.exec(auth.trim());
     if (m && sameBytes(m[1]!, token)) return true;
   }
-  const cookie = getCookie(c, ACCESS_COOKIE);
-  return cookie !== undefined && sameBytes(cookie, accessCookieValue(token));
+  return sessions.valid(getCookie(c, ACCESS_COOKIE));
 }
 
-/** Requires the access token on every request when `token` is set. */
-export function accessGuard(token: string | undefined): MiddlewareHandler<AppEnv> {
+/** Requires the access token (or a live session) on every request when `token` is set. */
+export function accessGuard(token: string | undefined, sessions: SessionStore): MiddlewareHandler<AppEnv> {
   return async (c, next) => {
     if (token === undefined) {
       c.set('signedIn', false);
       return next();
     }
-    if (OPEN_PATHS.has(c.req.path) || hasAccess(c, token)) {
-      c.set('signedIn', hasAccess(c, token));
+    const access = hasAccess(c, token, sessions);
+    if (access || OPEN_PATHS.has(c.req.path)) {
+      c.set('signedIn', access);
       return next();
     }
     c.header('Vary', 'Authorization, Cookie', { append: true });
@@ -75,7 +76,8 @@ export function accessGuard(token: string | undefined): MiddlewareHandler<AppEnv
       return c.text('Sign in with the access token first.', 401);
     }
     if (wantsHtml(c)) {
-      const back = c.req.path + new URL(c.req.url).search;
+      const url = new URL(c.req.url);
+      const back = url.pathname + url.search;
       return c.redirect(`/login?next=${encodeURIComponent(back)}`, 303);
     }
     c.header('WWW-Authenticate', 'Bearer realm="runwright"');
@@ -85,13 +87,30 @@ export function accessGuard(token: string | undefined): MiddlewareHandler<AppEnv
   };
 }
 
-/** Sets the session cookie after a successful sign-in. */
-export function setAccessCookie(c: Context, token: string): void {
-  setCookie(c, ACCESS_COOKIE, accessCookieValue(token), { httpOnly: true, sameSite: 'Strict', path: '/', secure: new URL(c.req.url).protocol === 'https:' });
+/** Starts a session after a successful sign-in (ending the one this browser had) and sets its cookie. */
+export function setAccessCookie(c: Context, sessions: SessionStore): void {
+  sessions.revoke(getCookie(c, ACCESS_COOKIE));
+  setCookie(c, ACCESS_COOKIE, sessions.create(), {
+    httpOnly: true, sameSite: 'Strict', path: '/', secure: new URL(c.req.url).protocol === 'https:', maxAge: Math.floor(sessions.ttlMs / 1000),
+  });
 }
 
-export function clearAccessCookie(c: Context): void {
+/** Signing out: the session is deleted on the server and the cookie cleared. */
+export function clearAccessCookie(c: Context, sessions: SessionStore): void {
+  sessions.revoke(getCookie(c, ACCESS_COOKIE));
   deleteCookie(c, ACCESS_COOKIE, { path: '/' });
+}
+
+/**
+ * The client's address, for the sign-in throttle: the TCP peer of the request. Requests without a
+ * socket (app.request() in tests) share one bucket. Behind a reverse proxy every client is the proxy.
+ */
+export function clientAddress(c: Context): string {
+  try {
+    return getConnInfo(c).remote.address ?? 'unknown';
+  } catch {
+    return 'unknown';
+  }
 }
 
 /** Constant-time check of a token typed into the sign-in form. */
@@ -102,7 +121,9 @@ export function tokenMatches(typed: string, token: string): boolean {
 function originAllowed(c: Context): boolean {
   const host = c.req.header('host');
   const origin = c.req.header('origin');
-  if (origin !== undefined && origin !== 'null' && host !== undefined) {
+  // `Origin: null` is what sandboxed frames, data: and file: pages and cross-site redirects send.
+  if (origin === 'null') return false;
+  if (origin !== undefined && host !== undefined) {
     try {
       if (new URL(origin).host !== host) return false;
     } catch {
@@ -156,6 +177,14 @@ export function csrfGuard(): MiddlewareHandler<AppEnv> {
       return refuse(c, 'The form could not be checked (it may have expired, or it came from another site). Reload the page and try again.');
     }
     return next();
+  };
+}
+
+/** `Cache-Control: no-store` on every answer that does not set its own (error answers included). */
+export function noStoreByDefault(): MiddlewareHandler {
+  return async (c, next) => {
+    await next();
+    if (!c.res.headers.has('cache-control')) c.res.headers.set('Cache-Control', 'no-store');
   };
 }
 

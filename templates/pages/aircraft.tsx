@@ -1,4 +1,7 @@
-/** Aircraft catalogue pages: the list with key figures, the grouped form, the detail page with what-if. */
+/**
+ * Aircraft catalogue pages: the list (one page of it, with the search box and page links) with key
+ * figures, the grouped form, the detail page with what-if.
+ */
 import {
   CERTIFICATION_BASES, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
   type AircraftProfile, type UnitSystem,
@@ -10,6 +13,7 @@ import { fmt, fmtInput, fmtLengthBoth } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 import { WhatIfPanel, type WhatIfProps } from '../whatif.js';
+import { Pager } from '../pager.js';
 
 /** Key figures of a catalogue aircraft (the server's computation, structurally). */
 export interface AircraftFiguresView {
@@ -55,11 +59,104 @@ export interface AircraftListRow {
 }
 
 export interface AircraftListProps {
+  /** The aircraft of this page (already bounded by the route). */
   readonly rows: readonly AircraftListRow[];
+  /** Aircraft matching the search, all pages. */
+  readonly total: number;
+  /** Aircraft in the whole catalogue. */
+  readonly catalogueSize: number;
+  readonly page: number;
+  readonly pages: number;
+  /** Rows before this page. */
+  readonly offset: number;
+  /** The search term ('' for none). */
+  readonly search: string;
+  /** Longest search term the server reads, characters. */
+  readonly searchMax: number;
+  /** Why the requested page was not shown as asked. */
+  readonly pageProblem?: string;
   readonly imported?: number;
   readonly deleted?: string;
   readonly importProblems?: readonly string[];
   readonly importValues?: Values;
+}
+
+/** URL of the catalogue page with a search term and page number (defaults left out). */
+export function aircraftListHref(search: string, page: number): string {
+  const q = new URLSearchParams();
+  if (search !== '') q.set('q', search);
+  if (page > 1) q.set('page', String(page));
+  const s = q.toString();
+  return s === '' ? '/aircraft' : `/aircraft?${s}`;
+}
+
+/** The catalogue search box: a plain GET form; with htmx the list region follows as the user types. */
+function AircraftSearch(p: { search: string; searchMax: number }) {
+  const target = `#${IDS.aircraftResults}`;
+  return (
+    <form class="search" method="get" action="/aircraft" role="search" aria-label="Search the catalogue"
+      hx-get="/aircraft" hx-target={target} hx-swap="outerHTML" hx-push-url="true">
+      <label for="f-aircraft-search">Search</label>{' '}
+      <input id="f-aircraft-search" type="search" name="q" value={p.search} maxlength={p.searchMax} autocomplete="off"
+        placeholder="id, name, group, certification or engine type"
+        hx-get="/aircraft" hx-trigger="input changed delay:300ms, search" hx-target={target} hx-swap="outerHTML" hx-push-url="true"
+        aria-describedby="f-aircraft-search-hint" />{' '}
+      <button type="submit">Search</button>
+      {p.search !== '' ? <>{' '}<a href="/aircraft">Show all</a></> : null}
+      <span id="f-aircraft-search-hint" class="hint"> Part of an id, name, group, certification or engine type; not case-sensitive.</span>
+    </form>
+  );
+}
+
+/** The list region: the count, the page's table and the page links (what search and paging swap). */
+export function AircraftResults(p: AircraftListProps) {
+  const { units } = useView();
+  const first = p.offset + 1;
+  const last = first + p.rows.length - 1;
+  const what = p.search === '' ? `${p.total.toLocaleString('en-US')} aircraft` : `${p.total.toLocaleString('en-US')} of ${p.catalogueSize.toLocaleString('en-US')} aircraft match “${p.search}”`;
+  return (
+    <div id={IDS.aircraftResults} class="list-results" aria-live="polite">
+      {p.pageProblem ? <Notice kind="error">{p.pageProblem}</Notice> : null}
+      {p.catalogueSize === 0 ? <p>The catalogue is empty. Create an aircraft or import a file.</p>
+        : p.total === 0 ? <p>No aircraft match “{p.search}”. <a href="/aircraft">Show all</a>.</p> : (
+        <>
+          <div class="scroll">
+            <table class="list">
+              <caption>{what}{p.pages > 1 ? `; ${first.toLocaleString('en-US')}–${last.toLocaleString('en-US')} shown` : ''}; reference field length at MTOW, sea level, ISA (physics model)</caption>
+              <thead>
+                <tr>
+                  <th scope="col">Name</th><th scope="col">Engines</th><th scope="col">Certification</th>
+                  <th scope="col" class="num">MTOW</th><th scope="col" class="num">Wingspan</th>
+                  <th scope="col" class="num">Ref. field length</th><th scope="col">Code</th><th scope="col">Approach cat.</th>
+                  <th scope="col">Design group</th><th scope="col"><span class="sr-only">Actions</span></th>
+                </tr>
+              </thead>
+              <tbody>
+                {p.rows.map(({ profile: a, figures: f }) => (
+                  <tr>
+                    <td><a href={`/aircraft/${encodeURIComponent(a.id)}`}>{a.name}</a><br /><span class="muted id">{a.id}</span></td>
+                    <td>{engineText(a)}</td>
+                    <td>{CERT_LABEL[a.certification] ?? a.certification}</td>
+                    <td class="num">{fmt(a.mtow_kg, 'mass', units)}</td>
+                    <td class="num">{fmt(a.wingspan_m, 'shortLength', units)}</td>
+                    <td class="num">{f.arfl_m === undefined ? <span title={f.note}>—</span> : fmt(f.arfl_m, 'length', units)}</td>
+                    <td>{f.aerodromeCode ?? '—'}</td>
+                    <td>{f.approachCategory ?? '—'}</td>
+                    <td>{f.designGroup ?? '—'}</td>
+                    <td class="row-actions">
+                      <a href={`/aircraft/${encodeURIComponent(a.id)}/edit`}>Edit<span class="sr-only"> {a.name}</span></a>
+                      {' '}<a href={`/aircraft/${encodeURIComponent(a.id)}/delete`}>Delete<span class="sr-only"> {a.name}</span></a>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+          <Pager page={p.page} pages={p.pages} href={(n) => aircraftListHref(p.search, n)} target={IDS.aircraftResults} label="Catalogue pages" />
+        </>
+      )}
+    </div>
+  );
 }
 
 function ImportPanel(p: { problems?: readonly string[]; values?: Values }) {
@@ -98,47 +195,14 @@ function ImportPanel(p: { problems?: readonly string[]; values?: Values }) {
 }
 
 export function AircraftListPage(p: AircraftListProps) {
-  const { units } = useView();
   return (
     <>
       <h1>Aircraft catalogue</h1>
-      {p.imported !== undefined ? <Notice kind="ok">Imported {p.imported} aircraft.</Notice> : null}
+      {p.imported !== undefined ? <Notice kind="ok">Imported {p.imported.toLocaleString('en-US')} aircraft.</Notice> : null}
       {p.deleted !== undefined ? <Notice kind="ok">Deleted aircraft “{p.deleted}”.</Notice> : null}
       <p class="actions"><a class="button" href="/aircraft/new">New aircraft</a></p>
-      {p.rows.length === 0 ? <p>The catalogue is empty. Create an aircraft or import a file.</p> : (
-        <div class="scroll">
-          <table class="list">
-            <caption>{p.rows.length} aircraft; reference field length at MTOW, sea level, ISA (physics model)</caption>
-            <thead>
-              <tr>
-                <th scope="col">Name</th><th scope="col">Engines</th><th scope="col">Certification</th>
-                <th scope="col" class="num">MTOW</th><th scope="col" class="num">Wingspan</th>
-                <th scope="col" class="num">Ref. field length</th><th scope="col">Code</th><th scope="col">Approach cat.</th>
-                <th scope="col">Design group</th><th scope="col"><span class="sr-only">Actions</span></th>
-              </tr>
-            </thead>
-            <tbody>
-              {p.rows.map(({ profile: a, figures: f }) => (
-                <tr>
-                  <td><a href={`/aircraft/${encodeURIComponent(a.id)}`}>{a.name}</a><br /><span class="muted id">{a.id}</span></td>
-                  <td>{engineText(a)}</td>
-                  <td>{CERT_LABEL[a.certification] ?? a.certification}</td>
-                  <td class="num">{fmt(a.mtow_kg, 'mass', units)}</td>
-                  <td class="num">{fmt(a.wingspan_m, 'shortLength', units)}</td>
-                  <td class="num">{f.arfl_m === undefined ? <span title={f.note}>—</span> : fmt(f.arfl_m, 'length', units)}</td>
-                  <td>{f.aerodromeCode ?? '—'}</td>
-                  <td>{f.approachCategory ?? '—'}</td>
-                  <td>{f.designGroup ?? '—'}</td>
-                  <td class="row-actions">
-                    <a href={`/aircraft/${encodeURIComponent(a.id)}/edit`}>Edit<span class="sr-only"> {a.name}</span></a>
-                    {' '}<a href={`/aircraft/${encodeURIComponent(a.id)}/delete`}>Delete<span class="sr-only"> {a.name}</span></a>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      )}
+      {p.catalogueSize > 0 ? <AircraftSearch search={p.search} searchMax={p.searchMax} /> : null}
+      <AircraftResults {...p} />
       <ImportPanel problems={p.importProblems} values={p.importValues} />
     </>
   );

@@ -123,7 +123,7 @@ function ScenarioTable(p: { s: ScenarioResult; index: number; studyId: number })
                         <td>{r.governing}{r.governing === 'takeoff' && r.takeoff ? `: ${r.takeoff.governing}` : ''}</td>
                       </>
                     ) : (
-                      <td colspan={5} class="cannot">Cannot operate: {r.reason}</td>
+                      <td colspan={5} class="cannot">{r.plausibility ? r.reason : `Cannot operate: ${r.reason ?? ''}`}</td>
                     )}
                     <td>{r.classification.runwayDesignCode} / {r.classification.aerodromeCode}</td>
                     <td><a href={url} hx-get={url} hx-target={`#${id}`} hx-swap="innerHTML" aria-controls={id}>Components<span class="sr-only"> of {r.aircraftName}</span></a></td>

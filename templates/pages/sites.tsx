@@ -4,6 +4,7 @@
  * chart and declared distances, the station-file import), and the runway form.
  */
 import type { ChartModel, RunwayInput, SiteInput, UnitSystem } from '../../core/index.js';
+import { ListPager, listCaption, type ListPaging } from '../pager.js';
 import { monthName } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { ImportProblems, Notice, PostForm, Warnings } from '../components.js';
@@ -24,16 +25,17 @@ export interface SiteListItem {
   readonly hasClimate: boolean;
 }
 
-export function SitesListPage(p: { sites: readonly SiteListItem[]; deleted?: string }) {
+export function SitesListPage(p: { sites: readonly SiteListItem[]; deleted?: string; paging?: ListPaging }) {
   const { units } = useView();
   return (
     <>
       <h1>Sites</h1>
       {p.deleted !== undefined ? <Notice kind="ok">Deleted site “{p.deleted}”.</Notice> : null}
+      {p.paging?.problem ? <Notice kind="error">{p.paging.problem}</Notice> : null}
       <p class="actions"><a class="button" href="/sites/new">New site</a></p>
       {p.sites.length === 0 ? <p>No sites yet.</p> : (
         <table class="list">
-          <caption>{p.sites.length} site{p.sites.length === 1 ? '' : 's'}</caption>
+          <caption>{p.paging ? listCaption(p.paging, p.sites.length, 'site', 'sites') : `${p.sites.length} site${p.sites.length === 1 ? '' : 's'}`}</caption>
           <thead><tr><th scope="col">Name</th><th scope="col" class="num">Elevation</th><th scope="col" class="num">Runways</th><th scope="col">Climate</th><th scope="col"><span class="sr-only">Actions</span></th></tr></thead>
           <tbody>
             {p.sites.map((s) => (
@@ -48,6 +50,7 @@ export function SitesListPage(p: { sites: readonly SiteListItem[]; deleted?: str
           </tbody>
         </table>
       )}
+      {p.paging ? <ListPager paging={p.paging} path="/sites" label="Site list pages" /> : null}
     </>
   );
 }

@@ -6,6 +6,10 @@ import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type V
 import { UNIT_SYSTEM_LABELS, fmt, fmtPct, unitSymbol } from '../format.js';
 import { useView } from '../view.js';
 import { WhatIfPanel, type WhatIfProps } from '../whatif.js';
+import { ListPager, listCaption, type ListPaging } from '../pager.js';
+
+/** Fleet rows shown per scenario on the study overview (the scenario page shows them all). */
+export const OVERVIEW_FLEET_ROWS = 10;
 
 export interface StudyListItem {
   readonly id: number;
@@ -16,15 +20,16 @@ export interface StudyListItem {
   readonly lastSavedAt?: string;
 }
 
-export function StudiesListPage(p: { studies: readonly StudyListItem[]; deleted?: string }) {
+export function StudiesListPage(p: { studies: readonly StudyListItem[]; deleted?: string; paging?: ListPaging }) {
   return (
     <>
       <h1>Studies</h1>
       {p.deleted !== undefined ? <Notice kind="ok">Deleted study “{p.deleted}”.</Notice> : null}
+      {p.paging?.problem ? <Notice kind="error">{p.paging.problem}</Notice> : null}
       <p class="actions"><a class="button" href="/studies/new">New study</a></p>
       {p.studies.length === 0 ? <p>No studies yet.</p> : (
         <table class="list">
-          <caption>{p.studies.length} stud{p.studies.length === 1 ? 'y' : 'ies'}</caption>
+          <caption>{p.paging ? listCaption(p.paging, p.studies.length, 'study', 'studies') : `${p.studies.length} stud${p.studies.length === 1 ? 'y' : 'ies'}`}</caption>
           <thead><tr><th scope="col">Name</th><th scope="col">Site</th><th scope="col" class="num">Scenarios</th><th scope="col">Last computed</th><th scope="col"><span class="sr-only">Actions</span></th></tr></thead>
           <tbody>
             {p.studies.map((s) => (
@@ -39,6 +44,7 @@ export function StudiesListPage(p: { studies: readonly StudyListItem[]; deleted?
           </tbody>
         </table>
       )}
+      {p.paging ? <ListPager paging={p.paging} path="/studies" label="Study list pages" /> : null}
     </>
   );
 }
@@ -176,11 +182,16 @@ export function StudyOverviewPage(p: StudyOverviewProps) {
             <table class="compact">
               <thead><tr><th scope="col">Aircraft</th><th scope="col" class="num">Annual operations</th><th scope="col" class="num">Stage length</th><th scope="col" class="num">Payload</th></tr></thead>
               <tbody>
-                {s.fleet.map((r) => (
+                {s.fleet.slice(0, OVERVIEW_FLEET_ROWS).map((r) => (
                   <tr><td><a href={`/aircraft/${encodeURIComponent(r.aircraft)}`}>{r.aircraftName}</a></td><td class="num">{r.annualOperations.toLocaleString('en-US')}</td>
                     <td class="num">{fmt(r.stageLength_km * 1000, 'distance', units)}</td><td class="num">{fmt(r.payload_kg, 'mass', units)}</td></tr>
                 ))}
               </tbody>
+              {s.fleet.length > OVERVIEW_FLEET_ROWS ? (
+                <tfoot><tr><td colspan={4} class="muted">
+                  … and {s.fleet.length - OVERVIEW_FLEET_ROWS} more rows ({s.fleet.length} in all, {s.fleet.reduce((n, r) => n + r.annualOperations, 0).toLocaleString('en-US')} annual operations): <a href={`/studies/${p.id}/scenarios/${s.id}`}>see every row<span class="sr-only"> of {s.name}</span></a>
+                </td></tr></tfoot>
+              ) : null}
             </table>
           )}
         </section>
@@ -206,8 +217,28 @@ export interface ScenarioFormProps {
   readonly values: Values;
   readonly errors: Errors;
   readonly rows: number;
+  /**
+   * Aircraft to offer: the whole catalogue when `complete` (a select), else a bounded list of
+   * suggestions for a text field with a datalist that htmx refreshes as the user types.
+   */
   readonly aircraft: readonly { readonly id: number | string; readonly name: string }[];
+  /** True when `aircraft` is the whole catalogue (small enough for a select in every row). */
+  readonly complete?: boolean;
+  /** Names of the aircraft ids typed in the rows (shown beside a text field). */
+  readonly names?: ReadonlyMap<string, string>;
   readonly importProblems?: readonly string[];
+}
+
+/**
+ * Suggestions for a fleet row's aircraft field: a datalist (native, no JavaScript needed) that the
+ * fields' htmx requests replace with the aircraft matching what was typed.
+ */
+export function AircraftChoices(p: { aircraft: readonly { readonly id: string; readonly name: string }[] }) {
+  return (
+    <datalist id={IDS.aircraftChoices}>
+      {p.aircraft.map((a) => <option value={a.id}>{a.name}</option>)}
+    </datalist>
+  );
 }
 
 export function ScenarioFormPage(p: ScenarioFormProps) {
@@ -247,10 +278,19 @@ export function ScenarioFormPage(p: ScenarioFormProps) {
                   <tr>
                     <th scope="row">{i + 1}</th>
                     <td class={err ? 'has-error' : undefined}>
-                      <select id={fieldId(rf(i, 'aircraft'))} name={rf(i, 'aircraft')} aria-label={`Row ${i + 1} aircraft`} aria-invalid={err ? 'true' : undefined}>
-                        <option value="">—</option>
-                        {p.aircraft.map((a) => <option value={String(a.id)} selected={p.values[rf(i, 'aircraft')] === String(a.id)}>{a.name}</option>)}
-                      </select>
+                      {p.complete !== false ? (
+                        <select id={fieldId(rf(i, 'aircraft'))} name={rf(i, 'aircraft')} aria-label={`Row ${i + 1} aircraft`} aria-invalid={err ? 'true' : undefined}>
+                          <option value="">—</option>
+                          {p.aircraft.map((a) => <option value={String(a.id)} selected={p.values[rf(i, 'aircraft')] === String(a.id)}>{a.name}</option>)}
+                        </select>
+                      ) : (
+                        <>
+                          <input id={fieldId(rf(i, 'aircraft'))} name={rf(i, 'aircraft')} type="text" list={IDS.aircraftChoices} value={p.values[rf(i, 'aircraft')] ?? ''}
+                            aria-label={`Row ${i + 1} aircraft id`} aria-invalid={err ? 'true' : undefined} aria-describedby="fleet-aircraft-hint" autocomplete="off" class="cell aircraft-id"
+                            hx-get="/aircraft/_choices" hx-trigger="input changed delay:250ms" hx-target={`#${IDS.aircraftChoices}`} hx-swap="outerHTML" hx-push-url="false" hx-indicator="this" />
+                          {p.names?.get((p.values[rf(i, 'aircraft')] ?? '').trim()) !== undefined ? <span class="muted small aircraft-name">{p.names.get((p.values[rf(i, 'aircraft')] ?? '').trim())}</span> : null}
+                        </>
+                      )}
                       {err ? <span class="error small">{err}</span> : null}
                     </td>
                     {cell(rf(i, 'ops'), `Row ${i + 1} annual operations`)}
@@ -262,6 +302,15 @@ export function ScenarioFormPage(p: ScenarioFormProps) {
             </tbody>
           </table>
         </div>
+        {p.complete === false ? (
+          <>
+            <p class="hint" id="fleet-aircraft-hint">
+              Type an aircraft id, or part of its name to pick from the suggestions ({p.aircraft.length} shown at a time).
+              {' '}<a href="/aircraft" target="_blank">Search the catalogue</a> to look up an id.
+            </p>
+            <AircraftChoices aircraft={p.aircraft.map((a) => ({ id: String(a.id), name: a.name }))} />
+          </>
+        ) : null}
         <p class="actions">
           <button type="submit" class="primary">Save scenario</button>{' '}
           <button type="submit" name="more" value="yes">Save and add rows</button>{' '}

@@ -391,7 +391,7 @@ describe('GHCN-Daily by-station CSV (GHCN-D readme field list and units, domain-
       [ghcn([ok, `${STATION},20230231,TMAX,345,,,S,`]), 2, 2, 'does not exist'],
       [ghcn([ok, `${STATION},20230702,TMAX,345,,`]), 2, 7, 'expected 8 fields'],
       [ghcn([ok, `${STATION},20230702,TMAX,34.5,,,S,`]), 2, 4, 'whole number of tenths'],
-      [ghcn([ok, `${STATION},20230702,TMAX,700,,,S,`]), 2, 4, 'outside -90..60 °C'],
+      [ghcn([ok, `${STATION},20230702,TMAX,700,,,S,`]), 2, 4, 'is 70.0 °C: too large (maximum 60 °C)'],
       [ghcn([ok, `XX000099999,20230702,TMAX,345,,,S,`]), 2, 1, 'a second station'],
       [ghcn([ok, `${STATION},20230702,TMIN,400,,,S,`, `${STATION},20230702,TMAX,345,,,S,`]), 3, 4, 'TMIN 40 °C is above TMAX 34.5 °C'],
       [ghcn([ok, ok]), 2, 4, 'a second TMAX value for 2023-07-01 (the first is on line 1)'],

@@ -39,7 +39,7 @@ beforeAll(async () => {
   handle = openDatabase(dbFile);
   seedDemoIfEmpty(handle.db, demoInput());
   jobs = workerJobs({ size: 1 });
-  const app = createApp({ db: handle.db, dbFile, clock: () => new Date(), jobs });
+  const app = createApp({ db: handle.db, clock: () => new Date(), jobs });
   server = await new Promise<ServerType>((resolve) => {
     const s = serve({ fetch: app.fetch, port: 0, hostname: '127.0.0.1' }, () => resolve(s));
   });

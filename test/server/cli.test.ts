@@ -117,3 +117,27 @@ describe('study CLI', () => {
     expect(bad.stderr).toMatch(/format: must be "runwright-study"/);
   });
 });
+
+describe('study CLI: input edges (issue 12)', () => {
+  it('a document nested 4,100 levels deep exits 2 with the depth cap named (it used to exit 1)', async () => {
+    const { io, out } = fakeIo({ 'deep.json': '['.repeat(4100) + ']'.repeat(4100) });
+    expect(await runCli(['deep.json'], io)).toBe(2);
+    expect(out.stderr).toMatch(/^deep\.json: not accepted: the document is nested more than 64 levels deep \(line 1, column 65\)/);
+    expect(out.stderr.length).toBeLessThan(300);
+  });
+
+  it('a 2,000 km international alternate computes (exit 0); 2,001 km exits 2 with the path and range', async () => {
+    const ok = fakeIo({ 'a.json': mutate((d) => { d.options.reserves = { policy: 'international', alternate_km: 2000 }; }) });
+    expect(await runCli(['a.json'], ok.io)).toBe(0);
+    const bad = fakeIo({ 'b.json': mutate((d) => { d.options.reserves = { policy: 'international', alternate_km: 2001 }; }) });
+    expect(await runCli(['b.json'], bad.io)).toBe(2);
+    expect(bad.out.stderr).toContain('options.reserves.alternate_km: 2001 is out of range; allowed 0 to 2000 km');
+  });
+
+  it('a 5 % runway exits 2 naming the profile, not the models\' internal "slope"', async () => {
+    const { io, out } = fakeIo({ 's.json': mutate((d) => { d.site.runways[0].profile = [{ chainage_m: 0, elevation_m: 250 }, { chainage_m: 1500, elevation_m: 325 }]; }) });
+    expect(await runCli(['s.json'], io)).toBe(2);
+    expect(out.stderr).toContain('site.runways[0].profile: "5.00 % average slope" is not allowed');
+    expect(out.stderr).not.toMatch(/^\s*- slope:/m);
+  });
+});

@@ -95,16 +95,16 @@ describe('runStudy on the invented demo study', () => {
       const crit = s.rows.find((r) => r.aircraft === s.criticalAircraft)!;
       expect(crit.regularUse).toBe(true);
       expect(s.recommendedLength_m! % 50).toBe(0);
-      expect(s.recommendedLength_m!).toBeGreaterThanOrEqual(crit.required_m);
-      expect(s.recommendedLength_m! - crit.required_m).toBeLessThan(50);
-      for (const r of s.rows) if (r.regularUse && r.status === 'ok') expect(r.required_m).toBeLessThanOrEqual(crit.required_m);
+      expect(s.recommendedLength_m!).toBeGreaterThanOrEqual(crit.required_m!);
+      expect(s.recommendedLength_m! - crit.required_m!).toBeLessThan(50);
+      for (const r of s.rows) if (r.regularUse && r.status === 'ok') expect(r.required_m).toBeLessThanOrEqual(crit.required_m!);
     }
   });
   it('takes the required length as the greater of takeoff and landing and names the side', () => {
     for (const s of result.scenarios) {
       for (const r of s.rows.filter((x) => x.status === 'ok')) {
-        expect(r.required_m).toBe(Math.max(r.requiredTakeoff_m, r.requiredLanding_m));
-        expect(r.governing).toBe(r.requiredTakeoff_m >= r.requiredLanding_m ? 'takeoff' : 'landing');
+        expect(r.required_m).toBe(Math.max(r.requiredTakeoff_m!, r.requiredLanding_m!));
+        expect(r.governing).toBe(r.requiredTakeoff_m! >= r.requiredLanding_m! ? 'takeoff' : 'landing');
       }
     }
   });

@@ -7,6 +7,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { getAircraft, openDatabase, seedDemoIfEmpty } from '../../../db/index.js';
+import { commitCatalogue } from '../../../server/catalogue.js';
 import { aircraftToCsv } from '../../../server/io/csv.js';
 import { ImportError } from '../../../server/io/errors.js';
 import { inlineJobs, workerJobs } from '../../../server/jobs/index.js';
@@ -28,7 +29,7 @@ describe('worker-thread job pool', () => {
     expect((err as ImportError).problems.length).toBeGreaterThan(0);
   });
 
-  it('imports a catalogue into a database file on its own connection; a bad file changes nothing', async () => {
+  it('parses a catalogue in the worker (no database there) and the main thread commits the rows; a bad file is refused', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'runwright-jobs-'));
     const dbFile = join(dir, 'cat.sqlite');
     const { db, sqlite } = openDatabase(dbFile);
@@ -36,13 +37,14 @@ describe('worker-thread job pool', () => {
       seedDemoIfEmpty(db, demoInput());
       const jet = { ...demoInput().aircraft.find((a) => a.id === 'swift-bj8')!, id: 'swift-w', name: 'Swift W' };
       const csv = aircraftToCsv([jet]);
-      const bad = await pool.run('catalogue', { dbFile, format: 'csv', data: new TextEncoder().encode(csv.replace(`,${jet.mtow_kg},`, ',12,')), replace: false }).catch((e: unknown) => e);
+      const bad = await pool.run('catalogue', { format: 'csv', data: new TextEncoder().encode(csv.replace(`,${jet.mtow_kg},`, ',12,')) }).catch((e: unknown) => e);
       expect(bad).toBeInstanceOf(ImportError);
+      const parsed = await pool.run('catalogue', { format: 'csv', data: new TextEncoder().encode(csv) });
+      // What came back is plain validated rows: the worker wrote nothing.
+      expect(parsed.rows.count).toBe(1);
       expect(getAircraft(db, 'swift-w')).toBeUndefined();
-      const ok = await pool.run('catalogue', { dbFile, format: 'csv', data: new TextEncoder().encode(csv), replace: false });
-      expect(ok.created).toEqual(['swift-w']);
-      // The server's own connection sees the worker's commit.
-      expect(getAircraft(db, 'swift-w')?.name).toBe('Swift W');
+      expect(commitCatalogue(db, parsed).created).toEqual(['swift-w']);
+      expect(getAircraft(db, 'swift-w')).toEqual(jet);
     } finally {
       sqlite.close();
       rmSync(dir, { recursive: true, force: true });

@@ -1,0 +1,1 @@
+CREATE INDEX `aircraft_name_order` ON `aircraft` (`name`,`id`);

@@ -48,6 +48,10 @@ export interface CruiseData {
   readonly taxiFuel_kg: number;
   /** Contingency fuel as a fraction of trip fuel (0.05 = 5 %). */
   readonly contingencyFraction: number;
+  /** Fuel flow in holding, kg/h (default: from the hold lift-to-drag ratio). */
+  readonly holdFuelFlow_kgph?: number;
+  /** Fuel for climb and descent beyond the cruise estimate, as a fraction of the takeoff mass. */
+  readonly climbDescentFraction?: number;
 }
 
 /** A small table of reference takeoff lengths by mass × elevation × temperature. */
@@ -146,6 +150,28 @@ export interface AircraftProfile {
 
   /** Light aircraft: factor applied to the unfactored landing and takeoff distances (1.0–2.0). */
   readonly lightAircraftFactor?: number;
+  /** Zero-lift drag, takeoff flaps, gear up (default: cd0Takeoff less the statistical gear increment). */
+  readonly cd0TakeoffGearUp?: number;
+  /** Time from lift-off to gear fully up, s. */
+  readonly gearRetractionTime_s?: number;
+  /** VMCA, minimum control speed in the air (CAS), m/s. */
+  readonly vmca_mps?: number;
+  /** VMU / VS1 (minimum unstick speed factor). */
+  readonly vmuFactor?: number;
+  /** Thrust or power held to ISA + this deviation at every pressure altitude, K. */
+  readonly flatRatingDeltaIsa_k?: number;
+  /** Fall of the flat-rating corner temperature with pressure altitude (corner form), K per km. */
+  readonly flatRatingCornerLapse_kPerKm?: number;
+  /** Static figure of merit of the propeller (ideal static power / shaft power). */
+  readonly propFigureOfMerit?: number;
+  /** Greatest energy the brakes may absorb in a rejected takeoff, J. */
+  readonly maxBrakeEnergy_J?: number;
+  /** Tyre speed rating (groundspeed), m/s. */
+  readonly tyreSpeedLimit_mps?: number;
+  /** Time from V1 to the full stopping configuration (throttles, brakes, spoilers), s. */
+  readonly stopActivationTime_s?: number;
+  /** Touchdown speed as a fraction of VREF. */
+  readonly touchdownFactor?: number;
 
   readonly cruise?: CruiseData;
   readonly reference?: ReferenceLengths;
@@ -153,7 +179,8 @@ export interface AircraftProfile {
 
 export type QuantityKind =
   | 'length' | 'shortLength' | 'mass' | 'area' | 'force' | 'power' | 'speed' | 'temperature'
-  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude' | 'distance';
+  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude' | 'distance' | 'temperatureDelta'
+  | 'energy' | 'massFlow';
 
 export type FieldGroup =
   | 'identity' | 'weights' | 'geometry' | 'aerodynamics' | 'propulsion' | 'ground' | 'speeds'
@@ -220,6 +247,17 @@ export const AIRCRAFT_FIELDS: readonly FieldSpec[] = [
   f('tailUpSpeed_mps', 'Tail-up speed', 'tailwheel', 'speed', 'm/s', 5, 60, 'tailwheel', 'Speed at which the tail is raised.'),
   f('threePointCl', 'Three-point lift coefficient', 'tailwheel', 'ratio', '', 0.3, 2.0, 'tailwheel', 'CL in the three-point attitude.'),
   f('lightAircraftFactor', 'Light-aircraft distance factor', 'ground', 'ratio', '', 1.0, 2.0, 'optional', 'Factor on the unfactored distances for normal-category aircraft (default 1.0).'),
+  f('cd0TakeoffGearUp', 'CD0, takeoff, gear up', 'aerodynamics', 'ratio', '', 0.01, 0.2, 'optional', 'Zero-lift drag, takeoff flaps, gear up (default: CD0 takeoff less the statistical gear increment).'),
+  f('gearRetractionTime_s', 'Gear retraction time', 'times', 'time', 's', 2, 15, 'optional', 'Time from lift-off to gear fully up.'),
+  f('vmca_mps', 'Minimum control speed, air', 'speeds', 'speed', 'm/s', 10, 90, 'optional', 'VMCA (CAS); bounds VR and V2 by 14 CFR 25.107.'),
+  f('vmuFactor', 'VMU / VS1', 'speeds', 'ratio', '', 1.0, 1.3, 'optional', 'Minimum unstick speed as a multiple of the takeoff stall speed.'),
+  f('flatRatingDeltaIsa_k', 'Flat rating, ISA deviation', 'propulsion', 'temperatureDelta', 'K', 0, 40, 'optional', 'Rated thrust or power held to ISA + this deviation at every pressure altitude.'),
+  f('flatRatingCornerLapse_kPerKm', 'Flat-rating corner lapse (K/km)', 'propulsion', 'ratio', 'K/km', 0, 10, 'optional', 'Fall of the corner temperature (from the flat-rating temperature at sea level) per km of pressure altitude.'),
+  f('propFigureOfMerit', 'Propeller figure of merit', 'propulsion', 'ratio', '', 0.3, 0.85, 'optional', 'Static figure of merit: ideal static power over shaft power.'),
+  f('maxBrakeEnergy_J', 'Brake energy limit', 'ground', 'energy', 'J', 100000, 500000000, 'optional', 'Greatest energy all brakes may absorb in a rejected takeoff.'),
+  f('tyreSpeedLimit_mps', 'Tyre speed limit', 'ground', 'speed', 'm/s', 30, 130, 'optional', 'Tyre speed rating, as groundspeed.'),
+  f('stopActivationTime_s', 'Stop activation time', 'times', 'time', 's', 0, 4, 'optional', 'Time from V1 to full stopping configuration (throttles, brakes, spoilers), before the 2 s allowance.'),
+  f('touchdownFactor', 'VTD / VREF', 'speeds', 'ratio', '', 0.85, 1.0, 'optional', 'Touchdown speed as a fraction of VREF.'),
 ];
 
 export const CRUISE_FIELDS: readonly FieldSpec[] = [
@@ -232,6 +270,8 @@ export const CRUISE_FIELDS: readonly FieldSpec[] = [
   f('cruisePropEfficiency', 'Propeller efficiency, cruise', 'route', 'ratio', '', 0.5, 0.92, 'propeller', 'η_p in cruise.'),
   f('taxiFuel_kg', 'Taxi fuel', 'route', 'mass', 'kg', 0, 2000, 'always', 'Fuel burnt before brake release.'),
   f('contingencyFraction', 'Contingency fuel', 'route', 'ratio', '', 0, 0.2, 'always', 'Contingency as a fraction of trip fuel.'),
+  f('holdFuelFlow_kgph', 'Holding fuel flow', 'route', 'massFlow', 'kg/h', 20, 20000, 'optional', 'Fuel flow in holding (default: from the hold lift-to-drag ratio).'),
+  f('climbDescentFraction', 'Climb and descent allowance', 'route', 'ratio', '', 0, 0.05, 'optional', 'Fuel for climb and descent beyond the cruise estimate, as a fraction of the takeoff mass.'),
 ];
 
 const HAS_PROP = (t: EngineType): boolean => t !== 'turbofan';
@@ -248,6 +288,7 @@ function required(spec: FieldSpec, a: AircraftProfile): boolean {
 }
 
 function cruiseRequired(spec: FieldSpec, a: AircraftProfile): boolean {
+  if (spec.when === 'optional') return false;
   if (spec.when === 'turbofan') return a.engineType === 'turbofan';
   if (spec.when === 'propeller') return HAS_PROP(a.engineType);
   return true;

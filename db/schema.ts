@@ -78,6 +78,17 @@ export const aircraft = sqliteTable(
     tailUpSpeed_mps: real('tail_up_speed_mps'),
     threePointCl: real('three_point_cl'),
     lightAircraftFactor: real('light_aircraft_factor'),
+    cd0TakeoffGearUp: real('cd0_takeoff_gear_up'),
+    gearRetractionTime_s: real('gear_retraction_time_s'),
+    vmca_mps: real('vmca_mps'),
+    vmuFactor: real('vmu_factor'),
+    flatRatingDeltaIsa_k: real('flat_rating_delta_isa_k'),
+    flatRatingCornerLapse_kPerKm: real('flat_rating_corner_lapse_k_per_km'),
+    propFigureOfMerit: real('prop_figure_of_merit'),
+    maxBrakeEnergy_J: real('max_brake_energy_j'),
+    tyreSpeedLimit_mps: real('tyre_speed_limit_mps'),
+    stopActivationTime_s: real('stop_activation_time_s'),
+    touchdownFactor: real('touchdown_factor'),
 
     /** Cruise data is present when `cruise_speed_mps` is not null. */
     cruiseSpeed_mps: real('cruise_speed_mps'),
@@ -89,6 +100,8 @@ export const aircraft = sqliteTable(
     cruisePropEfficiency: real('cruise_prop_efficiency'),
     cruiseTaxiFuel_kg: real('cruise_taxi_fuel_kg'),
     cruiseContingencyFraction: real('cruise_contingency_fraction'),
+    cruiseHoldFuelFlow_kgph: real('cruise_hold_fuel_flow_kgph'),
+    cruiseClimbDescentFraction: real('cruise_climb_descent_fraction'),
 
     referenceTakeoff_m: real('reference_takeoff_m'),
     referenceLanding_m: real('reference_landing_m'),
@@ -188,6 +201,8 @@ export const studies = sqliteTable(
     passengerMass_kg: real('passenger_mass_kg').notNull(),
     landingTemperature: text('landing_temperature', { enum: ['isa', 'design'] }).notNull(),
     landingMass: text('landing_mass', { enum: ['mlw', 'route'] }).notNull().default('mlw'),
+    /** Operating rule set (null: the default, 'us-121'). */
+    operatingRules: text('operating_rules', { enum: ['us-121', 'us-135-eod', 'us-91', 'eu-cat'] }),
   },
   (t) => [index('studies_site').on(t.siteId)],
 );

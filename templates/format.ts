@@ -48,6 +48,8 @@ const UNITS: Record<UnitSystem, Record<DisplayKind, UnitDef>> = {
     distance: lin('km', 1000, 0),
     slopePct: lin('%', 0.01, 2),
     temperatureDelta: lin('K', 1, 1),
+    energy: lin('MJ', 1e6, 1),
+    massFlow: lin('kg/h', 1, 0),
   },
   us: {
     length: lin('ft', FT, 0),
@@ -67,6 +69,9 @@ const UNITS: Record<UnitSystem, Record<DisplayKind, UnitDef>> = {
     distance: lin('NM', NM, 0),
     slopePct: lin('%', 0.01, 2),
     temperatureDelta: lin('°F', 1 / 1.8, 1),
+    // 1 ft·lbf = 0.3048 m × 4.4482216152605 N (exact definitions).
+    energy: lin('million ft·lbf', 1e6 * FT * LBF, 1),
+    massFlow: lin('lb/h', LB, 0),
   },
 };
 

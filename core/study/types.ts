@@ -101,7 +101,13 @@ export interface StudyOptions {
   readonly landingTemperature: 'isa' | 'design';
   /** Landing mass: maximum landing mass (default, conservative) or the arrival mass of the design route. */
   readonly landingMass: 'mlw' | 'route';
+  /** Operating rule set for the landing factors (default 'us-121'; core/landing.ts). */
+  readonly operatingRules?: OperatingRuleSet;
 }
+
+/** Operating rule sets: US Part 121, Part 135 eligible on-demand, Part 91 unfactored, European CAT. */
+export type OperatingRuleSet = 'us-121' | 'us-135-eod' | 'us-91' | 'eu-cat';
+export const OPERATING_RULE_SETS: readonly OperatingRuleSet[] = ['us-121', 'us-135-eod', 'us-91', 'eu-cat'];
 
 export interface StudyInput {
   readonly name: string;

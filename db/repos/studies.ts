@@ -77,6 +77,7 @@ function optionsToColumns(o: StudyOptions) {
     passengerMass_kg: o.passengerMass_kg,
     landingTemperature: o.landingTemperature,
     landingMass: o.landingMass,
+    operatingRules: o.operatingRules ?? null,
   };
 }
 
@@ -96,6 +97,7 @@ function columnsToOptions(r: StudyRow): StudyOptions {
     passengerMass_kg: r.passengerMass_kg,
     landingTemperature: r.landingTemperature,
     landingMass: r.landingMass,
+    ...(r.operatingRules === null ? {} : { operatingRules: r.operatingRules }),
   };
 }
 

@@ -17,7 +17,7 @@ export type FormResult<T> = { readonly ok: true; readonly value: T } | { readonl
 
 function requiredFor(f: AircraftFormField, ctx: { engineType?: EngineType; gear?: string; engineCount?: number; hasCruise: boolean }): boolean {
   if (f.section === 'route') {
-    if (!ctx.hasCruise) return false;
+    if (!ctx.hasCruise || f.when === 'optional') return false;
     if (f.when === 'turbofan') return ctx.engineType === 'turbofan';
     if (f.when === 'propeller') return ctx.engineType !== undefined && ctx.engineType !== 'turbofan';
     return true;

@@ -323,6 +323,9 @@ export function validateAircraft(a: AircraftProfile, path = 'aircraft'): Aircraf
   check(a.oew_kg + a.maxPayload_kg <= a.mtow_kg, `${path}.maxPayload_kg`, a.maxPayload_kg, `at most MTOW − OEW (${a.mtow_kg - a.oew_kg} kg)`);
   check(a.vlofFactor > a.vrFactor, `${path}.vlofFactor`, a.vlofFactor, `greater than VR / VS1 (${a.vrFactor})`);
   check(a.v2Factor >= a.vlofFactor, `${path}.v2Factor`, a.v2Factor, `at least VLOF / VS1 (${a.vlofFactor})`);
+  if (a.cd0TakeoffGearUp !== undefined) {
+    check(a.cd0TakeoffGearUp < a.cd0Takeoff, `${path}.cd0TakeoffGearUp`, a.cd0TakeoffGearUp, `less than CD0 takeoff with the gear down (${a.cd0Takeoff})`);
+  }
   check(a.clMaxLanding >= a.clMaxTakeoff, `${path}.clMaxLanding`, a.clMaxLanding, `at least CLmax takeoff (${a.clMaxTakeoff})`);
   check(a.clGround < a.clMaxTakeoff, `${path}.clGround`, a.clGround, `less than CLmax takeoff (${a.clMaxTakeoff})`);
   check(a.brakingFrictionWet <= a.brakingFrictionDry, `${path}.brakingFrictionWet`, a.brakingFrictionWet, `at most the dry braking friction (${a.brakingFrictionDry})`);

@@ -17,7 +17,9 @@
  * brackets the factor. A factor at which the model is infeasible (e.g. cannot reach lift-off) counts
  * as an infinitely long requirement: its residual is a large positive number, which keeps the bracket
  * valid. Stops when |L_model − L_ref| ≤ CALIBRATION_LENGTH_TOL_M or the bracket is narrower than
- * CALIBRATION_FACTOR_TOL; ConvergenceError after CALIBRATION_MAX_ITERATIONS.
+ * CALIBRATION_FACTOR_TOL; ConvergenceError after CALIBRATION_MAX_ITERATIONS. A root where the model
+ * jumps from a finite length to infeasible (the reference is longer than any length it gives) leaves a
+ * residual above CALIBRATION_EDGE_TOL of the reference and is refused ('no-solution').
  *
  * Refusals are results, not exceptions: no reference length; a factor outside the plausible band
  * (default 0.7–1.3: the calibrated model would no longer be a plausible description of the aircraft,
@@ -43,6 +45,8 @@ export const CALIBRATION_METHOD_VERSION = 'calibration/1';
 export const DEFAULT_CALIBRATION_BAND = { min: 0.7, max: 1.3 } as const;
 /** Length tolerance: the fit stops when the model is within this of the reference, m. */
 export const CALIBRATION_LENGTH_TOL_M = 0.05;
+/** Largest relative residual of a fitted factor; above it the root is the edge of feasibility, not a fit. */
+export const CALIBRATION_EDGE_TOL = 0.01;
 /** Factor tolerance: the fit stops when the bracket is narrower than this. */
 export const CALIBRATION_FACTOR_TOL = 1e-6;
 /** Iteration cap of the fit (ConvergenceError beyond). */
@@ -254,6 +258,16 @@ function fit<P extends string>(s: FitSpec<P>): CalibrationOk<P> | CalibrationRef
     throw new Error(`internal: ${s.operation} model infeasible at the fitted factor ${k}`);
   }
   const res = L - ref;
+  if (Math.abs(res) > CALIBRATION_EDGE_TOL * ref) {
+    // The root sits on the edge where the model turns infeasible (a reasoned climb or air-distance
+    // limit, not a length): the longest length the model gives falls short of the reference.
+    return {
+      ...common, status: 'refused', reason: 'no-solution', reference_m: ref,
+      ...(uncal !== undefined ? { uncalibrated_m: uncal } : {}),
+      message: `The reference ${s.operation} length ${ref.toFixed(0)} m is longer than any the model gives before it becomes infeasible ` +
+        `(${L.toFixed(0)} m at a ${s.label} of ${k.toFixed(3)}, at the edge of its climb capability); no factor reproduces it. Check the profile or the reference length.`,
+    };
+  }
   s.trace.push({ label: `Fitted ${s.label}`, value: k, unit: '' });
   s.trace.push({ label: 'Model length with the fitted factor', value: L, unit: 'm' });
   s.trace.push({ label: 'Residual (model − reference)', value: res, unit: 'm' });

@@ -130,7 +130,7 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
       'W_TO ≤ MTOW,   fuel ≤ maximum fuel,   arrival ≤ MLW,   payload ≤ maximum payload',
     ],
     symbols: 'c_T = TSFC (1/s); c_P = BSFC·g (1/m); Φ, Λ grow with stage length s (closed form, no iteration).',
-    limits: 'No climb, descent or wind; constant L/D and consumption. Reserve policies follow 14 CFR 121.639 / 121.645 in simplified form.',
+    limits: 'Climb and descent as one allowance (a fraction of the takeoff mass; engine-type default from common practice); no wind; constant L/D and consumption. Reserve policies follow 14 CFR 121.639 / 121.645 in simplified form, with a 200 NM alternate by default (common practice).',
     sources: ['AEDB', 'CFR121'],
     doc: 'route.md',
     docAnchors: ['R = (V / c_T) · (L/D) · ln(W_i / W_f)', 'W_TO    = A · x', '121.645(b)'],
@@ -139,18 +139,20 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     id: 'propulsion',
     title: 'Thrust and power at the site',
     summary:
-      'Turbofan thrust lapses with Mach number and ambient conditions and is held up to the flat-rating temperature. ' +
-      'Piston and turboprop shaft power lapse with density; propeller thrust is η·P/V capped by a static-thrust limit.',
+      'Turbofan thrust lapses with Mach number and ambient conditions and is held up to a flat-rating corner that follows the rating ' +
+      '(ISA + ΔT at the field, or a corner temperature falling with pressure altitude). ' +
+      'Piston and turboprop shaft power lapse with density; propeller thrust runs from a static thrust set by a figure of merit to η·P/V in a smooth, decreasing blend.',
     formulas: [
       'turbofan: α = δ0·(1 − 0.49·√M) for θ0 ≤ TR, else δ0·(1 − 0.49·√M − 3·(θ0 − TR)/(1.5 + M))',
+      'corner: TR = (T_c(Hp) + 273.15)/288.15,   T_c = T_ISA(Hp) + ΔT   or   T_c0 − lapse·Hp/1000',
       'piston: P/P0 = σ − (1 − σ)/7.55;   turboprop: P/P0 = min(1, (σ/σ_flat)^0.7)',
-      'propeller: T = min(η·P/V, k_p·(2·ρ·A·P²)^(1/3)),   A = π·D²/4,   k_p = 0.85',
+      'propeller: T_s = (FM·P)^(2/3)·(2·ρ·A)^(1/3),   A = π·D²/4;   T = η·P/V from V_b = 2·η·P/T_s, cubic blend below',
     ],
-    symbols: 'θ0, δ0 = total temperature and pressure ratios; TR = (T_flat + 273.15)/288.15.',
-    limits: 'Mach up to 0.4. The turboprop exponent and k_p are from memory.',
+    symbols: 'θ0, δ0 = total temperature and pressure ratios; Hp = pressure altitude; FM = propeller figure of merit.',
+    limits: 'Mach up to 0.4. The turboprop exponent and the default figures of merit (0.55 piston, 0.70 turboprop) are from memory.',
     sources: ['MAT', 'BY08', 'GF', 'GUD'],
     doc: 'takeoff.md',
-    docAnchors: ['1 − 0.49√M', 'σ − (1 − σ)/7.55', 'k_p = 0.85'],
+    docAnchors: ['1 − 0.49√M', 'σ − (1 − σ)/7.55', 'T_s = (FM·P)^(2/3)·(2ρA)^(1/3)', 'ISA + ΔT form'],
   },
   {
     id: 'takeoff-ground',
@@ -158,32 +160,36 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     summary:
       'The ground run integrates the equation of motion over speed (Gauss-Legendre quadrature), with ground effect, ' +
       'rolling friction on the wheel load, runway slope and wind; tailwheel aircraft start in a three-point phase. ' +
-      'Rotation takes the profile\'s rotation time; the airborne segment is a transition arc and a climb to the screen ' +
-      'height (35 ft transport and commuter, 50 ft others). An average-force estimate at 0.7 VLOF is shown as a cross-check.',
+      'Rotation takes the profile\'s rotation time. With all engines the airborne segment is a transition arc and a climb to the screen ' +
+      'height (35 ft transport and commuter, 50 ft others); with an engine out it is an energy method over height, with ground effect ' +
+      'fading with height, gear retraction after lift-off and V2 reached by the screen height. Speeds follow 14 CFR 25.107 ' +
+      '(VR at least 1.05 VMCA and V1; V2 floors). An average-force estimate at 0.7 VLOF is shown as a cross-check.',
     formulas: [
       'm·dV/dt = T − D − μ·(W·cosθ − L) − W·sinθ',
       'D = ½·ρ·V²·S·(C_D0 + φ·K·C_L²),   K = 1/(π·AR·e),   φ = (16h/b)²/(1 + (16h/b)²)',
       's = ∫ V dV / a;   cross-check s ≈ VLOF²/(2·a(0.7·VLOF))',
       'transition: R = V_TR²/(0.2·g),   V_TR = (VLOF + V2)/2,   sin γ = (T − D)/W',
+      'engine out: x_air = ∫₀^H (1 + (1/2g)·d(V²)/dh) / ((T − D)/W) dh',
     ],
-    limits: 'Point-mass, quasi-steady model; rotation as a time, not pitch dynamics.',
+    limits: 'Point-mass, quasi-steady model; rotation as a time, not pitch dynamics. Engine-out air distances beyond 1,500 m are reported as a climb limit (project convention).',
     sources: ['RAY', 'GUD', 'AND'],
     doc: 'takeoff.md',
-    docAnchors: ['m·dV/dt = T − D − μ·(W·cosθ − L) − W·sinθ', 'φ = (16h/b)²/(1 + (16h/b)²)', 'R = V_TR²/(0.2g)'],
+    docAnchors: ['m·dV/dt = T − D − μ·(W·cosθ − L) − W·sinθ', 'φ = (16h/b)²/(1 + (16h/b)²)', 'R = V_TR²/(0.2g)', 'x_air = ∫₀^H (1 + (1/2g)·d(V²)/dh) / ((T − D)/W) dh'],
   },
   {
     id: 'takeoff-engine-failure',
     title: 'Engine failure, balanced field and governing distance',
     summary:
       'For multi-engine aircraft the continued takeoff with the critical engine out and the accelerate-stop distance ' +
-      '(recognition time, 2 s at V1, braking with idle thrust, no reverse) are computed for each V1; the balanced V1 is ' +
-      'where they are equal, bounded by the minimum control speed and VR. The certification basis decides the requirement.',
+      '(recognition time, the activation time of the stopping means after V1, 2 s at V1, braking from the highest speed ' +
+      'reached with idle thrust, no reverse) are computed for each V1; the balanced V1 is where they are equal, bounded by ' +
+      'the minimum control speed, VR and, where given, the brake-energy limit. The certification basis decides the requirement.',
     formulas: [
       'transport and commuter: required = max(1.15 × all-engines distance to 35 ft, engine-out distance to 35 ft, accelerate-stop)',
-      'accelerate-stop = run to V1 + 2 s × V1 + braking to rest',
+      'accelerate-stop = run to V1 + activation (V1·t + ½·a·t²) + 2 s × V1 + braking to rest from V1 + a·t',
       'normal category: required = all-engines distance to 50 ft × light-aircraft factor',
     ],
-    limits: 'Dry-runway certification rules on every surface (wet changes friction only); no reverse thrust, VMCA or brake-energy limits.',
+    limits: 'Dry-runway certification rules on every surface (wet changes friction only); no reverse thrust. Default activation time 1 s (AC 25-7, from memory).',
     sources: ['CFR25', 'CFR23'],
     doc: 'takeoff.md',
     docAnchors: ['max(1.15 × all-engines to 35 ft, engine-out continued to 35 ft, accelerate-stop)', '2 s × V1'],
@@ -192,12 +198,13 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     id: 'climb',
     title: 'Engine-out climb gradient',
     summary:
-      'The climb gradient at V2 with one engine inoperative (gear up, takeoff flaps) is compared with the regulatory ' +
-      'minimum. Below it the aircraft is climb-limited: the greatest mass that meets the minimum is reported, and a ' +
-      'longer runway cannot cure it.',
+      'The climb gradient at V2 with one engine inoperative (gear up, takeoff flaps; second segment) and at lift-off ' +
+      'with the gear down (first segment) are compared with the minima of the certification basis. Below either the ' +
+      'aircraft is climb-limited: the greatest mass that meets both is reported, and a longer runway cannot cure it.',
     formulas: [
       'sin γ = (T − D)/W at V2,   C_L = CLmax/(V2/VS1)²',
-      'minimum gradient 2.4 / 2.7 / 3.0 % for 2 / 3 / 4 engines (transport; from memory)',
+      'minimum gradient 2.4 / 2.7 / 3.0 % for 2 / 3 / 4 engines (transport; from memory); commuter 2.0 %',
+      'first segment (gear down, VLOF): positive / 0.3 % / 0.5 % (transport; from memory)',
     ],
     sources: ['CFR25', 'AND'],
     doc: 'takeoff.md',

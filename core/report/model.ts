@@ -364,7 +364,7 @@ function methodIntroBlocks(result: StudyResult): Block[] {
   const o = result.options;
   const reserves = o.reserves.policy === 'custom'
     ? `custom (alternate ${o.reserves.alternate_km ?? 0} km, ${o.reserves.holding_min ?? 0} min)`
-    : o.reserves.policy === 'international' ? 'international (10 % trip time, alternate, 30 min hold)' : 'cruise plus 45 minutes';
+    : o.reserves.policy === 'international' ? 'international (10 % trip time, alternate, 30 min hold)' : `cruise plus alternate (${o.reserves.alternate_km ?? 370.4} km${o.reserves.alternate_km === undefined ? ', 200 NM default' : ''}) plus 45 minutes`;
   return [
     { type: 'paragraph', text: `Method version ${result.methodVersion}. Each aircraft is sized at the site's design conditions from first-principles performance models and published correction methods; this section states the models, their formulas and their published sources. The references are listed at the end of the section.` },
     { type: 'facts', items: [

@@ -8,7 +8,8 @@
  * (reserves.ts) and the Breguet forms of §9.1 (breguet.ts). All solves are closed form (model.ts).
  *
  * Validity: stage length 1 km to 20 000 km; payload 0 to the structural maximum; takeoff mass above 0
- * and at most MTOW. Results are planning estimates: trip time and fuel ignore climb, descent and wind.
+ * and at most MTOW. Results are planning estimates: trip fuel is Breguet cruise over the stage plus a
+ * climb/descent allowance (model.ts); trip time is stage / cruise TAS; no wind.
  */
 import type { AircraftProfile } from '../aircraft.js';
 import { finite, inRange } from '../validate.js';
@@ -80,7 +81,10 @@ function loadingTrace(l: RouteLoading): RouteTraceItem[] {
     { key: 'reserveFuel_kg', label: 'Reserve fuel (alternate + final reserve)', value: l.reserveFuel_kg, unit: 'kg' },
     { key: 'contingencyFuel_kg', label: 'Contingency fuel', value: l.contingencyFuel_kg, unit: 'kg' },
     { key: 'arrivalMass_kg', label: 'Arrival (landing) mass', value: l.arrivalMass_kg, unit: 'kg' },
-    { key: 'tripFuel_kg', label: 'Trip fuel', value: l.tripFuel_kg, unit: 'kg' },
+    { key: 'cruiseFuel_kg', label: 'Cruise fuel (Breguet over the stage)', value: l.cruiseFuel_kg, unit: 'kg' },
+    { key: 'climbDescentFuel_kg', label: 'Climb/descent allowance', value: l.climbDescentFuel_kg, unit: 'kg' },
+    { key: 'tripFuel_kg', label: 'Trip fuel (cruise + climb/descent)', value: l.tripFuel_kg, unit: 'kg' },
+    { key: 'blockFuel_kg', label: 'Block fuel (taxi + trip)', value: l.blockFuel_kg, unit: 'kg' },
     { key: 'takeoffMass_kg', label: 'Takeoff (brake-release) mass', value: l.takeoffMass_kg, unit: 'kg' },
     { key: 'rampMass_kg', label: 'Ramp mass', value: l.rampMass_kg, unit: 'kg' },
   ];
@@ -157,7 +161,7 @@ export function designTakeoffMass(input: DesignTakeoffMassInput): RouteResult {
     ...routeModelTrace(m),
     { key: 'stageLength_m', label: 'Stage length', value: s, unit: 'm' },
     { key: 'requestedPayload_kg', label: 'Requested payload', value: P, unit: 'kg' },
-    { key: 'phi', label: 'W_TO / W_ZF for the stage', value: f.finite ? f.phi : 0, unit: '' },
+    { key: 'phi', label: 'W_TO / (W_ZF + fixed-flow holding fuel) for the stage', value: f.finite ? f.phi : 0, unit: '' },
     ...loadingTrace(loading),
   ];
   if (status !== 'ok') warnings.push(reason!);

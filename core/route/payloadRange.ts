@@ -12,7 +12,7 @@
  * with B; when full tanks cannot be loaded within MTOW even empty, C coincides with D; an MLW limit
  * may shorten a segment. Each corner names its binding limit.
  *
- * Validity: as the fuel model (stage 0–20 000 km, no climb, descent or wind).
+ * Validity: as the fuel model (stage 0–20 000 km, no wind; climb/descent as an allowance).
  */
 import type { AircraftProfile } from '../aircraft.js';
 import { finite, inRange } from '../validate.js';
@@ -41,6 +41,8 @@ export interface PayloadRangePoint {
   /** Fuel loaded at the ramp (takeoff fuel + taxi), kg. */
   readonly rampFuel_kg: number;
   readonly tripFuel_kg: number;
+  /** Block fuel, ramp to landing: taxi + trip, kg. */
+  readonly blockFuel_kg: number;
   readonly arrivalMass_kg: number;
   /** The limit that sets the payload at this stage (the first on a tie: max-payload, mtow, max-fuel, mlw). */
   readonly limitedBy: RouteLimit;
@@ -90,6 +92,7 @@ function pointAt(m: RouteFuelModel, stage_m: number): PayloadRangePoint | null {
     takeoffFuel_kg: finite('takeoffFuel_kg', l.takeoffFuel_kg),
     rampFuel_kg: finite('rampFuel_kg', l.rampFuel_kg),
     tripFuel_kg: finite('tripFuel_kg', l.tripFuel_kg),
+    blockFuel_kg: finite('blockFuel_kg', l.blockFuel_kg),
     arrivalMass_kg: finite('arrivalMass_kg', l.arrivalMass_kg),
     limitedBy: cap.limitedBy,
     activeLimits: cap.activeLimits,
@@ -123,7 +126,7 @@ export function payloadRangeDiagram(input: PayloadRangeInput): PayloadRangeDiagr
     const l = routeLoading(m, 0, m.oew_kg);
     const p: PayloadRangePoint = {
       stageLength_m: 0, payload_kg: 0, zeroFuelMass_kg: l.zeroFuelMass_kg, takeoffMass_kg: l.takeoffMass_kg,
-      takeoffFuel_kg: l.takeoffFuel_kg, rampFuel_kg: l.rampFuel_kg, tripFuel_kg: 0, arrivalMass_kg: l.arrivalMass_kg,
+      takeoffFuel_kg: l.takeoffFuel_kg, rampFuel_kg: l.rampFuel_kg, tripFuel_kg: l.tripFuel_kg, blockFuel_kg: l.blockFuel_kg, arrivalMass_kg: l.arrivalMass_kg,
       limitedBy: routeCapacity(m, 0, m.mtow_kg).limitedBy,
       activeLimits: routeCapacity(m, 0, m.mtow_kg).activeLimits,
     };
@@ -150,7 +153,7 @@ export function payloadRangeDiagram(input: PayloadRangeInput): PayloadRangeDiagr
   } else if (Wc <= m.oew_kg) {
     sC = sD; cWith = 'D';
   } else {
-    const s = routeStageForPhi(m, m.mtow_kg / Wc);
+    const s = routeStageForPhi(m, m.mtow_kg / (Wc + m.holdFuel_kg));
     sC = Math.min(sD, Math.max(sB, s ?? 0));
     if (s === null || s < sB || s > sD) {
       warnings.push('Corner C (MTOW with full tanks) is cut by another limit; it is shown at the nearest reachable stage.');

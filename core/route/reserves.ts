@@ -2,12 +2,15 @@
  * Reserve-fuel policies for the design takeoff mass (planning, not dispatch).
  *
  * Sources (domain-reference.md §9.2):
- * - 'cruise-45min': fuel to the destination, to an alternate when one is named, then 45 minutes at
- *   normal cruise — the shape of 14 CFR 121.639 (domestic) and 91.167 (IFR, Part 91).
+ * - 'cruise-45min': fuel to the destination, then to the most distant alternate, then 45 minutes at
+ *   normal cruise — the shape of 14 CFR 121.639 (domestic) and 91.167 (IFR, Part 91). Both rules carry
+ *   an alternate whenever one is required, so the policy carries one by default: 200 NM = 370.4 km when
+ *   none is given (from memory / common practice for planning studies, not a rule). An explicit 0 m
+ *   means no alternate (e.g. a destination whose weather makes one unnecessary).
  * - 'international': fuel to the destination, then 10 % of the trip time, then to the alternate, then
  *   30 minutes holding at 1500 ft above the alternate — the shape of 14 CFR 121.645(b) (flag and
  *   supplemental, turbine-engined aircraft other than turboprops). Default alternate distance
- *   200 NM = 370.4 km (common practice for planning studies, not a rule).
+ *   200 NM = 370.4 km (from memory / common practice for planning studies, not a rule).
  * - 'custom': an alternate distance, a reserve time flown either in the hold or at normal cruise, and
  *   a contingency fraction of trip fuel (covers e.g. 91.151 VFR 30/45 minutes, or the 121.643(c)
  *   three hours at normal cruise).
@@ -34,7 +37,7 @@ export type ReserveFlight = 'hold' | 'cruise';
 export type ReservePolicy =
   | {
       readonly kind: 'cruise-45min';
-      /** Distance to the alternate, m (default 0: no alternate required). */
+      /** Distance to the alternate, m (default 370 400 m = 200 NM, from memory / common practice; 0 for none). */
       readonly alternateDistance_m?: number;
     }
   | {
@@ -60,7 +63,7 @@ export type ReservePolicy =
 export const RESERVE_POLICY_INFO: Readonly<Record<ReservePolicyKind, { readonly label: string; readonly rule: string }>> = {
   'cruise-45min': {
     label: '45 minutes at normal cruise',
-    rule: 'Trip + contingency (aircraft fraction of trip fuel) + alternate (if named) + 45 min at normal cruise; 14 CFR 121.639 / 91.167 style.',
+    rule: 'Trip + contingency (aircraft fraction of trip fuel) + alternate (default 200 NM; 0 for none) + 45 min at normal cruise; 14 CFR 121.639 / 91.167 style.',
   },
   international: {
     label: 'International: 10 % trip time, alternate, 30 min hold',
@@ -72,8 +75,15 @@ export const RESERVE_POLICY_INFO: Readonly<Record<ReservePolicyKind, { readonly 
   },
 };
 
-/** Default alternate distance of the international policy, m (200 NM; common practice). */
-export const INTERNATIONAL_ALTERNATE_DEFAULT_M = 200 * NM;
+/**
+ * Default alternate distance where a policy requires an alternate and none is given, m (200 NM; from
+ * memory / common practice for planning studies, not a rule).
+ */
+export const ALTERNATE_DEFAULT_M = 200 * NM;
+/** Default alternate distance of the international policy, m (ALTERNATE_DEFAULT_M). */
+export const INTERNATIONAL_ALTERNATE_DEFAULT_M = ALTERNATE_DEFAULT_M;
+/** Default alternate distance of the cruise-45min policy (14 CFR 121.639 / 91.167 carry one), m. */
+export const CRUISE_ALTERNATE_DEFAULT_M = ALTERNATE_DEFAULT_M;
 /** Holding time of the international policy, min (14 CFR 121.645(b)). */
 export const INTERNATIONAL_HOLD_MINUTES = 30;
 /** En-route allowance of the international policy as a fraction of trip time (14 CFR 121.645(b)). */
@@ -90,6 +100,8 @@ export const RESERVE_CONTINGENCY_FRACTION_RANGE = CONTINGENCY_FRACTION_RANGE;
 export interface ResolvedReserves {
   readonly kind: ReservePolicyKind;
   readonly alternateDistance_m: number;
+  /** True when the alternate distance is the policy's default (none was given). */
+  readonly alternateDefaulted: boolean;
   /** Reserve time after the alternate leg, s. */
   readonly reserveTime_s: number;
   readonly reserveFlight: ReserveFlight;
@@ -112,7 +124,8 @@ export function resolveReserves(policy: ReservePolicy, aircraftContingency: numb
     case 'cruise-45min':
       return {
         kind: policy.kind,
-        alternateDistance_m: alt(policy.alternateDistance_m, 0),
+        alternateDistance_m: alt(policy.alternateDistance_m, CRUISE_ALTERNATE_DEFAULT_M),
+        alternateDefaulted: policy.alternateDistance_m === undefined,
         reserveTime_s: CRUISE_RESERVE_MINUTES * 60,
         reserveFlight: 'cruise',
         contingency: { basis: 'trip-fuel', fraction: aircraftContingency },
@@ -121,6 +134,7 @@ export function resolveReserves(policy: ReservePolicy, aircraftContingency: numb
       return {
         kind: policy.kind,
         alternateDistance_m: alt(policy.alternateDistance_m, INTERNATIONAL_ALTERNATE_DEFAULT_M),
+        alternateDefaulted: policy.alternateDistance_m === undefined,
         reserveTime_s: minutes(policy.holdMinutes, INTERNATIONAL_HOLD_MINUTES) * 60,
         reserveFlight: 'hold',
         contingency: { basis: 'trip-time', fraction: INTERNATIONAL_TRIP_TIME_FRACTION },
@@ -133,6 +147,7 @@ export function resolveReserves(policy: ReservePolicy, aircraftContingency: numb
       return {
         kind: policy.kind,
         alternateDistance_m: alt(policy.alternateDistance_m, 0),
+        alternateDefaulted: false,
         reserveTime_s: minutes(policy.holdMinutes, 0) * 60,
         reserveFlight: flight,
         contingency: {

@@ -57,7 +57,7 @@ import type {
 } from './types.js';
 
 /** Version of the study engine and the models it calls; changes whenever a number can change. */
-export const STUDY_METHOD_VERSION = 'runwright-methods-2';
+export const STUDY_METHOD_VERSION = 'runwright-methods-3';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = 15;
@@ -366,14 +366,27 @@ function evaluateRow(
   // A climb limit is a finding runway length cannot cure: the aircraft must leave at the climb-limited
   // mass whatever the runway, so the runway is sized at that mass and the offload is reported.
   const climbMass = t.climb.maxMass_kg;
-  const climbBound = (t.feasible ? t.climb.limited : t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out');
-  if (climbBound && climbMass !== undefined && climbMass < mass && climbMass >= a.oew_kg) {
+  const climbBound = t.climb.limited || (!t.feasible && (t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out'));
+  const climbLabel = t.climb.limitingLabel ?? `${t.climb.case} climb at V2`;
+  if (climbBound && (climbMass === undefined || climbMass < a.oew_kg)) {
+    // Missing the minimum even at the operating empty mass: no mass and no runway cures it.
+    warnings.push(...t.warnings);
+    return cannotOperate(base, route, row,
+      `Cannot operate here: the gradient of the ${climbLabel} is ${(t.climb.gradient * 100).toFixed(2)} % at ${Math.round(mass)} kg, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum, and no mass down to the operating empty mass (${Math.round(a.oew_kg)} kg) meets it; a longer runway cannot cure this.`,
+      warnings, mass, routeSum);
+  }
+  if (climbBound && climbMass !== undefined && climbMass < mass) {
     warnings.push(
-      `Climb-limited at the design mass of ${Math.round(mass)} kg: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting it is ${Math.floor(climbMass)} kg (${Math.round(mass - climbMass)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
+      `Climb-limited at the design mass of ${Math.round(mass)} kg: the gradient of the ${climbLabel} is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting every climb minimum is ${Math.floor(climbMass)} kg (${Math.round(mass - climbMass)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
     );
     climbOffload = mass - Math.floor(climbMass);
     mass = Math.floor(climbMass);
     t = ev.takeoff(a, mass, cond);
+    // The climb-limited mass is itself checked: it must meet the minima and be feasible.
+    if (t.feasible && t.climb.limited) {
+      warnings.push(...t.warnings);
+      return cannotOperate(base, route, row, `Cannot operate here: even at the climb-limited mass of ${Math.round(mass)} kg the ${t.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`, warnings, mass, routeSum);
+    }
   }
   warnings.push(...t.warnings);
   if (!t.feasible) {
@@ -398,11 +411,6 @@ function evaluateRow(
     ...(t.empirical.torenbeek_m === undefined ? {} : { torenbeek_m: t.empirical.torenbeek_m }),
     ...(t.empirical.roskam_m === undefined ? {} : { roskam_m: t.empirical.roskam_m }),
   };
-  if (t.climb.limited) {
-    warnings.push(
-      `Climb-limited: the ${t.climb.case} climb gradient at V2 is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum${t.climb.maxMass_kg === undefined ? ' even at the operating empty mass' : ''}. A longer runway cannot cure this.`,
-    );
-  }
   const refSite = {
     elevation_m: ev.site.elevation_m, referenceTemperature_c: ev.site.designTemperature_c,
     effectiveGradient: ev.site.designSlope,
@@ -414,12 +422,16 @@ function evaluateRow(
     const ref = referenceLengthAtSite({ aircraft: a, operation: 'takeoff', site: refSite, set });
     if (ref.status === 'ok') {
       summary.reference_m = ref.length_m;
-      if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
+      if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && ref.specificStudyRequired) {
+        // Beyond the 35 % limit of the percentage corrections (domain reference §1.1) the corrected
+        // length is indicative only and never governs: the physics model sizes the row.
+        warnings.push(...ref.warnings);
+        warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${Math.round(ref.length_m)} m) is shown as indicative only and does not govern; the physics model (${Math.round(t.required_m)} m) sizes this aircraft.`);
+      } else if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
         takeoffRequired = ref.length_m;
         summary.required_m = ref.length_m;
         summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections`;
         warnings.push(...ref.warnings);
-        if (ref.specificStudyRequired) warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'}`);
         warnings.push('Reference-length method: the reference length is at MTOW; the design mass from the route is not credited.');
       }
     }
@@ -457,7 +469,9 @@ function evaluateRow(
   };
   if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && a.reference?.landing_m !== undefined) {
     const ref = referenceLengthAtSite({ aircraft: a, operation: 'landing', site: refSite, set: opts.method === 'reference-authority' ? 'authority' : 'icao' });
-    if (ref.status === 'ok') {
+    if (ref.status === 'ok' && ref.specificStudyRequired) {
+      warnings.push(`Landing: the corrected reference length (${Math.round(ref.length_m)} m) is beyond the 35 % limit of the percentage corrections and is indicative only; the landing model (${Math.round(l.required_m)} m) governs.`);
+    } else if (ref.status === 'ok') {
       landingRequired = ref.length_m;
       landingSummary = { ...landingSummary, required_m: ref.length_m, rule: 'reference length + corrections' };
     }

@@ -5,15 +5,22 @@
  *   VEF: the engine-failure speed from which the engine-out acceleration reaches V1 in the
  *        recognition time (t_OEI(V1) − t_OEI(VEF) = t_rec);
  *   go:   s_AEO(VEF) + [s_OEI(VR) − s_OEI(VEF)] + engine-out rotation + engine-out airborne distance;
- *   stop (25.109(a)(1)): s_AEO(VEF) + [s_OEI(V1) − s_OEI(VEF)] + braking from V1 with idle thrust on the
- *        operating engines (failed engine zero) + 2 s × V1;
- *   stop (25.109(a)(2)): s_AEO(V1) + braking from V1 with all engines idle + 2 s × V1;
+ *   activation: from V1 the stopping means (brakes, throttles, spoilers) take t_act to be in place
+ *        (the profile's demonstrated time, default 1 s; AC 25-7, from memory); meanwhile the aircraft
+ *        keeps the acceleration a it had at V1 (thrust not yet at idle, no braking), covering
+ *        V1·t_act + ½·a·t_act² and reaching V_b = V1 + a·t_act, the highest speed of the stop;
+ *   stop (25.109(a)(1)): s_AEO(VEF) + [s_OEI(V1) − s_OEI(VEF)] + activation (engine-out acceleration) +
+ *        braking from V_b with idle thrust on the operating engines (failed engine zero) + 2 s × V1;
+ *   stop (25.109(a)(2)): s_AEO(V1) + activation (all-engines acceleration) + braking from V_b with all
+ *        engines idle + 2 s × V1;
  *   accelerate-stop = the greater of the two stops.
  * Each s(·) is the cumulative distance of a ground run as a function of speed (quadrature.ts), shared
  * by every candidate V1. go(V1) falls and stop(V1) rises, so the balanced V1 (go = stop) is the root of
  * a smooth monotone function, found by Brent's method. V1 is bounded below by the speed reached when
- * the engine fails at VMCG (VEF ≥ VMCG, 25.107(a)) and above by VR (25.107(e)); when a bound binds,
- * the field length is the greater of go and stop there (unbalanced).
+ * the engine fails at VMCG (VEF ≥ VMCG, 25.107(a)) and above by VR (25.107(e)) and, when the profile
+ * gives a brake energy limit, by the V1 whose stop begins at the speed where ½·m·V_b² equals it (all
+ * the kinetic energy to the brakes: conservative; VMBE). When a bound binds, the field length is the
+ * greater of go and stop there (unbalanced).
  *
  * Validity: engine-out acceleration above MIN_ACCELERATION_MPS2 from VEF to VLOF; stop tables to VR.
  */
@@ -38,6 +45,13 @@ export interface FailureModel {
   readonly vefMinG: number;
   /** Engine-out rotation plus airborne distance (independent of V1), m. */
   readonly goTail_m: number;
+  /** Activation time from V1 to the full stopping configuration, s. */
+  readonly activation_s: number;
+  /** Accelerations at a groundspeed, engine out and all engines, m/s². */
+  readonly accelOei: (vg: number) => number;
+  readonly accelAeo: (vg: number) => number;
+  /** Highest brake-application groundspeed the brakes absorb (from the energy limit), m/s. */
+  readonly brakeSpeedLimit?: number;
 }
 
 export interface FailurePoint {
@@ -49,6 +63,14 @@ export interface FailurePoint {
   readonly stopEngineOut_m: number;
   readonly stopAllEngines_m: number;
   readonly stop_m: number;
+  /** Highest groundspeed of the stop (brake application after the activation time), m/s. */
+  readonly brakeSpeed: number;
+}
+
+/** Brake-application speed after the activation time from V1 at acceleration a. */
+function activation(v1G: number, a: number, t: number): { readonly v: number; readonly d: number } {
+  const acc = a > 0 ? a : 0;
+  return { v: v1G + acc * t, d: v1G * t + 0.5 * acc * t * t };
 }
 
 /** Engine-failure groundspeed matching a V1 groundspeed. */
@@ -66,24 +88,54 @@ export function failurePoint(m: FailureModel, v1G: number): FailurePoint {
   const goGround = sEf + distanceAt(m.oei, m.vrG) - sOefBase;
   const go = goGround + m.goTail_m;
   const allowance = STOP_ALLOWANCE_S * v1G;
-  const stopOei = sEf + distanceAt(m.oei, v1G) - sOefBase + distanceAt(m.stopOei, v1G) + allowance;
-  const stopAeo = distanceAt(m.aeo, v1G) + distanceAt(m.stopAeo, v1G) + allowance;
+  const actOei = activation(v1G, m.accelOei(v1G), m.activation_s);
+  const actAeo = activation(v1G, m.accelAeo(v1G), m.activation_s);
+  const stopOei = sEf + distanceAt(m.oei, v1G) - sOefBase + actOei.d + distanceAt(m.stopOei, actOei.v) + allowance;
+  const stopAeo = distanceAt(m.aeo, v1G) + actAeo.d + distanceAt(m.stopAeo, actAeo.v) + allowance;
   return {
     vefG: vef, v1G, go_m: go, goGround_m: goGround,
     stopEngineOut_m: stopOei, stopAllEngines_m: stopAeo, stop_m: Math.max(stopOei, stopAeo),
+    brakeSpeed: Math.max(actOei.v, actAeo.v),
   };
 }
 
 export type V1Window =
-  | { readonly ok: true; readonly lo: number; readonly hi: number }
-  | { readonly ok: false; readonly v1Min: number | undefined };
+  | { readonly ok: true; readonly lo: number; readonly hi: number; readonly hiBasis: 'vr' | 'vmbe' }
+  | { readonly ok: false; readonly cause: 'vr'; readonly v1Min: number | undefined }
+  | { readonly ok: false; readonly cause: 'vmbe'; readonly v1Min: number; readonly vmbe: number };
 
-/** Allowed V1 groundspeeds: [V1 reached after failure at VMCG, VR]. */
+/** Least V1 groundspeed: the speed reached a recognition time after an engine failure at VMCG. */
+export function v1Minimum(oei: SpeedTable, vefMinG: number, recognition_s: number): number | undefined {
+  return speedAtTime(oei, timeAt(oei, vefMinG) + recognition_s);
+}
+
+/**
+ * V1 groundspeed whose stop begins at the brake speed limit (all-engines acceleration during the
+ * activation time; fixed-point iteration, the acceleration varies slowly with speed).
+ */
+export function v1ForBrakeSpeed(m: FailureModel, vLimit: number): number {
+  let v1 = vLimit;
+  for (let i = 0; i < 30; i++) {
+    const a = Math.max(m.accelAeo(v1), m.accelOei(v1), 0);
+    const next = vLimit - a * m.activation_s;
+    if (Math.abs(next - v1) < 1e-9) return next;
+    v1 = next;
+  }
+  return v1;
+}
+
+/** Allowed V1 groundspeeds: [V1 reached after failure at VMCG, min(VR, VMBE)]. */
 export function v1Window(m: FailureModel): V1Window {
-  const t = timeAt(m.oei, m.vefMinG) + m.recognition_s;
-  const v1Min = speedAtTime(m.oei, t);
-  if (v1Min === undefined || v1Min > m.vrG) return { ok: false, v1Min };
-  return { ok: true, lo: v1Min, hi: m.vrG };
+  const v1Min = v1Minimum(m.oei, m.vefMinG, m.recognition_s);
+  if (v1Min === undefined || v1Min > m.vrG) return { ok: false, cause: 'vr', v1Min };
+  let hi = m.vrG;
+  let hiBasis: 'vr' | 'vmbe' = 'vr';
+  if (m.brakeSpeedLimit !== undefined) {
+    const vmbe = v1ForBrakeSpeed(m, m.brakeSpeedLimit);
+    if (vmbe < v1Min) return { ok: false, cause: 'vmbe', v1Min, vmbe };
+    if (vmbe < hi) { hi = vmbe; hiBasis = 'vmbe'; }
+  }
+  return { ok: true, lo: v1Min, hi, hiBasis };
 }
 
 export interface Balanced {
@@ -94,14 +146,14 @@ export interface Balanced {
   readonly iterations: number;
 }
 
-/** Balanced V1 inside [lo, hi], or the limiting bound. */
-export function balance(m: FailureModel, lo: number, hi: number): Balanced {
+/** Balanced V1 inside [lo, hi], or the limiting bound (hiBasis names what fixed hi). */
+export function balance(m: FailureModel, lo: number, hi: number, hiBasis: 'vr' | 'vmbe' = 'vr'): Balanced {
   const pLo = failurePoint(m, lo);
   const fLo = pLo.go_m - pLo.stop_m;
   if (fLo <= 0) return { point: pLo, basis: 'vmcg', field_m: Math.max(pLo.go_m, pLo.stop_m), iterations: 0 };
   const pHi = failurePoint(m, hi);
   const fHi = pHi.go_m - pHi.stop_m;
-  if (fHi >= 0) return { point: pHi, basis: 'vr', field_m: Math.max(pHi.go_m, pHi.stop_m), iterations: 0 };
+  if (fHi >= 0) return { point: pHi, basis: hiBasis, field_m: Math.max(pHi.go_m, pHi.stop_m), iterations: 0 };
   const r = brentRoot({
     name: 'balanced V1', f: (v) => { const p = failurePoint(m, v); return p.go_m - p.stop_m; },
     lo, hi, fLo, fHi, xTol: V1_TOL_MPS, maxIterations: V1_MAX_ITERATIONS,

@@ -17,15 +17,17 @@
  * Validity: see model.ts (input ranges); dry-runway certification rules applied on every surface
  * (the surface changes friction only). Infeasible physics is a result with a reason, never NaN.
  */
-import { distanceAt, type SpeedTable } from './quadrature.js';
+import { buildSpeedTable, distanceAt, type SpeedTable } from './quadrature.js';
 import {
-  MIN_ACCELERATION_MPS2, rollAcceleration, runTable, stopTable, takeoffSetup, type TakeoffSetup,
+  MIN_ACCELERATION_MPS2, RUN_INTERVALS, rollAcceleration, runTable, stopTable, takeoffSetup, withVrAtLeast,
+  type TakeoffSetup,
 } from './model.js';
-import { airborneDistance, rotationDistance, type AirborneResult } from './airborne.js';
-import { balance, failurePoint, v1Window, type FailureModel } from './balancedField.js';
-import { climbAtV2, climbLimitedMass } from './climb.js';
+import { airborneDistance, rotationDistance } from './airborne.js';
+import { energyAirborne, MAX_ENGINE_OUT_AIR_M, type EnergyAirInput, type EnergyAirResult } from './energyAirborne.js';
+import { balance, failurePoint, v1Minimum, v1Window, type FailureModel } from './balancedField.js';
+import { climbChecks, climbLimitedMass } from './climb.js';
 import {
-  ALL_ENGINES_FACTOR, climbMinimum, takeoffDistance25113, takeoffRun25113,
+  ALL_ENGINES_FACTOR, takeoffDistance25113, takeoffRun25113,
 } from './regulations.js';
 import {
   nm2ToPsf, roskamTop23, roskamTop25, torenbeekBfl, torenbeekGammaMin,
@@ -44,16 +46,20 @@ export type * from './types.js';
 export { takeoffSetup, rollAcceleration, stopDeceleration, TAKEOFF_INPUT_RANGES, MIN_ACCELERATION_MPS2 } from './model.js';
 export type { TakeoffSetup } from './model.js';
 export { airborneDistance, rotationDistance, TRANSITION_LOAD_FACTOR } from './airborne.js';
-export { gearDragIncrement, climbAtV2 } from './climb.js';
+export { gearDragIncrement, gearUpCd0, climbAtV2, firstSegmentAt, climbChecks } from './climb.js';
+export { energyAirborne, MAX_ENGINE_OUT_AIR_M, GEAR_SELECT_DELAY_S, AIR_STEPS } from './energyAirborne.js';
 export {
-  ALL_ENGINES_FACTOR, STOP_ALLOWANCE_S, TAKEOFF_GOVERNING_LABELS, climbMinimum, screenHeight, takeoffDistance25113, takeoffRun25113,
+  ALL_ENGINES_FACTOR, STOP_ALLOWANCE_S, TAKEOFF_GOVERNING_LABELS, climbMinimum, firstSegmentMinimum, v2StallFloor,
+  screenHeight, takeoffDistance25113, takeoffRun25113,
 } from './regulations.js';
 export {
   roskamTop23, roskamTop25, torenbeekBfl, torenbeekMeanThrustPropeller, torenbeekMeanThrustTurbofan,
 } from './empirical.js';
 
 /** Method version stamp carried by every result. */
-export const TAKEOFF_METHOD_VERSION = 'takeoff-1';
+export const TAKEOFF_METHOD_VERSION = 'takeoff-2';
+/** Largest all-engines air distance to the screen accepted, m (project convention, as the engine-out guard). */
+export const MAX_ALL_ENGINES_AIR_M = 1500;
 /** Average-force estimate differing from the integration by more than this (%) is flagged. */
 export const AVERAGE_FORCE_WARN_PCT = 15;
 
@@ -62,16 +68,53 @@ type Failure =
     readonly ok: true;
     readonly model: FailureModel;
     readonly rotation_m: number;
-    readonly airborne: Extract<AirborneResult, { ok: true }>;
+    readonly airborne: Extract<EnergyAirResult, { ok: true }>;
     readonly lo: number;
     readonly hi: number;
+    readonly hiBasis: 'vr' | 'vmbe';
   }
-  | { readonly ok: false; readonly reason: InfeasibleReason; readonly message: string };
+  | { readonly ok: false; readonly reason: InfeasibleReason; readonly message: string }
+  /** The VMCG-based V1 minimum lies above VR: re-run with VR raised to it (25.107(e)(1)(i)). */
+  | { readonly ok: false; readonly raiseVr_mps: number };
 
 const f1 = (x: number): string => x.toFixed(1);
+const pct = (x: number): string => `${(x * 100).toFixed(2)} %`;
+
+/** Highest groundspeed searched for a VMCG-based V1 beyond lift-off speed, as a multiple of VLOF. */
+const V1_SEARCH_VLOF_MULTIPLE = 1.6;
+
+/** Least V1 groundspeed from VMCG, searching past VLOF when needed; undefined when unreachable. */
+function v1MinBeyond(s: TakeoffSetup, oei: SpeedTable, vefMinG: number): number | undefined {
+  const rec = s.aircraft.recognitionTime_s;
+  const inTable = v1Minimum(oei, vefMinG, rec);
+  if (inTable !== undefined) return inTable;
+  const ext = buildSpeedTable({
+    accel: rollAcceleration(s, s.engineCount - 1, s.aircraft.engineOutDrag),
+    vEnd: V1_SEARCH_VLOF_MULTIPLE * s.vlofG,
+    breakpoints: [],
+    zeroAirspeedAt: -s.wind_mps >= 0 ? -s.wind_mps : undefined,
+    intervals: RUN_INTERVALS,
+    minAccel: MIN_ACCELERATION_MPS2,
+  });
+  return ext.ok ? v1Minimum(ext.table, vefMinG, rec) : undefined;
+}
+
+/** Input of the engine-out energy-method air segment for a set-up (also used by the bench). */
+export function engineOutAirInput(s: TakeoffSetup, steps?: number): EnergyAirInput {
+  const a = s.aircraft;
+  const operating = s.engineCount - 1;
+  return {
+    weight_N: s.weight_N, density_kgm3: s.air.density_kgm3, wingArea_m2: s.wingArea_m2, k: s.k,
+    wingHeight_m: a.wingHeight_m, wingspan_m: a.wingspan_m,
+    cd0GearDown: a.cd0Takeoff + a.engineOutDrag, cd0GearUp: s.cd0GearUp + a.engineOutDrag,
+    retractionTime_s: s.retraction_s, thrust: (v) => operating * s.engine.thrust(v),
+    vlof_mps: s.vlof, v2_mps: s.v2, screen_m: s.screen_m, headwind_mps: s.wind_mps,
+    ...(steps === undefined ? {} : { steps }),
+  };
+}
 
 /** Builds the engine-failure model (multi-engine) over the shared all-engines table. */
-function buildFailure(s: TakeoffSetup, aeo: SpeedTable): Failure {
+function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Failure {
   const a = s.aircraft;
   const n = s.engineCount;
   const oeiB = runTable(s, n - 1, a.engineOutDrag);
@@ -82,16 +125,28 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable): Failure {
     };
   }
   const oei = oeiB.table;
-  const air = airborneDistance({
-    weight_N: s.weight_N, thrust_N: (n - 1) * s.engine.thrust(0.5 * (s.vlof + s.v2)),
-    density_kgm3: s.air.density_kgm3, wingArea_m2: s.wingArea_m2, cd0: a.cd0Takeoff + a.engineOutDrag,
-    k: s.k, clMax: s.clMax, vs1_mps: s.vs1, vlof_mps: s.vlof, v2_mps: s.v2, screen_m: s.screen_m,
-    headwind_mps: s.wind_mps,
-  });
+  const vefMinG = Math.max(0, (s.vmcg ?? 0) - s.wind_mps);
+  const v1Min = v1MinBeyond(s, oei, vefMinG);
+  if (v1Min === undefined) {
+    return {
+      ok: false, reason: 'v1-window-empty',
+      message: `No decision speed is possible: after an engine failure at VMCG (${f1(s.vmcg ?? 0)} m/s) the aircraft does not reach a decision speed below ${V1_SEARCH_VLOF_MULTIPLE} × VLOF.`,
+    };
+  }
+  if (v1Min > s.vrG) {
+    if (allowRaise) return { ok: false, raiseVr_mps: v1Min + s.wind_mps };
+    return {
+      ok: false, reason: 'v1-window-empty',
+      message: `No decision speed is possible: the least V1 after an engine failure at VMCG (${f1(v1Min + s.wind_mps)} m/s) stays above VR (${f1(s.vr)} m/s) even with VR raised.`,
+    };
+  }
+  const air = energyAirborne(engineOutAirInput(s));
   if (!air.ok) {
     return {
       ok: false, reason: 'cannot-climb-engine-out',
-      message: `With one engine failed the aircraft cannot climb after lift-off (gradient ${(air.gradient * 100).toFixed(2)} %).`,
+      message: air.cause === 'no-excess-thrust'
+        ? `With one engine failed the aircraft cannot reach V2 (${f1(s.v2)} m/s) by the screen height: thrust no longer exceeds drag at ${f1(air.height_m)} m above the runway (excess thrust ratio ${pct(air.excess)}).`
+        : `With one engine failed the air distance from lift-off to the screen height would exceed ${MAX_ENGINE_OUT_AIR_M} m (least excess thrust ratio ${pct(air.excess)}): the aircraft is at its climb limit here.`,
     };
   }
   const stopOeiB = stopTable(s, n - 1, a.engineOutDrag);
@@ -110,23 +165,70 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable): Failure {
   const model: FailureModel = {
     aeo, oei, stopOei: stopOeiB.table, stopAeo: stopAeoB.table,
     recognition_s: a.recognitionTime_s, vrG: s.vrG,
-    vefMinG: Math.max(0, (s.vmcg ?? 0) - s.wind_mps),
+    vefMinG,
     goTail_m: rotation + air.distance_m,
+    activation_s: s.activation_s,
+    accelOei: rollAcceleration(s, n - 1, a.engineOutDrag),
+    accelAeo: rollAcceleration(s, n, 0),
+    ...(a.maxBrakeEnergy_J === undefined ? {} : { brakeSpeedLimit: Math.sqrt((2 * a.maxBrakeEnergy_J) / s.mass_kg) }),
   };
   const w = v1Window(model);
   if (!w.ok) {
-    const v1Min = w.v1Min === undefined ? 'beyond lift-off speed' : `${f1(w.v1Min + s.wind_mps)} m/s`;
+    if (w.cause === 'vmbe') {
+      return {
+        ok: false, reason: 'brake-energy-limit',
+        message: `The brakes cannot absorb a rejected takeoff: the energy limit (${(a.maxBrakeEnergy_J! / 1e6).toFixed(1)} MJ) allows V1 up to ${f1(w.vmbe + s.wind_mps)} m/s, below the least V1 after an engine failure at VMCG (${f1(w.v1Min + s.wind_mps)} m/s).`,
+      };
+    }
     return {
       ok: false, reason: 'v1-window-empty',
-      message: `No decision speed is possible: after an engine failure at VMCG (${f1(s.vmcg ?? 0)} m/s) the speed at the end of recognition (${v1Min}) exceeds VR (${f1(s.vr)} m/s).`,
+      message: `No decision speed is possible: the least V1 after an engine failure at VMCG exceeds VR (${f1(s.vr)} m/s).`,
     };
   }
-  return { ok: true, model, rotation_m: rotation, airborne: air, lo: w.lo, hi: w.hi };
+  return { ok: true, model, rotation_m: rotation, airborne: air, lo: w.lo, hi: w.hi, hiBasis: w.hiBasis };
 }
 
 /** Full takeoff analysis for one aircraft, mass and site condition. */
 export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
-  const s = takeoffSetup(input);
+  const s0 = takeoffSetup(input);
+  const first = analyseSetup(s0, input, true);
+  if ('raiseVr_mps' in first) {
+    const second = analyseSetup(withVrAtLeast(s0, first.raiseVr_mps * (1 + 1e-9)), input, false);
+    if ('raiseVr_mps' in second) throw new Error('unreachable: VR raised twice');
+    return second;
+  }
+  return first;
+}
+
+function climbResultOf(s: TakeoffSetup): ClimbResult {
+  const c = climbChecks(s);
+  const n = s.engineCount;
+  const multi = n > 1;
+  const secondLimited = c.second.gradient < c.secondMinimum;
+  const firstLimited = c.first !== undefined && c.firstMinimum !== undefined && c.first.gradient < c.firstMinimum;
+  const limited = c.margin < 0;
+  const maxMass = limited ? climbLimitedMass(s) : undefined;
+  const gearUp = multi || s.aircraft.cd0TakeoffGearUp !== undefined;
+  const secondLabel = multi ? 'engine-out climb at V2, gear up (second segment)' : 'all-engines climb at V2';
+  const firstLabel = 'engine-out climb at lift-off, gear down (first segment)';
+  return {
+    case: multi ? 'engine-out' : 'all-engines',
+    gradient: c.second.gradient, minimum: c.secondMinimum, minimumSource: c.secondSource,
+    cd0GearUp: c.second.cd0 - (multi ? s.aircraft.engineOutDrag : 0),
+    cd0GearUpSource: gearUp ? s.cd0GearUpSource : 'gear down (fixed gear)',
+    ...(c.first === undefined ? {} : {
+      firstSegment: { gradient: c.first.gradient, minimum: c.firstMinimum!, minimumSource: c.firstSource!, limited: firstLimited },
+    }),
+    limited,
+    ...(limited ? {
+      limitingSegment: secondLimited ? 'second' as const : 'first' as const,
+      limitingLabel: secondLimited ? secondLabel : firstLabel,
+    } : {}),
+    ...(maxMass === undefined ? {} : { maxMass_kg: maxMass }),
+  };
+}
+
+function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean): TakeoffResult | { readonly raiseVr_mps: number } {
   const a = s.aircraft;
   const n = s.engineCount;
   const basis = a.certification;
@@ -148,38 +250,41 @@ export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
   t('Rolling friction', s.muRolling, '');
   t('Braking friction', s.muBraking, '');
   t('Screen height', s.screen_m, 'm');
+  t('Takeoff CD0, gear down', a.cd0Takeoff, '');
+  t(`Takeoff CD0, gear up (${s.cd0GearUpSource === 'profile' ? 'profile' : 'derived: gear increment, Anderson §6.7'})`, s.cd0GearUp, '');
+  if (s.retraction_s !== undefined) t(`Gear retraction time${a.gearRetractionTime_s === undefined ? ' (default, from memory)' : ''}`, s.retraction_s, 's');
+  if (n > 1) t(`Stop activation time after V1${a.stopActivationTime_s === undefined ? ' (default, from memory)' : ''}`, s.activation_s, 's');
 
   if (basis !== 'normal' && isWet(input.surface)) {
     warnings.push('Wet runway: friction is reduced, but the wet-runway rules of 14 CFR 25.109/25.113 (15-ft screen, reverse-thrust credit) are not modelled.');
   }
+  for (const r of s.speedsRaised) warnings.push(`${r}.`);
   const easFactor = Math.sqrt(s.air.sigma);
   const baseSpeeds: TakeoffSpeeds = {
     vs1_mps: s.vs1, vr_mps: s.vr, vlof_mps: s.vlof, v2_mps: s.v2, v1_mps: undefined, vef_mps: undefined,
     vmcg_mps: s.vmcg, v1Basis: 'none', easFactor,
+    ...(s.vmca === undefined ? {} : { vmca_mps: s.vmca, vmcaSource: s.vmcaSource }),
+    raised: s.speedsRaised,
   };
   t('VS1 (true airspeed)', s.vs1, 'm/s');
   t('VR (true airspeed)', s.vr, 'm/s');
   t('VLOF (true airspeed)', s.vlof, 'm/s');
   t('V2 (true airspeed)', s.v2, 'm/s');
+  if (s.vmca !== undefined) t(`VMCA (true airspeed; ${s.vmcaSource})`, s.vmca, 'm/s');
 
-  // Climb check at V2 (needed by every outcome that gets that far).
-  const cp = climbAtV2(s);
-  const cmin = climbMinimum(basis, n);
-  const climbLimited = cp.gradient < cmin.minimum;
-  const maxMass = climbLimited ? climbLimitedMass(s, cmin.minimum) : undefined;
-  const climb: ClimbResult = {
-    case: n > 1 ? 'engine-out' : 'all-engines',
-    gradient: cp.gradient, minimum: cmin.minimum, minimumSource: cmin.source, limited: climbLimited,
-    maxMass_kg: maxMass,
-  };
-  t('Climb gradient at V2', cp.gradient, '');
-  t('Zero-lift drag in the V2 climb', cp.cd0, '');
-  if (cp.floorBound) warnings.push('The gear-up drag estimate fell below 40 % of the takeoff zero-lift drag; that floor was used.');
-  if (climbLimited) {
+  // Climb checks (needed by every outcome that gets that far).
+  const climb = climbResultOf(s);
+  t('Climb gradient at V2 (second segment)', climb.gradient, '');
+  if (climb.firstSegment) t('Climb gradient at VLOF, gear down (first segment)', climb.firstSegment.gradient, '');
+  if (s.cd0GearUpSource === 'derived' && s.cd0GearUpFloor && n > 1) {
+    warnings.push('The derived gear-up drag fell below 40 % of the takeoff zero-lift drag; that floor was used.');
+  }
+  if (climb.limited) {
+    const seg = climb.limitingSegment === 'first' ? climb.firstSegment! : { gradient: climb.gradient, minimum: climb.minimum };
     warnings.push(
-      maxMass !== undefined
-        ? `Climb-limited: the ${climb.case} gradient at V2 (${(cp.gradient * 100).toFixed(2)} %) is below the minimum (${(cmin.minimum * 100).toFixed(1)} %); the greatest mass that meets it is ${maxMass.toFixed(0)} kg. A longer runway cannot cure this.`
-        : `Climb-limited: the ${climb.case} gradient at V2 (${(cp.gradient * 100).toFixed(2)} %) is below the minimum (${(cmin.minimum * 100).toFixed(1)} %) even at the operating empty mass. A longer runway cannot cure this.`,
+      climb.maxMass_kg !== undefined
+        ? `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %); the greatest mass that meets every climb minimum is ${climb.maxMass_kg.toFixed(0)} kg. A longer runway cannot cure this.`
+        : `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %) even at the operating empty mass. A longer runway cannot cure this.`,
     );
   }
 
@@ -188,6 +293,11 @@ export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
     feasible: false, reason, message, methodVersion: TAKEOFF_METHOD_VERSION, certification: basis,
     screenHeight_m: s.screen_m, speeds: baseSpeeds, climb, allEngines, warnings, trace,
   });
+
+  if (a.tyreSpeedLimit_mps !== undefined && s.vlofG > a.tyreSpeedLimit_mps) {
+    return infeasible('tyre-speed-limit',
+      `The lift-off groundspeed (${f1(s.vlofG)} m/s) exceeds the tyre speed rating (${f1(a.tyreSpeedLimit_mps)} m/s) at this mass and site.`);
+  }
 
   // All engines.
   const aeoB = runTable(s, n, 0);
@@ -207,7 +317,11 @@ export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
   });
   if (!air.ok) {
     return infeasible('cannot-climb',
-      `With all engines the aircraft cannot climb after lift-off (gradient ${(air.gradient * 100).toFixed(2)} %).`);
+      `With all engines the aircraft cannot climb after lift-off (gradient ${pct(air.gradient)}).`);
+  }
+  if (air.airDistance_m > MAX_ALL_ENGINES_AIR_M) {
+    return infeasible('cannot-climb',
+      `With all engines the air distance from lift-off to the screen height would be ${Math.round(air.airDistance_m)} m, beyond the ${MAX_ALL_ENGINES_AIR_M} m guard (transition gradient ${pct(air.gradient)}): the aircraft is at its climb limit here.`);
   }
   const liftoff = sVr + rot;
   const toScreen = liftoff + air.distance_m;
@@ -240,41 +354,43 @@ export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
   let engineOut: EngineOutResult | undefined;
   let speeds = baseSpeeds;
   if (n > 1) {
-    const fm = buildFailure(s, aeo);
+    const fm = buildFailure(s, aeo, allowRaise);
+    if (!fm.ok && 'raiseVr_mps' in fm) return fm;
     if (!fm.ok) {
       if (basis !== 'normal') return infeasible(fm.reason, fm.message);
       warnings.push(`Engine-failure analysis not available: ${fm.message}`);
     } else {
-      const b = balance(fm.model, fm.lo, fm.hi);
+      const b = balance(fm.model, fm.lo, fm.hi, fm.hiBasis);
       const p = b.point;
       const eoLiftoff = p.goGround_m + fm.rotation_m;
+      const brakeEnergy = 0.5 * s.mass_kg * p.brakeSpeed * p.brakeSpeed;
       engineOut = {
         continued_m: p.go_m, liftoff_m: eoLiftoff, midpoint_m: eoLiftoff + fm.airborne.distance_m / 2,
         groundRun_m: p.goGround_m, accelerateStop_m: p.stop_m, accelerateStopEngineOut_m: p.stopEngineOut_m,
         accelerateStopAllEngines_m: p.stopAllEngines_m, balancedField_m: b.field_m, v1Limited: b.basis,
         v1Min_mps: fm.lo + s.wind_mps, v1Max_mps: fm.hi + s.wind_mps,
+        airborne_m: fm.airborne.distance_m, airborneMinExcess: fm.airborne.minExcess,
+        brakeSpeed_mps: p.brakeSpeed, brakeEnergy_J: brakeEnergy, activation_s: s.activation_s,
       };
-      speeds = {
-        vs1_mps: s.vs1, vr_mps: s.vr, vlof_mps: s.vlof, v2_mps: s.v2, v1_mps: p.v1G + s.wind_mps,
-        vef_mps: p.vefG + s.wind_mps, vmcg_mps: s.vmcg, v1Basis: b.basis, easFactor,
-      };
+      speeds = { ...baseSpeeds, v1_mps: p.v1G + s.wind_mps, vef_mps: p.vefG + s.wind_mps, v1Basis: b.basis };
       if (b.basis === 'vmcg') warnings.push('V1 is held at its VMCG-based minimum; the field length is unbalanced (accelerate-stop exceeds the continued takeoff).');
       if (b.basis === 'vr') warnings.push('V1 is held at VR; the field length is unbalanced (the continued takeoff exceeds accelerate-stop).');
+      if (b.basis === 'vmbe') warnings.push('V1 is held at the brake-energy limit (VMBE); the field length is unbalanced (the continued takeoff exceeds accelerate-stop).');
       t('Engine out: V1 window low (true airspeed)', fm.lo + s.wind_mps, 'm/s');
       t('Engine out: V1 window high (true airspeed)', fm.hi + s.wind_mps, 'm/s');
       t('Engine out: VEF (true airspeed)', p.vefG + s.wind_mps, 'm/s');
       t('Engine out: V1 (true airspeed)', p.v1G + s.wind_mps, 'm/s');
       t('Engine out: ground run to VR', p.goGround_m, 'm');
       t('Engine out: rotation', fm.rotation_m, 'm');
-      t('Engine out: airborne to screen', fm.airborne.distance_m, 'm');
-      t('Engine out: transition gradient', fm.airborne.gradient, '');
+      t('Engine out: airborne to screen (energy method)', fm.airborne.distance_m, 'm');
+      t('Engine out: time from lift-off to screen', fm.airborne.time_s, 's');
+      t('Engine out: least excess thrust ratio in the air', fm.airborne.minExcess, '');
       t('Engine out: continued to screen', p.go_m, 'm');
       t('Accelerate-stop, engine out', p.stopEngineOut_m, 'm');
       t('Accelerate-stop, all engines', p.stopAllEngines_m, 'm');
+      t('Rejected takeoff: brake-application groundspeed', p.brakeSpeed, 'm/s');
+      t('Rejected takeoff: kinetic energy at brake application', brakeEnergy, 'J');
       t('Balanced-V1 iterations', b.iterations, '');
-      if (s.vmcg !== undefined && s.vr < 1.05 * s.vmcg) {
-        warnings.push('VR is below 1.05 × VMCG; the profile speeds may not satisfy 14 CFR 25.107(e).');
-      }
     }
   }
 
@@ -306,7 +422,7 @@ export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
   }
   t('Required takeoff length', required, 'm');
 
-  const empirical = empiricalChecks(s, cp.gradient);
+  const empirical = empiricalChecks(s, climb.gradient);
   if (empirical.torenbeek_m !== undefined) t('Torenbeek BFL (indicative)', empirical.torenbeek_m, 'm');
   if (empirical.roskam_m !== undefined) t(`Roskam ${empirical.roskamMethod} (indicative)`, empirical.roskam_m, 'm');
 
@@ -376,17 +492,27 @@ export type EngineFailureAtResult =
 
 /**
  * Continued and accelerate-stop distances at a chosen V1 (multi-engine aircraft). V1 outside the
- * window [VMCG-based minimum, VR] is an InputDomainError.
+ * window [VMCG-based minimum, min(VR, VMBE)] is an InputDomainError (VR raised per 25.107(e)(1)(i)
+ * when the minimum exceeds the scheduled VR).
  */
 export function engineFailureAt(input: EngineFailureAtInput): EngineFailureAtResult {
-  const s = takeoffSetup(input);
+  let s = takeoffSetup(input);
   if (s.engineCount < 2) {
     throw new InputDomainError('aircraft.engineCount', s.engineCount, 'at least 2 for an engine-failure analysis');
   }
-  const aeoB = runTable(s, s.engineCount, 0);
+  let aeoB = runTable(s, s.engineCount, 0);
   if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
-  const fm = buildFailure(s, aeoB.table);
-  if (!fm.ok) return { feasible: false, reason: fm.reason, message: fm.message };
+  let fm = buildFailure(s, aeoB.table, true);
+  if (!fm.ok && 'raiseVr_mps' in fm) {
+    s = withVrAtLeast(s, fm.raiseVr_mps * (1 + 1e-9));
+    aeoB = runTable(s, s.engineCount, 0);
+    if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
+    fm = buildFailure(s, aeoB.table, false);
+  }
+  if (!fm.ok) {
+    if ('raiseVr_mps' in fm) throw new Error('unreachable: VR raised twice');
+    return { feasible: false, reason: fm.reason, message: fm.message };
+  }
   const lo = fm.lo + s.wind_mps;
   const hi = fm.hi + s.wind_mps;
   const v1 = inRange('v1_mps', input.v1_mps, { min: lo, max: hi, unit: 'm/s' });

@@ -13,8 +13,13 @@
  * the operating engines, none on the failed one; transport-category aircraft dump lift
  * (C_L = min(clGround, 0.1), ΔC_D0 = +0.02; domain reference §6.3, ΔC_D0 from memory).
  *
- * Speeds: VS1 = √(2W/(ρ·S·CLmax)) (true airspeed at the site density); VR, VLOF, V2 are the profile's
- * multiples of VS1. Profile speeds VMCG and tail-up speed are equivalent airspeeds, converted with √σ.
+ * Speeds (14 CFR 25.107; speedSchedule): VS1 = √(2W/(ρ·S·CLmax)) (true airspeed at the site density);
+ * VR = max(vrFactor·VS1, 1.05·VMCA, V1) — V1 enters when the VMCG-based V1 minimum exceeds the
+ * scheduled VR, and the engine then re-runs with VR raised; VLOF = VR + (vlofFactor − vrFactor)·VS1,
+ * at least 1.10·VMU; V2 = max(VR + (v2Factor − vrFactor)·VS1 (VR plus the scheduled speed gain to the
+ * screen), the 25.107(b) stall floor, 1.10·VMCA, VLOF). VMCA is the profile's, or taken equal to VMCG
+ * when only VMCG is given (a derived default, marked in the trace). Profile speeds VMCG, VMCA and
+ * tail-up speed are equivalent airspeeds, converted with √σ.
  *
  * Validity: pressure altitude −400…4 500 m, |slope| ≤ 3 %, tailwind ≤ 15 m/s, headwind ≤ 25 m/s and
  * below half the stall speed, masses OEW…MTOW.
@@ -29,7 +34,10 @@ import { engineModel, type PropulsionAir, type EngineModel } from '../propulsion
 import { G0 } from '../units.js';
 import type { TakeoffInput } from './types.js';
 import { buildSpeedTable, type TableBuild } from './quadrature.js';
-import { screenHeight } from './regulations.js';
+import {
+  screenHeight, v2StallFloor, V2_OVER_VMCA, VLOF_OVER_VMU, VR_OVER_VMCA,
+} from './regulations.js';
+import { gearUpCd0 } from './drag.js';
 
 /** Lift coefficient with lift dumpers deployed (Anderson Ex. 6.7 uses 0.1). */
 export const LIFT_DUMP_CL = 0.1;
@@ -42,6 +50,58 @@ export const MIN_ACCELERATION_MPS2 = 0.02;
 /** Target number of quadrature intervals: accelerating runs and stop runs. */
 export const RUN_INTERVALS = 6;
 export const STOP_INTERVALS = 4;
+/** Default time from V1 to the full stopping configuration, s (AC 25-7 demonstrated times; from memory). */
+export const DEFAULT_STOP_ACTIVATION_S = 1;
+/** Default gear retraction time, s: transport 8, others 6 (from memory). */
+export const DEFAULT_GEAR_RETRACTION_TRANSPORT_S = 8;
+export const DEFAULT_GEAR_RETRACTION_OTHER_S = 6;
+
+/** Takeoff speeds of one mass and site and the rules that raised them. */
+export interface SpeedSchedule {
+  readonly vr: number;
+  readonly vlof: number;
+  readonly v2: number;
+  /** Plain words for each rule of 25.107 that raised a scheduled speed. */
+  readonly raised: readonly string[];
+}
+
+/**
+ * Speed schedule (true airspeeds) per 14 CFR 25.107 (see the module comment). `vrAtLeast` raises VR to a
+ * V1 that the VMCG-based minimum forces above the scheduled VR (25.107(e)(1)(i): VR ≥ V1).
+ */
+export function speedSchedule(
+  a: AircraftProfile, vs1: number, vmca: number | undefined, vrAtLeast?: number,
+): SpeedSchedule {
+  const raised: string[] = [];
+  const vrSched = a.vrFactor * vs1;
+  let vr = vrSched;
+  if (vmca !== undefined && VR_OVER_VMCA * vmca > vr) {
+    vr = VR_OVER_VMCA * vmca;
+    raised.push('VR raised to 1.05 × VMCA (14 CFR 25.107(e)(1)(ii))');
+  }
+  if (vrAtLeast !== undefined && vrAtLeast > vr) {
+    vr = vrAtLeast;
+    raised.push('VR raised to the least V1 that an engine failure at VMCG allows (14 CFR 25.107(e)(1)(i): VR ≥ V1)');
+  }
+  const lift = vr - vrSched;
+  let vlof = a.vlofFactor * vs1 + lift;
+  if (a.vmuFactor !== undefined && vlof < VLOF_OVER_VMU * a.vmuFactor * vs1) {
+    vlof = VLOF_OVER_VMU * a.vmuFactor * vs1;
+    raised.push('VLOF raised to 1.10 × VMU (14 CFR 25.107(e)(1)(iv), from memory)');
+  }
+  let v2 = a.v2Factor * vs1 + lift;
+  const floor = v2StallFloor(a.certification, a.engineCount);
+  if (floor !== undefined && v2 < floor * vs1) {
+    v2 = floor * vs1;
+    raised.push(`V2 raised to ${floor.toFixed(2)} × VS1 (14 CFR 25.107(b), from memory)`);
+  }
+  if (vmca !== undefined && v2 < V2_OVER_VMCA * vmca) {
+    v2 = V2_OVER_VMCA * vmca;
+    raised.push('V2 raised to 1.10 × VMCA (14 CFR 25.107(b)(3), (c))');
+  }
+  if (v2 < vlof) v2 = vlof;
+  return { vr, vlof, v2, raised };
+}
 
 export const TAKEOFF_INPUT_RANGES = {
   pressureAltitude_m: { min: -400, max: 4500, unit: 'm' },
@@ -81,6 +141,21 @@ export interface TakeoffSetup {
   readonly vrG: number;
   readonly vlofG: number;
   readonly vmcg?: number;
+  /** Minimum control speed in the air, true airspeed, m/s. */
+  readonly vmca?: number;
+  /** Where VMCA came from. */
+  readonly vmcaSource?: 'profile' | 'equal to VMCG (derived default)';
+  /** Rules of 25.107 that raised the scheduled speeds. */
+  readonly speedsRaised: readonly string[];
+  /** Takeoff C_D0, gear up, and its source. */
+  readonly cd0GearUp: number;
+  readonly cd0GearUpSource: 'profile' | 'derived';
+  /** Whether the derived gear-up C_D0 hit its floor. */
+  readonly cd0GearUpFloor: boolean;
+  /** Gear retraction time, s (undefined: fixed gear). */
+  readonly retraction_s: number | undefined;
+  /** Time from V1 to the full stopping configuration, s. */
+  readonly activation_s: number;
   readonly tailUp?: number;
   readonly screen_m: number;
   readonly liftDump: boolean;
@@ -112,9 +187,14 @@ export function takeoffSetup(input: TakeoffInput): TakeoffSetup {
   if (wind > maxWind) {
     throw new InputDomainError('headwind_mps', wind, `at most half the takeoff stall speed here (${maxWind.toFixed(1)} m/s)`);
   }
-  const vr = a.vrFactor * vs1;
-  const vlof = a.vlofFactor * vs1;
-  const v2 = a.v2Factor * vs1;
+  const vmcg = a.engineCount > 1 && a.vmcg_mps !== undefined ? a.vmcg_mps / sqrtSigma : undefined;
+  const vmca = a.engineCount > 1
+    ? (a.vmca_mps !== undefined ? a.vmca_mps / sqrtSigma : vmcg)
+    : undefined;
+  const sp = speedSchedule(a, vs1, vmca);
+  const { vr, vlof, v2 } = sp;
+  const gu = gearUpCd0(a, mass);
+  const retractable = a.engineCount > 1 || a.cd0TakeoffGearUp !== undefined || a.gearRetractionTime_s !== undefined;
   let tailUp: number | undefined;
   if (a.gear === 'tailwheel') {
     tailUp = (a.tailUpSpeed_mps ?? 0) / sqrtSigma;
@@ -145,7 +225,15 @@ export function takeoffSetup(input: TakeoffInput): TakeoffSetup {
     vs1, vr, vlof, v2,
     vrG: vr - wind,
     vlofG: vlof - wind,
-    vmcg: a.engineCount > 1 && a.vmcg_mps !== undefined ? a.vmcg_mps / sqrtSigma : undefined,
+    vmcg,
+    vmca,
+    ...(vmca === undefined ? {} : { vmcaSource: a.vmca_mps !== undefined ? 'profile' as const : 'equal to VMCG (derived default)' as const }),
+    speedsRaised: sp.raised,
+    cd0GearUp: gu.cd0, cd0GearUpSource: gu.source, cd0GearUpFloor: gu.floorBound,
+    retraction_s: retractable
+      ? a.gearRetractionTime_s ?? (a.certification === 'transport' ? DEFAULT_GEAR_RETRACTION_TRANSPORT_S : DEFAULT_GEAR_RETRACTION_OTHER_S)
+      : undefined,
+    activation_s: a.stopActivationTime_s ?? DEFAULT_STOP_ACTIVATION_S,
     tailUp,
     screen_m: screenHeight(a.certification),
     liftDump: a.certification === 'transport',
@@ -157,10 +245,22 @@ export function takeoffSetup(input: TakeoffInput): TakeoffSetup {
 export function withMass(s: TakeoffSetup, mass_kg: number): TakeoffSetup {
   const vs1 = stallSpeed(mass_kg, s.air.density_kgm3, s.wingArea_m2, s.clMax, G0);
   const a = s.aircraft;
+  const sp = speedSchedule(a, vs1, s.vmca);
+  const gu = gearUpCd0(a, mass_kg);
   return {
     ...s, mass_kg, weight_N: mass_kg * G0, vs1,
-    vr: a.vrFactor * vs1, vlof: a.vlofFactor * vs1, v2: a.v2Factor * vs1,
-    vrG: a.vrFactor * vs1 - s.wind_mps, vlofG: a.vlofFactor * vs1 - s.wind_mps,
+    vr: sp.vr, vlof: sp.vlof, v2: sp.v2, speedsRaised: sp.raised,
+    vrG: sp.vr - s.wind_mps, vlofG: sp.vlof - s.wind_mps,
+    cd0GearUp: gu.cd0, cd0GearUpSource: gu.source, cd0GearUpFloor: gu.floorBound,
+  };
+}
+
+/** Same set-up with VR raised to at least `vr` (true airspeed); speeds above it follow. */
+export function withVrAtLeast(s: TakeoffSetup, vr: number): TakeoffSetup {
+  const sp = speedSchedule(s.aircraft, s.vs1, s.vmca, vr);
+  return {
+    ...s, vr: sp.vr, vlof: sp.vlof, v2: sp.v2, speedsRaised: sp.raised,
+    vrG: sp.vr - s.wind_mps, vlofG: sp.vlof - s.wind_mps,
   };
 }
 
@@ -240,11 +340,20 @@ export function runTable(s: TakeoffSetup, operating: number, extraCd0: number): 
   });
 }
 
-/** Cumulative table of a braking run from VR to rest (stopping distance from any V ≤ VR). */
+/**
+ * Highest groundspeed a stop can begin from: VR plus the speed gained during the activation time at
+ * the all-engines acceleration at VR, with a 10 % margin.
+ */
+export function stopTableEnd(s: TakeoffSetup): number {
+  const aVr = rollAcceleration(s, s.engineCount, 0)(s.vrG);
+  return s.vrG + 1.1 * Math.max(aVr, 0) * s.activation_s + 0.5;
+}
+
+/** Cumulative table of a braking run to rest from any groundspeed up to stopTableEnd. */
 export function stopTable(s: TakeoffSetup, idleEngines: number, extraCd0: number): TableBuild {
   return buildSpeedTable({
     accel: stopDeceleration(s, idleEngines, extraCd0),
-    vEnd: s.vrG,
+    vEnd: stopTableEnd(s),
     breakpoints: [],
     zeroAirspeedAt: -s.wind_mps >= 0 ? -s.wind_mps : undefined,
     intervals: STOP_INTERVALS,

@@ -41,7 +41,7 @@ export type GoverningCase =
   | 'all-engines';
 
 /** What fixed V1: the balance of go and stop, or one of its limits. */
-export type V1Basis = 'balanced' | 'vmcg' | 'vr';
+export type V1Basis = 'balanced' | 'vmcg' | 'vr' | 'vmbe';
 
 export type InfeasibleReason =
   | 'cannot-reach-liftoff'
@@ -49,7 +49,11 @@ export type InfeasibleReason =
   | 'cannot-continue-engine-out'
   | 'cannot-climb-engine-out'
   | 'cannot-stop'
-  | 'v1-window-empty';
+  | 'v1-window-empty'
+  /** The brakes cannot absorb a rejected takeoff from the least V1 (maxBrakeEnergy_J). */
+  | 'brake-energy-limit'
+  /** Lift-off groundspeed above the tyre speed rating (tyreSpeedLimit_mps). */
+  | 'tyre-speed-limit';
 
 export interface TakeoffTraceEntry {
   readonly label: string;
@@ -70,6 +74,11 @@ export interface TakeoffSpeeds {
   readonly vef_mps?: number;
   /** Minimum control speed on the ground as a true airspeed, m/s. */
   readonly vmcg_mps?: number;
+  /** Minimum control speed in the air as a true airspeed, m/s, and its source. */
+  readonly vmca_mps?: number;
+  readonly vmcaSource?: string;
+  /** Rules of 14 CFR 25.107 that raised the scheduled VR, VLOF or V2. */
+  readonly raised: readonly string[];
   /** What fixed V1 ('none' for single-engine aircraft). */
   readonly v1Basis: V1Basis | 'none';
   /** √σ: true airspeed × easFactor = equivalent airspeed. */
@@ -125,6 +134,15 @@ export interface EngineOutResult {
   /** Allowed V1 range (true airspeed), m/s: from the VMCG-based minimum to VR. */
   readonly v1Min_mps: number;
   readonly v1Max_mps: number;
+  /** Engine-out air segment (energy method): lift-off to the screen height, horizontal, m. */
+  readonly airborne_m: number;
+  /** Least excess-thrust ratio (T − D)/W on the engine-out air segment. */
+  readonly airborneMinExcess: number;
+  /** Highest groundspeed of the rejected takeoff (brake application), m/s, and the energy at it, J. */
+  readonly brakeSpeed_mps: number;
+  readonly brakeEnergy_J: number;
+  /** Activation time from V1 to the full stopping configuration, s. */
+  readonly activation_s: number;
 }
 
 /** Pieces for declared distances (14 CFR 25.113; domain reference §4.2). */
@@ -137,18 +155,36 @@ export interface DeclaredPieces {
   readonly accelerateStop_m?: number;
 }
 
-export interface ClimbResult {
-  /** Engine-out (multi-engine) or all-engines (single) climb at V2. */
-  readonly case: 'engine-out' | 'all-engines';
-  /** Steady climb gradient at V2 (sine of the flight-path angle). */
+export interface ClimbSegmentCheck {
+  /** Steady gradient (sine of the flight-path angle). */
   readonly gradient: number;
-  /** Required minimum gradient. */
   readonly minimum: number;
   /** Where the minimum comes from. */
   readonly minimumSource: string;
-  /** True when the gradient is below the minimum: a weight limit that runway length cannot cure. */
   readonly limited: boolean;
-  /** Greatest mass meeting the minimum (when limited and some mass ≥ OEW meets it), kg. */
+}
+
+export interface ClimbResult {
+  /** Engine-out (multi-engine) or all-engines (single) climb at V2. */
+  readonly case: 'engine-out' | 'all-engines';
+  /** Second-segment steady climb gradient at V2, gear up (sine of the flight-path angle). */
+  readonly gradient: number;
+  /** Required minimum of that gradient. */
+  readonly minimum: number;
+  /** Where the minimum comes from. */
+  readonly minimumSource: string;
+  /** Zero-lift drag of the second segment and its source. */
+  readonly cd0GearUp: number;
+  readonly cd0GearUpSource: 'profile' | 'derived' | 'gear down (fixed gear)';
+  /** First segment (14 CFR 25.121(a): gear down at VLOF, engine out), where a minimum applies. */
+  readonly firstSegment?: ClimbSegmentCheck;
+  /** True when any applicable minimum is missed: a weight limit that runway length cannot cure. */
+  readonly limited: boolean;
+  /** Which segment limits (when limited); 'first' only when the second segment passes. */
+  readonly limitingSegment?: 'first' | 'second';
+  /** Plain words of the limiting check, e.g. "second-segment engine-out climb at V2 (gear up)". */
+  readonly limitingLabel?: string;
+  /** Greatest mass meeting every minimum (when limited and some mass ≥ OEW meets them), kg. */
   readonly maxMass_kg?: number;
 }
 

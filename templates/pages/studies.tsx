@@ -56,7 +56,7 @@ const METHOD_LABELS: Record<string, string> = {
   calibrated: 'Physics model calibrated to the reference length',
 };
 const POLICY_LABELS: Record<string, string> = {
-  'cruise-45min': '45 minutes at cruise (plus alternate if given)',
+  'cruise-45min': '45 minutes at cruise, alternate (200 NM unless given)',
   international: 'International: 10 % trip time, alternate, 30 min hold',
   custom: 'Custom: alternate distance, holding time, contingency',
 };
@@ -96,7 +96,7 @@ export function StudyFormPage(p: { mode: 'new' | 'edit'; action: string; values:
         <Section legend="Route and fuel">
           <div class="grid">
             <SelectField name="reservePolicy" label={STUDY_LABELS.reservePolicy!} values={p.values} errors={p.errors} options={Object.entries(POLICY_LABELS).map(([value, label]) => ({ value, label }))} />
-            <Field name="alternate" label={STUDY_LABELS.alternate!} kind="distance" values={p.values} errors={p.errors} hint="Needed for custom reserves; optional otherwise." />
+            <Field name="alternate" label={STUDY_LABELS.alternate!} kind="distance" values={p.values} errors={p.errors} hint="Needed for custom reserves; otherwise 200 NM (370.4 km) when blank, 0 for none." />
             <Field name="holding" label={`${STUDY_LABELS.holding!} (min)`} type="number" values={p.values} errors={p.errors} hint="Custom reserves only." />
             <Field name="contingency" label={`${STUDY_LABELS.contingency!} (% of trip fuel)`} type="number" values={p.values} errors={p.errors} hint="Custom reserves; blank uses each aircraft's own." />
             <Field name="passengerMass" label={STUDY_LABELS.passengerMass!} kind="mass" values={p.values} errors={p.errors} required hint="With baggage; states payload penalties as passengers." />

@@ -133,16 +133,28 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
   });
 
   it('a factor at which the model cannot take off counts as an infinitely long requirement (the fit still brackets)', () => {
-    // tern-rj90 at thrust × 0.7 cannot climb with an engine out (infeasible); 4000 m lies between.
+    // tern-rj90 at thrust × 0.7 cannot climb with an engine out (infeasible, the air-distance guard);
+    // 3 400 m lies between the band maximum's length and the longest feasible one (about 3 510 m at 0.76).
     const t = analyseTakeoff({ aircraft: TERN, mass_kg: TERN.mtow_kg, ...TAKEOFF_REFERENCE_CONDITION, thrustScale: 0.7 });
     expect(t.feasible).toBe(false);
-    const c = ok(calibrateTakeoff({ aircraft: TERN, reference_m: 4000 }));
+    const c = ok(calibrateTakeoff({ aircraft: TERN, reference_m: 3400 }));
     expect(c.factor).toBeGreaterThan(0.7);
     expect(Math.abs(c.residual_pct)).toBeLessThan(0.5);
   });
 
-  it('tern-rj90 CLmax: the reference needs more lift than CLmax × 1.3 → refused (no factor inside the model range)', () => {
-    const r = calibrateTakeoff({ aircraft: TERN, parameter: 'clmax' });
+  it('a reference longer than any feasible length (the edge of the climb limit) is refused, never fitted with a large residual', () => {
+    // Since the engine-out air segment is guarded, the length does not grow without limit toward the
+    // climb limit: it jumps from about 3.5 km to infeasible. 4 000 m is beyond that edge.
+    const r = calibrateTakeoff({ aircraft: TERN, reference_m: 4000 });
+    expect(r.status).toBe('refused');
+    if (r.status === 'refused') {
+      expect(r.reason).toBe('no-solution');
+      expect(r.message).toMatch(/longer than any the model gives before it becomes infeasible/);
+    }
+  });
+
+  it('tern-rj90 CLmax: a reference needing more lift than CLmax × 1.3 → refused (no factor inside the model range)', () => {
+    const r = calibrateTakeoff({ aircraft: TERN, parameter: 'clmax', reference_m: 1300 });
     expect(r.status).toBe('refused');
     if (r.status === 'refused') {
       expect(r.reason).toBe('outside-band');

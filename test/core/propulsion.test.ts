@@ -4,8 +4,9 @@ import type { AircraftProfile } from '../../core/aircraft.js';
 import { airAt, isa } from '../../core/atmosphere.js';
 import { InputDomainError } from '../../core/errors.js';
 import {
-  bartelYoungLapse, engineModel, gaggFerrarPowerRatio, mattinglyCornerMach, mattinglyLapse, propellerThrust,
-  propStaticThrust, thrustPerEngine, throttleRatio, turbopropPowerRatio,
+  bartelYoungLapse, engineModel, flatRating, flatRatingCornerTemp_c, gaggFerrarPowerRatio, mattinglyCornerMach,
+  mattinglyLapse, PROP_FM_PISTON, PROP_FM_TURBOPROP, propBlendEndSpeed, propEffectiveEfficiency, propellerThrust,
+  propStaticThrust, thrustPerEngine, throttleRatio, throttleRatioAt, turbopropPowerRatio,
 } from '../../core/propulsion.js';
 import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
 
@@ -70,16 +71,104 @@ describe('Gagg–Ferrar piston power lapse — domain reference §8.3 / check ca
 });
 
 describe('Propeller static thrust, momentum theory — domain reference §8.3 / check case 31 (C2, derived)', () => {
-  it('P 1 MW, D 3.6 m, ρ 1.225: ideal 29 216 N; × k_p 0.85 ≈ 24.8 kN (k_p from memory)', () => {
-    expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, factor: 1 }), 29216, { abs: 1 });
-    expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225 }), 24800, { abs: 50 });
+  it('P 1 MW, D 3.6 m, ρ 1.225: ideal (FM = 1) 29 216 N (check case 31)', () => {
+    expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225 }), 29216, { abs: 1 });
+    expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, figureOfMerit: 1 }), 29216, { abs: 1 });
   });
-  it('η 0.8: η·P/V governs above ≈ 32 m/s; V = 40 m/s → 20.0 kN (§8.3 example, derived)', () => {
-    const ts = propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225 });
-    expectClose((0.8 * 1e6) / ts, 32, { abs: 0.5 }, 'crossover speed');
-    expectClose(propellerThrust({ power_W: 1e6, efficiency: 0.8, airspeed_mps: 40, staticThrust_N: ts }), 20000, { abs: 1 });
-    expect(propellerThrust({ power_W: 1e6, efficiency: 0.8, airspeed_mps: 10, staticThrust_N: ts })).toBe(ts);
-    expect(propellerThrust({ power_W: 1e6, efficiency: 0.8, airspeed_mps: 0, staticThrust_N: ts })).toBe(ts);
+  it('with a figure of merit T_s = (FM·P)^(2/3)·(2ρA)^(1/3): Gudmundsson k_p 0.85 ⇔ FM = 0.85^1.5 → 24.8 kN (§8.3; k_p from memory)', () => {
+    expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, figureOfMerit: Math.pow(0.85, 1.5) }), 24834, { abs: 2 });
+    // Momentum theory with FM: ideal induced power T^(3/2)/√(2ρA) equals FM·P (derived).
+    const t = propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, figureOfMerit: 0.7 });
+    const area = (Math.PI * 3.6 * 3.6) / 4;
+    expectClose(Math.pow(t, 1.5) / Math.sqrt(2 * 1.225 * area), 0.7e6, { rel: 1e-12 });
+  });
+  it('§8.3 example, η 0.8, T_s 24.8 kN: branches meet at V* ≈ 32 m/s; η·P/V governs from V_b = 2·V* (blend, derived)', () => {
+    const ts = propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, figureOfMerit: Math.pow(0.85, 1.5) });
+    const base = { power_W: 1e6, efficiency: 0.8, staticThrust_N: ts };
+    expectClose(propBlendEndSpeed(base) / 2, 32, { abs: 0.5 }, 'V*');
+    expect(propellerThrust({ ...base, airspeed_mps: 0 })).toBe(ts);
+    // The min() blend gave 20.0 kN at 40 m/s (§8.3); the smooth blend gives less there: low-speed loss.
+    const t40 = propellerThrust({ ...base, airspeed_mps: 40 });
+    expect(t40).toBeLessThan(20000);
+    expect(t40).toBeGreaterThan(0.75 * 20000);
+    expectClose(propellerThrust({ ...base, airspeed_mps: 80 }), 10000, { rel: 1e-12 });
+    expectClose(propellerThrust({ ...base, airspeed_mps: -80 }), 10000, { rel: 1e-12 });
+  });
+});
+
+describe('Propeller thrust blend: continuity, monotonicity, T(0) from the figure of merit (derived)', () => {
+  const arb = fc.record({
+    power_W: fc.double({ min: 5e4, max: 3e6, noNaN: true }),
+    diameter_m: fc.double({ min: 1.2, max: 6.5, noNaN: true }),
+    density_kgm3: fc.double({ min: 0.7, max: 1.4, noNaN: true }),
+    efficiency: fc.double({ min: 0.4, max: 0.9, noNaN: true }),
+    figureOfMerit: fc.double({ min: 0.3, max: 0.85, noNaN: true }),
+  });
+  it('T(V) is strictly decreasing from T_s, continuous with a continuous slope at V_b, and η·P/V beyond', () => {
+    fc.assert(fc.property(arb, (p) => {
+      const ts = propStaticThrust(p);
+      const base = { power_W: p.power_W, efficiency: p.efficiency, staticThrust_N: ts };
+      const T = (v: number): number => propellerThrust({ ...base, airspeed_mps: v });
+      const vb = propBlendEndSpeed(base);
+      expect(T(0)).toBe(ts);
+      let prev = T(0);
+      for (let k = 1; k <= 400; k++) {
+        const t = T((k / 200) * vb);
+        expect(Number.isFinite(t)).toBe(true);
+        expect(t).toBeLessThan(prev);
+        prev = t;
+      }
+      const h = vb * 1e-6;
+      expectClose(T(vb - h), T(vb + h), { rel: 1e-5 }, 'value at V_b');
+      const slopeLeft = (T(vb - h) - T(vb - 2 * h)) / h;
+      const slopeRight = (T(vb + 2 * h) - T(vb + h)) / h;
+      expectClose(slopeLeft, slopeRight, { rel: 1e-3 }, 'slope at V_b');
+      expectClose(T(1.5 * vb), (p.efficiency * p.power_W) / (1.5 * vb), { rel: 1e-12 });
+      // Slope at rest: −T_s/(3V*), the ideal actuator disk at constant power (derived).
+      const vStar = vb / 2;
+      expectClose((T(vStar * 1e-5) - ts) / (vStar * 1e-5), -ts / (3 * vStar), { rel: 1e-3 }, 'slope at rest');
+    }), { numRuns: 200 });
+  });
+  it('effective efficiency T·V/P rises from 0 at rest to η at V_b and never exceeds η', () => {
+    const base = { power_W: 2e5, efficiency: 0.78, staticThrust_N: propStaticThrust({ power_W: 2e5, diameter_m: 2, density_kgm3: 1.225, figureOfMerit: 0.6 }) };
+    const vb = propBlendEndSpeed(base);
+    expect(propEffectiveEfficiency({ ...base, airspeed_mps: 0 })).toBe(0);
+    let prev = 0;
+    for (let k = 1; k <= 100; k++) {
+      const e = propEffectiveEfficiency({ ...base, airspeed_mps: (k / 100) * vb });
+      expect(e).toBeGreaterThan(prev);
+      expect(e).toBeLessThanOrEqual(0.78 + 1e-12);
+      prev = e;
+    }
+    expectClose(prev, 0.78, { rel: 1e-12 });
+    expectClose(propEffectiveEfficiency({ ...base, airspeed_mps: vb / 2 }), 0.729 * 0.78, { abs: 1e-3 }, 'at V*');
+  });
+  it('engineModel: T(0) is the FM static thrust; defaults FM 0.55 piston / 0.70 turboprop (from memory), profile value used when given', () => {
+    expect(PROP_FM_PISTON).toBe(0.55);
+    expect(PROP_FM_TURBOPROP).toBe(0.7);
+    const air = airAt(0, 15);
+    for (const a0 of fleet.filter((x) => x.engineType !== 'turbofan')) {
+      // The defaults: a profile without its own figure of merit.
+      const { propFigureOfMerit: _own, ...a } = a0;
+      const e = engineModel({ aircraft: a, air });
+      const fm = a.engineType === 'piston' ? 0.55 : 0.7;
+      const area = (Math.PI * a.propDiameter_m! ** 2) / 4;
+      const expected = Math.pow(fm * e.shaftPower_W!, 2 / 3) * Math.cbrt(2 * air.density_kgm3 * area);
+      expectClose(e.thrust(0), expected, { rel: 1e-12 }, a.id);
+      expect(e.figureOfMeritDefault).toBe(true);
+      expect(e.model).toContain('from memory');
+      const custom = engineModel({ aircraft: { ...a, propFigureOfMerit: 0.4 }, air });
+      expectClose(custom.thrust(0), Math.pow(0.4 / fm, 2 / 3) * expected, { rel: 1e-12 });
+      expect(custom.figureOfMeritDefault).toBe(false);
+    }
+  });
+  it('the demo 1.1 t single: static thrust ≈ 3.16 kN (its profile FM 0.50), and below the static value already at 15 m/s', () => {
+    // Before: k_p 0.85 gave 4.27 kN held flat to 19 m/s (min() blend). FM 0.55 would give 3.37 kN.
+    const e = engineModel({ aircraft: byId('kestrel-ut1'), air: airAt(0, 15) });
+    expect(e.figureOfMeritDefault).toBe(false);
+    expectClose(e.staticThrust_N, 3163, { abs: 5 });
+    expect(e.thrust(15)).toBeLessThan(0.95 * e.staticThrust_N);
+    expect(e.thrust(15)).toBeLessThan((0.6 * e.shaftPower_W!) / 15);
   });
 });
 
@@ -118,14 +207,16 @@ describe('engineModel over the demo fleet (properties; common practice)', () => 
       expect(hot.thrust(70)).toBeLessThan(hot.thrust(20));
     }
   });
-  it('propeller engines: thrust capped at rest, η·P/V at speed, lower power at altitude', () => {
+  it('propeller engines: static thrust at rest, η·P/V beyond the blend, lower power at altitude', () => {
     for (const a of fleet.filter((x) => x.engineType !== 'turbofan')) {
       const sl = engineModel({ aircraft: a, air: airAt(0, 15) });
       const high = engineModel({ aircraft: a, air: airAt(2000, 15) });
       expect(sl.thrust(0)).toBe(sl.staticThrust_N);
-      expectClose(sl.thrust(80), (a.propEfficiency! * sl.shaftPower_W!) / 80, { rel: 1e-12 });
-      expect(high.shaftPower_W!).toBeLessThan(sl.shaftPower_W!);
       expect(sl.kinks_mps.length).toBe(1);
+      const vb = sl.kinks_mps[0]!;
+      expectClose(sl.thrust(vb + 1), (a.propEfficiency! * sl.shaftPower_W!) / (vb + 1), { rel: 1e-12 });
+      expect(sl.thrust(vb / 2)).toBeLessThan((a.propEfficiency! * sl.shaftPower_W!) / (vb / 2));
+      expect(high.shaftPower_W!).toBeLessThan(sl.shaftPower_W!);
     }
   });
   it('thrustScale multiplies thrust; thrustPerEngine validates the airspeed', () => {
@@ -135,5 +226,73 @@ describe('engineModel over the demo fleet (properties; common practice)', () => 
       1.1 * thrustPerEngine({ aircraft: a, air, airspeed_mps: 50 }), { rel: 1e-12 });
     expect(() => thrustPerEngine({ aircraft: a, air, airspeed_mps: Number.NaN })).toThrow(InputDomainError);
     expect(() => engineModel({ aircraft: a, air, thrustScale: 5 })).toThrow(InputDomainError);
+  });
+});
+
+describe('Turbofan flat-rating corner follows the rating (issue 13 item 4; Mattingly §8.1 TR, derived)', () => {
+  const base = byId('tern-rj90');
+  const strip = { ...base, flatRatingTemp_c: undefined, flatRatingDeltaIsa_k: undefined, flatRatingCornerLapse_kPerKm: undefined };
+  const tSls = base.staticThrust_N!;
+  it('resolution: ΔT from flatRatingDeltaIsa_k, else flatRatingTemp_c − 15, else 0 (ISA)', () => {
+    expect(flatRating({ flatRatingDeltaIsa_k: 12, flatRatingTemp_c: 30 })).toMatchObject({ form: 'isa-delta', deltaIsa_k: 12, source: 'flatRatingDeltaIsa_k' });
+    expect(flatRating({ flatRatingTemp_c: 30 })).toMatchObject({ form: 'isa-delta', deltaIsa_k: 15, seaLevelCorner_c: 30, source: 'flatRatingTemp_c' });
+    expect(flatRating({})).toMatchObject({ form: 'isa-delta', deltaIsa_k: 0, source: 'default' });
+    expect(flatRating({ flatRatingTemp_c: 30, flatRatingCornerLapse_kPerKm: 2 })).toMatchObject({ form: 'corner-lapse', seaLevelCorner_c: 30 });
+    expect(flatRating({ flatRatingDeltaIsa_k: 10, flatRatingCornerLapse_kPerKm: 2 })).toMatchObject({ seaLevelCorner_c: 25 });
+  });
+  it('corner moves with altitude: ISA + 15 → 30 / 23.5 / 17 / 10.5 °C at 0 / 1000 / 2000 / 3000 m (ISA lapse 6.5 K/km); corner-lapse 2 K/km → 30 / 28 / 26 / 24 °C', () => {
+    const isaForm = flatRating({ flatRatingTemp_c: 30 });
+    const lapse = flatRating({ flatRatingTemp_c: 30, flatRatingCornerLapse_kPerKm: 2 });
+    const lapse65 = flatRating({ flatRatingTemp_c: 30, flatRatingCornerLapse_kPerKm: 6.5 });
+    [[0, 30, 30], [1000, 23.5, 28], [2000, 17, 26], [3000, 10.5, 24]].forEach(([h, ti, tl]) => {
+      expectClose(flatRatingCornerTemp_c(isaForm, h!), ti!, { abs: 1e-9 });
+      expectClose(flatRatingCornerTemp_c(lapse, h!), tl!, { abs: 1e-9 });
+      expectClose(flatRatingCornerTemp_c(lapse65, h!), ti!, { abs: 1e-9 }, 'a 6.5 K/km lapse is the ISA + ΔT form');
+    });
+    expectClose(throttleRatioAt(isaForm, 0), 1.0521, { abs: 6e-5 }, 'TR at sea level (§8.1)');
+  });
+  it('§8.1 check values (TR = 1.05) still hold through engineModel at sea level', () => {
+    const a = { ...strip, flatRatingDeltaIsa_k: 1.05 * 288.15 - 288.15 };
+    for (const lapse of ['mattingly', 'bartel-young'] as const) {
+      const p = { ...a, thrustLapse: lapse };
+      expectClose(engineModel({ aircraft: p, air: airAt(0, 15) }).staticThrust_N / tSls, 1.0, { abs: 6e-5 });
+      expectClose(engineModel({ aircraft: p, air: airAt(0, 35) }).staticThrust_N / tSls, 0.9612, { abs: 6e-5 });
+      expectClose(engineModel({ aircraft: p, air: airAt(0, 45) }).staticThrust_N / tSls, 0.8918, { abs: 6e-5 });
+    }
+    const m = engineModel({ aircraft: { ...a, thrustLapse: 'mattingly' }, air: airAt(0, 15) });
+    expectClose(m.thrust(0.2 * airAt(0, 15).speedOfSound_mps) / tSls, 0.8029, { abs: 6e-5 });
+  });
+  it('at 1,600 m with ISA + 15: static thrust flat up to the corner (4.6 + 15 = 19.6 °C) and falling above; both lapse models', () => {
+    for (const lapse of ['mattingly', 'bartel-young'] as const) {
+      for (const a of [{ ...strip, flatRatingDeltaIsa_k: 15 }, { ...strip, flatRatingTemp_c: 30 }]) {
+        const p = { ...a, thrustLapse: lapse };
+        const at = (t: number): number => engineModel({ aircraft: p, air: airAt(1600, t) }).staticThrust_N;
+        const delta = airAt(1600, 0).delta;
+        for (const t of [-20, 0, 10, 19.5]) expectClose(at(t), tSls * delta, { rel: 1e-12 }, `${lapse} ${t} °C`);
+        expect(at(21)).toBeLessThan(at(19.5));
+        expect(at(30)).toBeLessThan(at(21));
+        // Above the corner α = δ·(1 − 2·(θ − TR)) at rest (Mattingly §8.1, derived).
+        const theta = (30 + 273.15) / 288.15;
+        const tr = (19.6 + 273.15) / 288.15;
+        expectClose(at(30), tSls * delta * (1 - 2 * (theta - tr)), { rel: 1e-9 });
+        expect(engineModel({ aircraft: p, air: airAt(1600, 20) }).flatRatingCorner_c).toBeCloseTo(19.6, 9);
+      }
+    }
+  });
+  it('corner-lapse form at 1,600 m, 30 °C − 2 K/km = 26.8 °C: flat to 26.8 °C, falling above', () => {
+    const p = { ...strip, flatRatingTemp_c: 30, flatRatingCornerLapse_kPerKm: 2 };
+    const at = (t: number): number => engineModel({ aircraft: p, air: airAt(1600, t) }).staticThrust_N;
+    expectClose(at(26.7), at(0), { rel: 1e-12 });
+    expect(at(27)).toBeLessThan(at(26.7));
+    const e = engineModel({ aircraft: p, air: airAt(1600, 20) });
+    expect(e.model).toContain('2 K/km');
+  });
+  it('the Mach corner (kink) sits where θ0 reaches the altitude corner', () => {
+    const p = { ...strip, flatRatingDeltaIsa_k: 15, thrustLapse: 'mattingly' as const };
+    const air = airAt(1600, 5);
+    const e = engineModel({ aircraft: p, air });
+    const m = e.kinks_mps[0]! / air.speedOfSound_mps;
+    expectClose(air.theta * (1 + 0.2 * m * m), (19.6 + 273.15) / 288.15, { rel: 1e-9 });
+    expect(e.model).toContain('flatRatingDeltaIsa_k');
   });
 });

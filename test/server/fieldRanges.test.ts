@@ -160,7 +160,7 @@ describe('fleet payload and derived values', () => {
     const row = rows.find((x) => x.aircraft === 'giant-600')!;
     expect(row.classification.vref_mps).toBeGreaterThan(150);
     expect(row.classification.approachCategory).toBe('E');
-    expect(row.warnings.join(' ')).toMatch(/cannot climb/);
+    expect(row.warnings.join(' ')).toMatch(/cannot reach lift-off speed|cannot climb|Climb-limited/);
     expect(rows.find((x) => x.aircraft === 'plover-ct19')!.required_m).toBeGreaterThan(0);
   });
 

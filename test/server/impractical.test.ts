@@ -15,7 +15,7 @@ import { WhatIfResult } from '../../templates/whatif.js';
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from '../core/study/impractical.fixture.js';
 import { browser, makeApp } from './web/helpers.js';
 
-const REASON = /This aircraft cannot practically operate here: the takeoff needs 3\d,\d{3} m at 3,500 m \/ 45 °C and 7,294 kg, more than the plausibility bound of 5,500 m \(absolute cap, the length class of the longest paved runways\)/;
+const REASON = /This aircraft cannot practically operate here: the takeoff needs 6,\d{3} m at 3,500 m \/ 45 °C and 7,294 kg, more than the plausibility bound of 5,500 m \(absolute cap, the length class of the longest paved runways\)/;
 
 function output(): StudyOutput {
   const p = parseStudyDocument(impracticalDoc(45));
@@ -37,7 +37,7 @@ describe('study outputs of a row beyond the plausibility bound', () => {
     expect(row.requiredLanding_m).toBeNull();
     expect(row.reason).toMatch(REASON);
     expect(json.scenarios[0].criticalAircraft).toBe('heron-st1');
-    expect(json.scenarios[0].recommendedLength_m).toBeLessThan(1000);
+    expect(json.scenarios[0].recommendedLength_m).toBeLessThan(1300);
   });
 
   it('the results CSV carries the reason in its own column and no length for the row', () => {
@@ -62,7 +62,7 @@ describe('study outputs of a row beyond the plausibility bound', () => {
     const cell = /<td colspan="5" class="cannot">([^<]*)<\/td>/.exec(page);
     expect(cell).not.toBeNull();
     expect(cell![1]!.replace(/&#39;/g, "'")).toMatch(REASON);
-    expect(page).not.toMatch(/3\d,\d{3} m \(/);
+    expect(page).not.toMatch(/6,\d{3} m \(/);
     expect(page).toContain('is left out of the critical-aircraft selection');
   });
 });
@@ -81,7 +81,7 @@ describe('what-if beyond the plausibility bound', () => {
     }
     const html = String(await WhatIfResult({ outcome: at(45), errors: {} }).toString());
     expect(html).toContain('data-testid="whatif-required">cannot practically operate here</strong>');
-    expect(html).toContain('data-testid="whatif-impractical">This aircraft cannot practically operate here: the takeoff needs 37,057 m');
+    expect(html).toContain('data-testid="whatif-impractical">This aircraft cannot practically operate here: the takeoff needs 6,356 m');
     expect(html).toContain('Beyond the plausibility bound (5,500 m): cannot practically operate here.');
   });
 });

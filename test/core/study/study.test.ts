@@ -143,7 +143,7 @@ describe('runStudy on the invented demo study', () => {
     ] }];
     const s = runStudy(input(doc)).scenarios[0]!;
     expect(s.rows[0]!.status).toBe('cannot-operate');
-    expect(s.rows[0]!.reason).toMatch(/Takeoff not possible/);
+    expect(s.rows[0]!.reason).toMatch(/^Cannot operate here: the gradient of the engine-out climb .* no mass down to the operating empty mass/);
     expect(s.excluded.map((e) => e.aircraft)).toEqual(['weak-jet']);
     expect(s.criticalAircraft).toBe('heron-st1');
   });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   ALL_ENGINES_FACTOR, SCREEN_NORMAL_M, SCREEN_TRANSPORT_M, STOP_ALLOWANCE_S, climbMinimum, screenHeight,
-  takeoffDistance25113, takeoffRun25113,
+  takeoffDistance25113, takeoffRun25113, firstSegmentMinimum, v2StallFloor,
 } from '../../../core/takeoff/regulations.js';
 import { expectClose } from '../../helpers/close.js';
 
@@ -39,10 +39,28 @@ describe('Engine-out climb minima: 14 CFR 25.121(b) 2.4/2.7/3.0 % (from memory);
     expect(climbMinimum('transport', 3).minimum).toBe(0.027);
     expect(climbMinimum('transport', 4).minimum).toBe(0.03);
   });
-  it('commuter, normal multi-engine and single-engine: positive gradient', () => {
-    expect(climbMinimum('commuter', 2).minimum).toBe(0);
+  it('commuter 2.0 % gear up (23.2120(b)(3), legacy 23.67(c)(2), from memory); normal twins positive (project convention); singles positive', () => {
+    expect(climbMinimum('commuter', 2).minimum).toBe(0.02);
+    expect(climbMinimum('commuter', 2).source).toMatch(/23\.2120\(b\)\(3\)/);
     expect(climbMinimum('normal', 2).minimum).toBe(0);
     expect(climbMinimum('transport', 1).minimum).toBe(0);
-    expect(climbMinimum('normal', 2).source).toMatch(/common practice/);
+    expect(climbMinimum('normal', 2).source).toMatch(/project convention/);
+    expect(climbMinimum('transport', 1).source).toMatch(/common practice/);
+  });
+
+  it('first segment (25.121(a), from memory): positive / 0.3 % / 0.5 % for 2 / 3 / 4 engines; commuter measurably positive; none for normal and singles', () => {
+    expect(firstSegmentMinimum('transport', 2)!.minimum).toBe(0);
+    expect(firstSegmentMinimum('transport', 3)!.minimum).toBe(0.003);
+    expect(firstSegmentMinimum('transport', 4)!.minimum).toBe(0.005);
+    expect(firstSegmentMinimum('commuter', 2)!.minimum).toBe(0);
+    expect(firstSegmentMinimum('normal', 2)).toBeUndefined();
+    expect(firstSegmentMinimum('transport', 1)).toBeUndefined();
+  });
+
+  it('V2 floors of 25.107(b) (from memory): 1.13 VSR up to three engines, 1.08 VSR with four; none outside transport', () => {
+    expect(v2StallFloor('transport', 2)).toBe(1.13);
+    expect(v2StallFloor('transport', 3)).toBe(1.13);
+    expect(v2StallFloor('transport', 4)).toBe(1.08);
+    expect(v2StallFloor('commuter', 2)).toBeUndefined();
   });
 });

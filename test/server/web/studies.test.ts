@@ -112,7 +112,7 @@ describe('study what-if', () => {
     const page = (await c.get(`/studies/${studyId}`)).text;
     const site = demoInput().site;
     expect(page).toContain(`value="${site.elevation_m}"`);
-    const q = (t: string) => `/studies/${studyId}/whatif?units=si&aircraft=tern-rj90&prev=tern-rj90&temperature=${t}&elevation=1346&mass=36000&slope=0&wind=0&surface=dry`;
+    const q = (t: string) => `/studies/${studyId}/whatif?units=si&aircraft=tern-rj90&prev=tern-rj90&temperature=${t}&elevation=1346&mass=34000&slope=0&wind=0&surface=dry`;
     const cool = await c.get(q('10'), { htmx: true });
     const hot = await c.get(q('35'), { htmx: true });
     const takeoff = (html: string) => Number(/<th scope="row">Takeoff<\/th><td class="num">([\d,]+) m/.exec(html)![1]!.replace(/,/g, ''));

@@ -1,0 +1,82 @@
+/**
+ * Takeoff model revision, item 7 (climb-limit logic in the study engine). Sources: 14 CFR 25.121 and
+ * 23.2120 set the climb minima (domain reference §6); the study's handling of a climb limit (size at
+ * the climb-limited mass, or a reasoned "cannot operate") is project logic, checked here by derived
+ * consistency. The aircraft are invented (examples/demo-study.json; the single-engine variant of
+ * test/core/study/impractical.fixture.ts).
+ */
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { analyseTakeoff, runStudy, type StudyInput } from '../../../core/index.js';
+import { impracticalDoc, SINGLE_COMMUTER_ID } from './impractical.fixture.js';
+
+describe('a climb limit is sized at the climb-limited mass, or a reasoned "cannot operate" (item 7)', () => {
+  it('an aircraft that misses the climb minimum even at OEW is "cannot operate here" with the reason, never "ok"', () => {
+    const doc = impracticalDoc(45);
+    const single = doc.aircraft.find((a: { id: string }) => a.id === SINGLE_COMMUTER_ID);
+    single.shaftPower_W = 400000;
+    single.rollingFriction = 0.02;
+    // Precondition: even at OEW the single engine cannot meet the minimum at 3 500 m / 45 °C.
+    const atOew = analyseTakeoff({ aircraft: single, mass_kg: single.oew_kg, pressureAltitude_m: 3500, temperature_c: 45, slope: 0, headwind_mps: 0, surface: 'dry' });
+    expect(atOew.feasible && !atOew.climb.limited).toBe(false);
+    const r = runStudy(doc as StudyInput);
+    const row = r.scenarios[0]!.rows.find((x) => x.aircraft === SINGLE_COMMUTER_ID)!;
+    expect(row.status).toBe('cannot-operate');
+    expect(row.required_m).toBeNull();
+    expect(row.reason).toMatch(/cannot (climb|operate)|climb/i);
+    expect(r.scenarios[0]!.excluded.some((e) => e.aircraft === SINGLE_COMMUTER_ID && e.reason === row.reason)).toBe(true);
+  });
+
+  it('a climb-limited demo twin at 3 500 m / 45 °C is sized at its climb-limited mass, which itself meets every minimum', () => {
+    const study = runStudy(twinDocWithDemoCommuter() as StudyInput);
+    const twin = study.scenarios[0]!.rows.find((x) => x.aircraft === 'plover-ct19')!;
+    expect(twin.status).toBe('ok');
+    if (twin.status !== 'ok') return;
+    expect(twin.climbOffload_kg!).toBeGreaterThan(0);
+    expect(twin.takeoff!.climbLimited).toBe(false);
+    expect(twin.takeoff!.climbGradient).toBeGreaterThanOrEqual(twin.takeoff!.climbMinimum! - 1e-9);
+    expect(twin.warnings.some((w) => /^Climb-limited at the design mass of \d+ kg: the gradient of the .* is /.test(w))).toBe(true);
+  });
+});
+
+function twinDocWithDemoCommuter(): unknown {
+  const doc = impracticalDoc(45);
+  const demo = JSON.parse(readFileSync(new URL('../../../examples/demo-study.json', import.meta.url), 'utf8'));
+  doc.aircraft.push(demo.aircraft.find((a: { id: string }) => a.id === 'plover-ct19'));
+  doc.scenarios[0].fleet.push({ aircraft: 'plover-ct19', annualOperations: 600, stageLength_km: 450, payload_kg: 1600 });
+  return doc;
+}
+
+describe('the climb-limited mass is itself checked for feasibility (item 7)', () => {
+  it('a climb-limited mass at which the takeoff is still not possible gives "cannot operate" with the takeoff reason', () => {
+    const doc = impracticalDoc(45);
+    const single = doc.aircraft.find((a: { id: string }) => a.id === SINGLE_COMMUTER_ID);
+    single.shaftPower_W = 500000;
+    single.rollingFriction = 0.02;
+    const r = runStudy(doc as StudyInput);
+    const row = r.scenarios[0]!.rows.find((x) => x.aircraft === SINGLE_COMMUTER_ID)!;
+    expect(row.status).toBe('cannot-operate');
+    expect(row.reason!.length).toBeGreaterThan(30);
+    expect(row.warnings.some((w) => w.startsWith('Climb-limited at the design mass'))).toBe(true);
+  });
+});
+
+describe('beyond 35 % the corrected reference length is indicative and never governs (item 14)', () => {
+  it('under the reference method at the demo site the physics model sizes each row whose corrections exceed 35 %, and says so', () => {
+    // Domain reference §1.1, step 3 (ICAO Doc 9157 Part 1 percentage rule, as restated in its C2
+    // sources): when elevation and temperature corrections together exceed 35 % a specific study is
+    // required.
+    const doc = JSON.parse(readFileSync(new URL('../../../examples/demo-study.json', import.meta.url), 'utf8'));
+    doc.options.method = 'reference-icao';
+    doc.site.elevation_m = 2200;
+    const r = runStudy(doc as StudyInput);
+    const rows = r.scenarios.flatMap((s) => s.rows).filter((x) => x.status === 'ok' && x.takeoff?.reference_m !== undefined);
+    expect(rows.length).toBeGreaterThan(0);
+    for (const row of rows) {
+      const w = row.warnings.find((x) => x.includes('does not govern'));
+      expect(w, row.aircraft).toBeDefined();
+      expect(row.takeoff!.required_m).toBe(row.takeoff!.physics_m);
+      expect(row.takeoff!.governing).not.toMatch(/reference length/);
+    }
+  });
+});

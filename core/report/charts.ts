@@ -26,12 +26,21 @@ function longestTakeoffRun(result: StudyResult): { length_m: number; label: stri
   return best;
 }
 
+/** Legend name of a sweep line: says where the line ends and which points are climb-limited. */
+function sweepSeriesName(name: string, points: readonly { readonly impractical?: true; readonly climbLimited?: true }[]): string {
+  const notes: string[] = [];
+  const limited = points.filter((p) => p.climbLimited).length;
+  if (limited > 0) notes.push(`at its climb-limited mass at ${limited} of ${points.length} temperatures`);
+  if (points.some((p) => p.impractical)) notes.push('line ends where the requirement passes the plausibility bound');
+  return notes.length === 0 ? name : `${name} (${notes.join('; ')})`;
+}
+
 export function temperatureChart(result: StudyResult): ChartModel {
   const critical = new Set(result.scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null));
   // Points beyond the plausibility bound have no length (core/plausibility.ts): the line stops there
   // and the legend says why.
   const series: ChartSeries[] = result.sensitivity.map((c) => ({
-    name: c.temperature.some((p) => p.impractical) ? `${c.aircraftName} (line ends where the requirement passes the plausibility bound)` : c.aircraftName,
+    name: sweepSeriesName(c.aircraftName, c.temperature),
     style: 'line',
     emphasis: critical.has(c.aircraft),
     points: c.temperature.flatMap((p) => (p.required_m === null ? [] : [{ x: p.temperature_c, y: p.required_m }])),

@@ -302,6 +302,23 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
   return out;
 }
 
+/**
+ * The takeoff at the given conditions with the climb cap applied as for a study row: a mass missing a
+ * climb minimum is lowered to the climb-limited mass (`climbLimited`); `ok` is false when no mass down
+ * to OEW meets the minima or the takeoff is not possible at the capped mass.
+ */
+function cappedTakeoff(ev: Evaluator, a: AircraftProfile, mass_kg: number, cond: Conditions): { t: TakeoffResult; mass_kg: number; climbLimited: boolean; ok: boolean } {
+  const t = ev.takeoff(a, mass_kg, cond);
+  const bound = t.climb.limited || (!t.feasible && (t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out'));
+  if (!bound) return { t, mass_kg, climbLimited: false, ok: t.feasible };
+  const cm = t.climb.maxMass_kg;
+  if (cm === undefined || cm < a.oew_kg) return { t, mass_kg, climbLimited: true, ok: false };
+  if (cm >= mass_kg) return { t, mass_kg, climbLimited: false, ok: t.feasible && !t.climb.limited };
+  const m = Math.floor(cm);
+  const tc = ev.takeoff(a, m, cond);
+  return { t: tc, mass_kg: m, climbLimited: true, ok: tc.feasible && !tc.climb.limited };
+}
+
 function routeSummary(row: FleetRowInput, r: RouteResult | undefined, mass_kg: number): RouteSummary {
   if (!r) {
     return {
@@ -442,6 +459,30 @@ function evaluateRow(
     const c = ev.calibration(a);
     if (c.status === 'ok') summary.calibrationFactor = c.factor;
     else warnings.push(`Calibration not applied: ${c.message}; the uncalibrated physics model is used.`);
+  }
+
+  // A climb-limited aircraft's requirement can peak below the design temperature (cooler air allows a
+  // heavier climb-limited mass). The row is sized on the greatest requirement over the temperatures of
+  // the sensitivity grid up to the design temperature, with the climb cap applied at each.
+  if (climbOffload !== undefined && takeoffRequired === t.required_m) {
+    const uncapped = mass + climbOffload;
+    let peak: { temperature_c: number; required_m: number; mass_kg: number } | undefined;
+    for (let dt = -SENSITIVITY_TEMPERATURE_SPAN_C; dt < -1e-9; dt += SENSITIVITY_TEMPERATURE_STEP_C) {
+      const temperature_c = ev.site.designTemperature_c + dt;
+      if (temperature_c < -60) continue;
+      const c = cappedTakeoff(ev, a, uncapped, { ...cond, temperature_c });
+      if (!c.ok || !c.t.feasible) continue;
+      if (c.t.required_m > (peak?.required_m ?? takeoffRequired)) peak = { temperature_c, required_m: c.t.required_m, mass_kg: c.mass_kg };
+    }
+    if (peak) {
+      warnings.push(
+        `The takeoff requirement of this climb-limited aircraft peaks below the design temperature: ${Math.round(peak.required_m)} m at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${Math.round(peak.mass_kg)} kg) against ${Math.round(takeoffRequired)} m at the design temperature. The row is sized on the greatest requirement over temperatures up to the design temperature.`,
+      );
+      takeoffRequired = peak.required_m;
+      summary.required_m = peak.required_m;
+      summary.governing = `${summary.governing}, peak at ${peak.temperature_c.toFixed(1)} °C below the design temperature`;
+      summary.peakTemperature_c = peak.temperature_c;
+    }
   }
 
   // 3. Landing.
@@ -702,7 +743,9 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
     for (const r of s.rows) {
       // Rows beyond the plausibility bound are swept too: the sweep shows where they become practical.
       if (r.status !== 'ok' && !r.plausibility) continue;
-      massBy.set(r.aircraft, Math.max(massBy.get(r.aircraft) ?? 0, r.takeoffMass_kg));
+      // The mass before any climb cap: each sweep point applies the climb cap of its own conditions.
+      const uncapped = r.takeoffMass_kg + (r.status === 'ok' ? r.climbOffload_kg ?? 0 : 0);
+      massBy.set(r.aircraft, Math.max(massBy.get(r.aircraft) ?? 0, uncapped));
     }
   }
   const site = ev.site;
@@ -722,14 +765,18 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
     };
     const bound = ev.bound(a);
     // The same bound as the rows: a point beyond it is marked impractical and has no length.
-    const req = (elev: number, temp: number, landing: number | null): { required_m: number | null; impractical?: true } => {
-      const t = ev.takeoff(a, mass, { pressureAltitude_m: elev, temperature_c: temp, slope: site.designSlope });
-      if (!t.feasible) return { required_m: null };
-      const ctx = { elevation_m: elev, temperature_c: temp, mass_kg: mass };
-      if (checkPlausibility(takeoffDistances(t), bound, ctx)) return { required_m: null, impractical: true };
-      if (landing === null) return { required_m: null };
-      if (checkPlausibility([{ what: 'landing', value_m: landing }], bound, ctx)) return { required_m: null, impractical: true };
-      return { required_m: Math.max(t.required_m, landing) };
+    // The climb cap is re-applied at every point, as for the rows: a point where the design mass misses
+    // a climb minimum is computed at that point's climb-limited mass and marked `climbLimited`.
+    const req = (elev: number, temp: number, landing: number | null): { required_m: number | null; impractical?: true; climbLimited?: true; mass_kg?: number } => {
+      const c = cappedTakeoff(ev, a, mass, { pressureAltitude_m: elev, temperature_c: temp, slope: site.designSlope });
+      const capped = c.climbLimited ? { climbLimited: true as const, ...(c.mass_kg < mass ? { mass_kg: c.mass_kg } : {}) } : {};
+      const t = c.t;
+      if (!c.ok || !t.feasible) return { required_m: null, ...capped };
+      const ctx = { elevation_m: elev, temperature_c: temp, mass_kg: c.mass_kg };
+      if (checkPlausibility(takeoffDistances(t), bound, ctx)) return { required_m: null, impractical: true, ...capped };
+      if (landing === null) return { required_m: null, ...capped };
+      if (checkPlausibility([{ what: 'landing', value_m: landing }], bound, ctx)) return { required_m: null, impractical: true, ...capped };
+      return { required_m: Math.max(t.required_m, landing), ...capped };
     };
     const landingHere = landingAt(site.pressureAltitude_m);
     out.push({

@@ -211,6 +211,8 @@ export interface TakeoffSummary {
   /** The physics model's requirement, when it was computed beside another method, m. */
   readonly physics_m?: number;
   /** Reference length + corrections, when the aircraft carries reference data, m. */
+  /** Temperature below the design temperature at which a climb-limited requirement peaks (the row is sized there), °C. */
+  readonly peakTemperature_c?: number;
   readonly reference_m?: number;
   /** Calibration factor applied (calibrated method). */
   readonly calibrationFactor?: number;
@@ -340,7 +342,7 @@ export interface ScenarioResult {
 export interface SensitivityCurve {
   readonly aircraft: string;
   readonly aircraftName: string;
-  /** Mass used (the greatest design takeoff mass of the aircraft across scenarios), kg. */
+  /** Mass swept (the greatest design takeoff mass of the aircraft across scenarios, before any climb cap), kg; climb-limited points carry their own. */
   readonly mass_kg: number;
   /** Plausibility bound of the aircraft, m (core/plausibility.ts); points beyond it have no length. */
   readonly plausibilityBound_m: number;
@@ -356,6 +358,10 @@ export interface SensitivityCurve {
 export type SensitivityPoint<K extends 'temperature_c' | 'elevation_m'> = { readonly [P in K]: number } & {
   readonly required_m: number | null;
   readonly impractical?: true;
+  /** The curve's mass misses a climb minimum here: the point is computed at `mass_kg`, the climb-limited mass (or has no length when none down to OEW meets it). */
+  readonly climbLimited?: true;
+  /** Mass of this point when the climb cap lowered it, kg. */
+  readonly mass_kg?: number;
 };
 
 export interface StudyResult {

@@ -75,8 +75,53 @@ describe('beyond 35 % the corrected reference length is indicative and never gov
     for (const row of rows) {
       const w = row.warnings.find((x) => x.includes('does not govern'));
       expect(w, row.aircraft).toBeDefined();
-      expect(row.takeoff!.required_m).toBe(row.takeoff!.physics_m);
+      // The physics model sizes it (at the design temperature, or higher where a climb-limited
+      // requirement peaks below it); never the corrected reference length.
+      expect(row.takeoff!.required_m).toBeGreaterThanOrEqual(row.takeoff!.physics_m!);
+      expect(row.takeoff!.required_m).not.toBe(row.takeoff!.reference_m);
       expect(row.takeoff!.governing).not.toMatch(/reference length/);
     }
+  });
+});
+
+describe('design temperature and the climb cap (item 8)', () => {
+  const demoDoc = () => JSON.parse(readFileSync(new URL('../../../examples/demo-study.json', import.meta.url), 'utf8'));
+
+  it('the temperature sweep re-applies the climb cap at every point and marks the climb-limited points', () => {
+    // Derived consistency: the climb-limited mass falls as the air warms (less thrust, less lift), so
+    // the capped points are the warm end of the sweep, each at a mass below the curve's.
+    const r = runStudy(demoDoc() as StudyInput);
+    const curve = r.sensitivity.find((c) => c.aircraft === 'albatross-nb180')!;
+    const capped = curve.temperature.filter((p) => p.climbLimited);
+    expect(capped.length).toBeGreaterThan(0);
+    const first = curve.temperature.findIndex((p) => p.climbLimited);
+    expect(curve.temperature.slice(first).every((p) => p.climbLimited)).toBe(true);
+    let prev = Infinity;
+    for (const p of capped) {
+      // Before the revision these points had no length (the fixed mass could not climb).
+      expect(p.required_m, `${p.temperature_c} °C`).not.toBeNull();
+      expect(p.mass_kg!).toBeLessThan(curve.mass_kg);
+      expect(p.mass_kg!).toBeLessThanOrEqual(prev);
+      prev = p.mass_kg!;
+    }
+    for (const p of curve.temperature.slice(0, first)) expect(p.mass_kg).toBeUndefined();
+  });
+
+  it('a climb-limited row is sized on the greatest requirement over temperatures up to the design temperature, and says so', () => {
+    // The demo's normal-category twin (Pipit LT-2) is climb-limited at the design temperature; cooler
+    // air allows a heavier climb-limited mass, whose requirement is longer.
+    const r = runStudy(demoDoc() as StudyInput);
+    const row = r.scenarios[0]!.rows.find((x) => x.aircraft === 'pipit-lt2')!;
+    expect(row.status).toBe('ok');
+    if (row.status !== 'ok') return;
+    expect(row.climbOffload_kg!).toBeGreaterThan(0);
+    const peak = row.takeoff!.peakTemperature_c!;
+    expect(peak).toBeLessThan(r.site.designTemperature_c);
+    expect(row.requiredTakeoff_m).toBeGreaterThan(row.takeoff!.physics_m!);
+    expect(row.takeoff!.governing).toMatch(/peak at .* below the design temperature/);
+    expect(row.warnings.some((w) => w.includes('peaks below the design temperature') && w.includes('sized on the greatest requirement over temperatures up to the design temperature'))).toBe(true);
+    // The peak is a point of the sensitivity grid (2.5 °C steps below the design temperature).
+    const steps = (r.site.designTemperature_c - peak) / 2.5;
+    expect(Math.abs(steps - Math.round(steps))).toBeLessThan(1e-9);
   });
 });

@@ -648,8 +648,8 @@ function assumptionBlocks(result: StudyResult): Block[] {
     for (const r of s.rows) {
       if (climbLimitedRow(r)) {
         climb.push(r.takeoff?.climbLimited
-          ? `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": the climb gradient at V2 is below the regulatory minimum at the takeoff mass used, which a longer runway cannot cure.`
-          : `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": at the takeoff mass its route needs, the climb gradient at V2 is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).`);
+          ? `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": a takeoff climb gradient (first or second segment; the row warnings name which) is below the regulatory minimum at the takeoff mass used, which a longer runway cannot cure.`
+          : `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": at the takeoff mass its route needs, a takeoff climb gradient (first segment at lift-off or second segment at V2; the row warnings name which) is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).`);
       }
       for (const w of r.warnings) {
         const key = `${r.aircraftName}\u0000${w}`;

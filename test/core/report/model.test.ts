@@ -102,7 +102,7 @@ describe('appendix model of a study with a climb-limited aircraft', () => {
     const m2 = buildAppendixModel({ input: i2, result: r2, charts: [], inputDigest: 'a'.repeat(64), date: '2026-12-02', version: 't' });
     const cautions = m2.sections.find((s) => s.id === 'assumptions')!.blocks.filter((b) => b.type === 'paragraph' && b.style === 'caution');
     expect(cautions.map((b) => (b.type === 'paragraph' ? b.text : ''))).toEqual([
-      'CLIMB-LIMITED: Tern RJ-90 in "Hot": at the takeoff mass its route needs, the climb gradient at V2 is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).',
+      'CLIMB-LIMITED: Tern RJ-90 in "Hot": at the takeoff mass its route needs, a takeoff climb gradient (first segment at lift-off or second segment at V2; the row warnings name which) is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).',
     ]);
   });
 });

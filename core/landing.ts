@@ -8,9 +8,10 @@
  *   free roll s_fr = N · V_TD
  *   braking   s_b = 1/(2 g J_A) · ln(1 + J_A V_TD² / J_T),
  *             J_T = μ_b cos θ + sin θ − T_idle/W,   J_A = ρ/(2 W/S) · (C_D − μ_b C_L)
- * with the textbook speed schedule V_a : V_f : V_TD = 1.3 : 1.23 : 1.15 (× V_stall) kept as ratios of
- * the approach speed, which is VREF = profile.vrefFactor × VSR0 (14 CFR 25.125(b): VREF ≥ 1.23 VSR0)
- * or, as an option, 1.3 × VS. θ is the runway slope (+ uphill in the landing direction).
+ * with the approach speed VREF = profile.vrefFactor × VSR0 (raised to 1.23 VSR0 for transports,
+ * 14 CFR 25.125(b)(2)(i)) or, as an option, 1.3 × VS; touchdown at the profile's VTD/VREF, else
+ * 0.95 VREF for transports (from memory) with the flare at the mean of VREF and VTD, and the textbook
+ * schedule V_a : V_f : V_TD = 1.3 : 1.23 : 1.15 for other categories. θ is the runway slope (+ uphill in the landing direction).
  * Regulatory factors: 14 CFR 121.195(b) (stop within 60 % of the runway → LD / 0.60), (c) (turboprop
  * alternate, 70 %), (d) (turbojet, wet: × 1.15); normal-category aircraft have no regulatory landing
  * factor (a user factor, default 1.0).
@@ -37,7 +38,7 @@ import { SURFACES, type Surface, friction, isWet } from './surface.js';
 import { FT, G0, KT } from './units.js';
 import { check, finite, inRange } from './validate.js';
 
-export const LANDING_METHOD_VERSION = 'landing-physics/1';
+export const LANDING_METHOD_VERSION = 'landing-physics/2';
 
 /** Screen height for landing, m (50 ft: 14 CFR 25.125, 23.2130). */
 export const LANDING_SCREEN_HEIGHT_M = 50 * FT;
@@ -49,6 +50,10 @@ export const FLARE_LOAD_FACTOR = 1.2;
 export const FLARE_SPEED_RATIO = 1.23 / 1.3;
 /** Touchdown speed over approach speed: 1.15 / 1.3 (textbook civil schedule). */
 export const TOUCHDOWN_SPEED_RATIO = 1.15 / 1.3;
+/** Transport-category touchdown speed over VREF (flight-test practice; from memory, configurable by the profile's touchdownFactor). */
+export const TRANSPORT_TOUCHDOWN_RATIO = 0.95;
+/** Least VREF / VSR0 for transports, 14 CFR 25.125(b)(2)(i). */
+export const TRANSPORT_VREF_MIN_FACTOR = 1.23;
 /** Lift coefficient on the ground with lift dumping (spoilers), common practice. */
 export const LIFT_DUMPED_CL = 0.1;
 /** 14 CFR 121.195(b): stop within 60 % of the effective runway length. */
@@ -555,14 +560,27 @@ export function analyseLanding(input: LandingInput): LandingResult {
 
   // Speeds.
   const vsr0 = stallSpeed(mass, rho, a.wingArea_m2, a.clMaxLanding, G0);
-  const va = vrefFrom(a, vsr0, vrefBasis);
-  const vf = va * FLARE_SPEED_RATIO;
-  const vtd = va * TOUCHDOWN_SPEED_RATIO;
+  const transportCat = a.certification === 'transport';
+  let va = vrefFrom(a, vsr0, vrefBasis);
+  let vrefNote = vrefBasis === 'profile' ? `${a.vrefFactor} × VSR0` : '1.3 × VS';
+  if (transportCat && va < TRANSPORT_VREF_MIN_FACTOR * vsr0) {
+    // 14 CFR 25.125(b)(2)(i): VREF not less than 1.23 VSR0.
+    warnings.push(`VREF raised from ${(va / vsr0).toFixed(3)} VSR0 to ${TRANSPORT_VREF_MIN_FACTOR} VSR0, the transport-category minimum (14 CFR 25.125(b)(2)(i)).`);
+    va = TRANSPORT_VREF_MIN_FACTOR * vsr0;
+    vrefNote = `${TRANSPORT_VREF_MIN_FACTOR} × VSR0 (raised to the 25.125(b) minimum)`;
+  }
+  // Touchdown speed: the profile's VTD/VREF; else 0.95 VREF for transports (from memory), the textbook
+  // 1.15/1.3 for other categories (their own technique). The flare is flown at the mean of VREF and VTD.
+  const tdRatio = a.touchdownFactor ?? (transportCat ? TRANSPORT_TOUCHDOWN_RATIO : TOUCHDOWN_SPEED_RATIO);
+  const tdNote = a.touchdownFactor !== undefined ? `${a.touchdownFactor} × VREF (profile)` : transportCat ? `${TRANSPORT_TOUCHDOWN_RATIO} × VREF (transport technique, from memory)` : '1.15/1.3 × VREF (textbook schedule)';
+  const flareRatio = a.touchdownFactor !== undefined || transportCat ? (1 + tdRatio) / 2 : FLARE_SPEED_RATIO;
+  const vf = va * flareRatio;
+  const vtd = va * tdRatio;
   const gTd = vtd - vw;
   put('vsr0', 'Stall speed VSR0 (TAS)', vsr0, 'm/s');
-  put('vref', 'Approach speed VREF (TAS)', va, 'm/s', vrefBasis === 'profile' ? `${a.vrefFactor} × VSR0` : '1.3 × VS');
-  put('vflare', 'Average flare speed (TAS)', vf, 'm/s', '1.23/1.3 × VREF');
-  put('vtd', 'Touchdown speed (TAS)', vtd, 'm/s', '1.15/1.3 × VREF');
+  put('vref', 'Approach speed VREF (TAS)', va, 'm/s', vrefNote);
+  put('vflare', 'Average flare speed (TAS)', vf, 'm/s', flareRatio === FLARE_SPEED_RATIO ? '1.23/1.3 × VREF' : `${flareRatio.toFixed(3)} × VREF (mean of VREF and VTD)`);
+  put('vtd', 'Touchdown speed (TAS)', vtd, 'm/s', tdNote);
   put('headwind', 'Headwind component', vw, 'm/s');
   const speedsBase = { vsr0_mps: vsr0, vref_mps: va, flare_mps: vf, touchdown_mps: vtd };
   if (!(gTd > 0)) {

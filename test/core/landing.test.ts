@@ -33,6 +33,9 @@ const HAND: AircraftProfile = {
   rotationTime_s: 3, recognitionTime_s: 1, freeRollTime_s: 2,
 };
 
+/** The same aircraft certified as a commuter: it keeps the textbook speed schedule 1.3 : 1.23 : 1.15. */
+const TEXTBOOK: AircraftProfile = { ...HAND, certification: 'commuter' };
+
 const base = (a: AircraftProfile, over: Partial<LandingInput> = {}): LandingInput => ({
   aircraft: a, mass_kg: a.mlw_kg, pressureAltitude_m: 0, slope: 0, headwind_mps: 0, surface: 'dry', ...over,
 });
@@ -56,7 +59,10 @@ describe('Anderson, Aircraft Performance and Design §6.8 — hand-worked landin
   //   s_b = 1/(2 g J_A) · ln(1 + J_A V_TD² / J_T) = 394.651 m
   // LD = 244.538 + 92.580 + 110.143 + 394.651 = 841.913 m; required (121.195(b)) = 841.913/0.6 = 1403.19 m
   // Tolerance: relative 1e-5 (the hand values carry six significant figures).
-  const r = ok(analyseLanding(base(HAND)));
+  // The textbook schedule is the one kept for non-transport categories (transports touch down at
+  // 0.95 VREF since the landing model revision), so the hand check runs the same aircraft as a commuter
+  // with lift dumping on.
+  const r = ok(analyseLanding(base(TEXTBOOK, { liftDumping: true })));
   const tol = { rel: 1e-5 };
 
   it('speeds', () => {
@@ -86,12 +92,43 @@ describe('Anderson, Aircraft Performance and Design §6.8 — hand-worked landin
     // free roll 2 × 45.072 = 90.143 m. Braking, exact antiderivative with u = V + V_w:
     //   s_b = (1/g) [ ln((J_T + J_A u₂²)/(J_T + J_A u₁²)) / (2 J_A) − V_w (atan(u₂√(J_A/J_T)) − atan(u₁√(J_A/J_T))) / √(J_T J_A) ]
     //   with u₁ = 10, u₂ = 55.072 → 263.6989047331 m (python, and a 200 000-step midpoint sum agrees to 1e-10).
-    const w = ok(analyseLanding(base(HAND, { headwind_mps: 10 })));
+    const w = ok(analyseLanding(base(TEXTBOOK, { headwind_mps: 10, liftDumping: true })));
     expectClose(w.segments.approach_m, 205.258, { rel: 1e-5 }, 'approach');
     expectClose(w.segments.flare_m, 76.8627, { rel: 1e-5 }, 'flare');
     expectClose(w.segments.freeRoll_m, 90.1430, { rel: 1e-5 }, 'free roll');
     expectClose(w.segments.braking_m, 263.6989047331, { rel: 1e-10 }, 'braking');
     expect(w.braking.method).toBe('quadrature');
+  });
+});
+
+describe('transport landing speeds: touchdown 0.95 VREF, VREF ≥ 1.23 VSR0 (landing model revision)', () => {
+  it('a transport touches down at 0.95 VREF (from memory) and flares at the mean of VREF and VTD; the air distance follows', () => {
+    const t = ok(analyseLanding(base(HAND)));
+    const c = ok(analyseLanding(base(TEXTBOOK, { liftDumping: true })));
+    expectClose(t.speeds.vref_mps, c.speeds.vref_mps, { rel: 1e-12 }, 'same VREF');
+    expectClose(t.speeds.touchdown_mps / t.speeds.vref_mps, 0.95, { rel: 1e-12 }, 'VTD/VREF');
+    expectClose(t.speeds.flare_mps / t.speeds.vref_mps, 0.975, { rel: 1e-12 }, 'flare');
+    // Flare radius R = Vf²/(0.2 g) with Vf = 0.975 × 62.2548 = 60.6984 m/s → R = 1878.47 m;
+    // s_f = R sin 3° = 98.3115 m; s_a = (15.24 − R(1 − cos 3°)) / tan 3° = 241.674 m (derived from the
+    // Anderson §6.8 forms, evaluated in python).
+    expectClose(t.segments.flare_m, 98.3115, { rel: 1e-4 }, 'flare distance');
+    expectClose(t.segments.approach_m, 241.674, { rel: 1e-4 }, 'approach distance');
+    // A faster touchdown: longer free roll and braking than the textbook schedule.
+    expect(t.segments.freeRoll_m).toBeGreaterThan(c.segments.freeRoll_m);
+    expect(t.segments.braking_m).toBeGreaterThan(c.segments.braking_m);
+    expect(t.trace.find((e) => e.key === 'vtd')?.note).toMatch(/from memory/);
+  });
+  it('a profile touchdownFactor is used as given', () => {
+    const t = ok(analyseLanding(base({ ...HAND, touchdownFactor: 0.9 })));
+    expectClose(t.speeds.touchdown_mps / t.speeds.vref_mps, 0.9, { rel: 1e-12 });
+    expectClose(t.speeds.flare_mps / t.speeds.vref_mps, 0.95, { rel: 1e-12 });
+  });
+  it('a transport VREF below 1.23 VSR0 is raised to it with a warning (14 CFR 25.125(b)(2)(i)); a commuter keeps its profile value', () => {
+    const t = ok(analyseLanding(base({ ...HAND, vrefFactor: 1.18 })));
+    expectClose(t.speeds.vref_mps / t.speeds.vsr0_mps, 1.23, { rel: 1e-12 });
+    expect(t.warnings.join(' ')).toMatch(/VREF raised from 1\.180 VSR0 to 1\.23 VSR0/);
+    const c = ok(analyseLanding(base({ ...TEXTBOOK, vrefFactor: 1.18 }, { liftDumping: true })));
+    expectClose(c.speeds.vref_mps / c.speeds.vsr0_mps, 1.18, { rel: 1e-12 });
   });
 });
 

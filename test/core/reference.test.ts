@@ -33,10 +33,10 @@ describe('reference length corrected by the ICAO set (domain reference §1.1; de
     expectClose(r.length_m, 1700 * (1 + 0.07 * 250 / 300) * (1 + 0.19525) * 1.02, { rel: 1e-12 });
     expect(r.steps.map((s) => s.kind)).toEqual(['elevation', 'temperature', 'slope']);
   });
-  it('landing 1450 m: elevation only', () => {
+  it('landing 1650 m: elevation only', () => {
     const r = referenceLengthAtSite({ aircraft: tern, operation: 'landing', site, set: 'icao' });
     if (r.status !== 'ok') throw new Error('expected ok');
-    expectClose(r.length_m, 1450 * (1 + 0.07 * 250 / 300), { rel: 1e-12 });
+    expectClose(r.length_m, 1650 * (1 + 0.07 * 250 / 300), { rel: 1e-12 });
   });
   it('high site is labelled indicative', () => {
     const r = referenceLengthAtSite({ aircraft: tern, operation: 'takeoff', site: { ...site, elevation_m: 2200 }, set: 'icao' });
@@ -56,7 +56,7 @@ describe('reference length corrected by the authority set (AC 150/5325-4B adjust
   it('landing on a wet runway, turbojet: elevation then × 1.15', () => {
     const r = referenceLengthAtSite({ aircraft: tern, operation: 'landing', site: { ...site, wet: true }, set: 'authority' });
     if (r.status !== 'ok') throw new Error('expected ok');
-    expectClose(r.length_m, 1450 * (1 + 0.07 * 250 / 300) * 1.15, { rel: 1e-12 });
+    expectClose(r.length_m, 1650 * (1 + 0.07 * 250 / 300) * 1.15, { rel: 1e-12 });
   });
   it('a profile without reference lengths gives no-data, not an error', () => {
     const r = referenceLengthAtSite({ aircraft: kestrel, operation: 'takeoff', site, set: 'icao' });

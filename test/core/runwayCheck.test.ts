@@ -286,8 +286,8 @@ describe('maxLandingMassForLda — inverse consistency (derived)', () => {
     expect(none.maxLandingMass_kg).toBeUndefined();
   });
   it('a wet runway allows less than a dry one (121.195(d) ×1.15 for turbojets, domain reference §4.5)', () => {
-    const dry = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'dry', lda_m: 1600 }).maxLandingMass_kg!;
-    const wet = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'wet', lda_m: 1600 }).maxLandingMass_kg!;
+    const dry = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'dry', lda_m: 1900 }).maxLandingMass_kg!;
+    const wet = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'wet', lda_m: 1900 }).maxLandingMass_kg!;
     expect(wet).toBeLessThan(dry);
   });
 });

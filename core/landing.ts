@@ -492,6 +492,22 @@ export function landingRequirement(input: LandingRequirementInput): LandingRequi
   };
 }
 
+/** Roskam's landing field length coefficient, ft per kt² (transports; Airplane Design Part I, §3.4.4 from memory). */
+export const ROSKAM_LANDING_COEFF_FT_PER_KT2 = 0.3;
+
+/**
+ * Roskam's statistical landing field length of a transport, S_FL = 0.3 · V_A² (ft, V_A in kt), with
+ * V_A the approach speed. An indicative cross-check beside the landing physics, never a requirement;
+ * the fit covers transport jets and turboprops at sea level (it carries the 0.6 factor of the field
+ * length already). Here V_A is VREF as a true airspeed at the field, so elevation lengthens it.
+ */
+export function roskamLandingFieldLength(approach_mps: number): { fieldLength_ft: number; fieldLength_m: number } {
+  const v = inRange('approach_mps', approach_mps, { min: 0, minInclusive: false, max: 150, unit: 'm/s' });
+  const vKt = v / KT;
+  const ft = ROSKAM_LANDING_COEFF_FT_PER_KT2 * vKt * vKt;
+  return { fieldLength_ft: ft, fieldLength_m: ft * FT };
+}
+
 export function defaultLandingRule(a: AircraftProfile): LandingRule {
   return a.certification === 'normal' ? 'light' : 'transport';
 }

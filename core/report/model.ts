@@ -512,6 +512,7 @@ function componentRows(rows: readonly RowResult[]): Row[] {
     ...labels(landingTrace).map((label): ComponentLine => ({ label, value: trace(landingTrace, label) })),
     { label: 'Operating rule', value: (r) => (ok(r) && r.landing ? t(r.landing.rule) : undefined) },
     { label: 'Factor on the landing distance', value: (r) => (ok(r) && r.landing ? q(r.landing.factor, 'ratio') : undefined) },
+    { label: 'Roskam landing field length (indicative)', value: (r) => (ok(r) && r.landing?.roskam_m !== undefined ? q(r.landing.roskam_m, 'length') : undefined) },
     { label: 'Landing requirement', value: (r) => (ok(r) && r.landing ? q(r.landing.required_m, 'length') : undefined), bold: true },
   ]);
   section('Requirement and classification', [

@@ -36,7 +36,7 @@ import {
   ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DESIGN_TEMPERATURE_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, ROUNDING_INCREMENT_RANGE,
   RESERVE_TIME_RANGE_MIN, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM,
 } from '../fields.js';
-import { LANDING_RULE_LABELS, analyseLanding, referenceLandingSpeed } from '../landing.js';
+import { LANDING_RULE_LABELS, analyseLanding, referenceLandingSpeed, roskamLandingFieldLength } from '../landing.js';
 import { referenceLengthAtSite } from '../reference.js';
 import { requiredLength } from '../requirement.js';
 import {
@@ -508,6 +508,9 @@ function evaluateRow(
       { label: 'Landing distance (unfactored)', value: l.distance_m, unit: 'm' },
     ],
   };
+  if (a.certification === 'transport') {
+    landingSummary = { ...landingSummary, roskam_m: roskamLandingFieldLength(l.speeds.vref_mps).fieldLength_m };
+  }
   if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && a.reference?.landing_m !== undefined) {
     const ref = referenceLengthAtSite({ aircraft: a, operation: 'landing', site: refSite, set: opts.method === 'reference-authority' ? 'authority' : 'icao' });
     if (ref.status === 'ok' && ref.specificStudyRequired) {

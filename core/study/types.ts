@@ -229,6 +229,8 @@ export interface LandingSummary {
   readonly factor: number;
   readonly vref_mps: number;
   readonly components: readonly TraceItem[];
+  /** Roskam landing field length 0.3 · V_A² (ft, kt), transports only: indicative, never governs, m. */
+  readonly roskam_m?: number;
 }
 
 export interface RouteSummary {

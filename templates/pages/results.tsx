@@ -58,6 +58,7 @@ export function RowComponents(p: { row: RowResult }) {
           <tbody>
             {r.landing.components.map((t) => <tr><th scope="row">{t.label}</th><td class="num">{traceValue(t, units)}</td></tr>)}
             <tr><th scope="row">VREF</th><td class="num">{fmt(r.landing.vref_mps, 'speed', units)}</td></tr>
+            {r.landing.roskam_m !== undefined ? <tr><th scope="row">Roskam landing field length (indicative)</th><td class="num">{fmt(r.landing.roskam_m, 'length', units)}</td></tr> : null}
           </tbody>
         </table>
       ) : null}

@@ -5,9 +5,11 @@ import { standardTemperatureC } from '../../core/atmosphere.js';
 import { InputDomainError } from '../../core/errors.js';
 import {
   LANDING_SCREEN_HEIGHT_M, analyseLanding, defaultLandingRule, gaussLegendreNodes, landingBrakingDistance,
-  landingRequirement, referenceLandingSpeed, type LandingInput, type LandingOk, type LandingResult,
+  landingRequirement, referenceLandingSpeed, roskamLandingFieldLength, type LandingInput, type LandingOk, type LandingResult,
 } from '../../core/landing.js';
 import { requiredLength } from '../../core/requirement.js';
+import { runStudy } from '../../core/study/run.js';
+import type { StudyInput } from '../../core/study/types.js';
 import { SURFACES } from '../../core/surface.js';
 import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
 
@@ -129,6 +131,29 @@ describe('transport landing speeds: touchdown 0.95 VREF, VREF ≥ 1.23 VSR0 (lan
     expect(t.warnings.join(' ')).toMatch(/VREF raised from 1\.180 VSR0 to 1\.23 VSR0/);
     const c = ok(analyseLanding(base({ ...TEXTBOOK, vrefFactor: 1.18 }, { liftDumping: true })));
     expectClose(c.speeds.vref_mps / c.speeds.vsr0_mps, 1.18, { rel: 1e-12 });
+  });
+});
+
+describe('Roskam landing field length, S_FL = 0.3 V_A² (ft, kt) — Roskam, Airplane Design Part I, §3.4.4 (from memory)', () => {
+  it('130 kt → 0.3 × 130² = 5 070 ft = 1 545.3 m (hand value)', () => {
+    const r = roskamLandingFieldLength(130 * 0.514444444);
+    expectClose(r.fieldLength_ft, 5070, { rel: 1e-6 });
+    expectClose(r.fieldLength_m, 5070 * 0.3048, { rel: 1e-6 });
+    expect(() => roskamLandingFieldLength(0)).toThrow(InputDomainError);
+  });
+  it('the study reports it beside the landing physics for transports only, and it never governs', () => {
+    const r = runStudy(demoStudy as unknown as StudyInput);
+    const rows = r.scenarios.flatMap((s) => s.rows).filter((x) => x.status === 'ok');
+    expect(rows.filter((x) => x.landing?.roskam_m !== undefined).length).toBeGreaterThan(0);
+    for (const row of rows) {
+      const a = fleet.find((x) => x.id === row.aircraft)!;
+      if (a.certification === 'transport') {
+        expectClose(row.landing!.roskam_m!, roskamLandingFieldLength(row.landing!.vref_mps).fieldLength_m, { rel: 1e-12 }, row.aircraft);
+        expect(row.requiredLanding_m).toBe(row.landing!.required_m);
+      } else {
+        expect(row.landing!.roskam_m, row.aircraft).toBeUndefined();
+      }
+    }
   });
 });
 

@@ -68,7 +68,7 @@ type Failure =
     readonly ok: true;
     readonly model: FailureModel;
     readonly rotation_m: number;
-    readonly airborne: Extract<EnergyAirResult, { ok: true }>;
+    readonly airborne: Extract<EnergyAirResult, { ok: true }> & { readonly floored: boolean };
     readonly lo: number;
     readonly hi: number;
     readonly hiBasis: 'vr' | 'vmbe';
@@ -140,8 +140,9 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Fa
       message: `No decision speed is possible: the least V1 after an engine failure at VMCG (${f1(v1Min + s.wind_mps)} m/s) stays above VR (${f1(s.vr)} m/s) even with VR raised.`,
     };
   }
-  const air = energyAirborne(engineOutAirInput(s));
-  if (!air.ok) {
+  const energyAir = energyAirborne(engineOutAirInput(s));
+  if (!energyAir.ok) {
+    const air = energyAir;
     return {
       ok: false, reason: 'cannot-climb-engine-out',
       message: air.cause === 'no-excess-thrust'
@@ -149,6 +150,11 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Fa
         : `With one engine failed the air distance from lift-off to the screen height would exceed ${MAX_ENGINE_OUT_AIR_M} m (least excess thrust ratio ${pct(air.excess)}): the aircraft is at its climb limit here.`,
     };
   }
+  // The energy method has no pull-up arc; fewer engines cannot reach the screen height sooner, so the
+  // engine-out air distance is never taken below the all-engines transition arc (traced when it binds).
+  const aeoAir = allEnginesAir(s);
+  const floored = aeoAir.ok && aeoAir.distance_m > energyAir.distance_m;
+  const air = { ...energyAir, distance_m: floored && aeoAir.ok ? aeoAir.distance_m : energyAir.distance_m, floored };
   const stopOeiB = stopTable(s, n - 1, a.engineOutDrag);
   const stopAeoB = stopTable(s, n, 0);
   if (!stopOeiB.ok || !stopAeoB.ok) {
@@ -189,6 +195,17 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Fa
 }
 
 /** Full takeoff analysis for one aircraft, mass and site condition. */
+/** All-engines air segment: the transition arc and climb to the screen height (Raymer). */
+function allEnginesAir(s: TakeoffSetup): ReturnType<typeof airborneDistance> {
+  const a = s.aircraft;
+  return airborneDistance({
+    weight_N: s.weight_N, thrust_N: a.engineCount * s.engine.thrust(0.5 * (s.vlof + s.v2)),
+    density_kgm3: s.air.density_kgm3, wingArea_m2: s.wingArea_m2, cd0: a.cd0Takeoff, k: s.k,
+    clMax: s.clMax, vs1_mps: s.vs1, vlof_mps: s.vlof, v2_mps: s.v2, screen_m: s.screen_m,
+    headwind_mps: s.wind_mps,
+  });
+}
+
 export function analyseTakeoff(input: TakeoffInput): TakeoffResult {
   const s0 = takeoffSetup(input);
   const first = analyseSetup(s0, input, true);
@@ -309,12 +326,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   const sVr = distanceAt(aeo, s.vrG);
   const sVlof = distanceAt(aeo, s.vlofG);
   const rot = rotationDistance({ vrG_mps: s.vrG, vlofG_mps: s.vlofG, rotationTime_s: a.rotationTime_s, physics_m: sVlof - sVr });
-  const air = airborneDistance({
-    weight_N: s.weight_N, thrust_N: n * s.engine.thrust(0.5 * (s.vlof + s.v2)),
-    density_kgm3: s.air.density_kgm3, wingArea_m2: s.wingArea_m2, cd0: a.cd0Takeoff, k: s.k,
-    clMax: s.clMax, vs1_mps: s.vs1, vlof_mps: s.vlof, v2_mps: s.v2, screen_m: s.screen_m,
-    headwind_mps: s.wind_mps,
-  });
+  const air = allEnginesAir(s);
   if (!air.ok) {
     return infeasible('cannot-climb',
       `With all engines the aircraft cannot climb after lift-off (gradient ${pct(air.gradient)}).`);
@@ -378,6 +390,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
       if (b.basis === 'vmbe') warnings.push('V1 is held at the brake-energy limit (VMBE); the field length is unbalanced (the continued takeoff exceeds accelerate-stop).');
       t('Engine out: V1 window low (true airspeed)', fm.lo + s.wind_mps, 'm/s');
       t('Engine out: V1 window high (true airspeed)', fm.hi + s.wind_mps, 'm/s');
+      if (fm.airborne.floored) t('Engine out: air distance held at the all-engines transition arc (energy method shorter)', fm.airborne.distance_m, 'm');
       t('Engine out: VEF (true airspeed)', p.vefG + s.wind_mps, 'm/s');
       t('Engine out: V1 (true airspeed)', p.v1G + s.wind_mps, 'm/s');
       t('Engine out: ground run to VR', p.goGround_m, 'm');

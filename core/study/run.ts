@@ -303,20 +303,31 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
 }
 
 /**
- * The takeoff at the given conditions with the climb cap applied as for a study row: a mass missing a
- * climb minimum is lowered to the climb-limited mass (`climbLimited`); `ok` is false when no mass down
- * to OEW meets the minima or the takeoff is not possible at the capped mass.
+ * The takeoff at the given conditions with the climb cap applied, the one rule for study rows, the
+ * temperature scan and the sweeps. `first` is the takeoff at the mass asked for. When that mass misses
+ * a climb minimum, `belowOew` says no mass down to OEW meets it, else `climbLimited` says the takeoff
+ * `t` was re-run at the climb-limited mass `mass_kg`. `ok`: `t` is feasible and meets every minimum.
  */
-function cappedTakeoff(ev: Evaluator, a: AircraftProfile, mass_kg: number, cond: Conditions): { t: TakeoffResult; mass_kg: number; climbLimited: boolean; ok: boolean } {
-  const t = ev.takeoff(a, mass_kg, cond);
-  const bound = t.climb.limited || (!t.feasible && (t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out'));
-  if (!bound) return { t, mass_kg, climbLimited: false, ok: t.feasible };
-  const cm = t.climb.maxMass_kg;
-  if (cm === undefined || cm < a.oew_kg) return { t, mass_kg, climbLimited: true, ok: false };
-  if (cm >= mass_kg) return { t, mass_kg, climbLimited: false, ok: t.feasible && !t.climb.limited };
+interface CappedTakeoff {
+  readonly first: TakeoffResult;
+  readonly t: TakeoffResult;
+  readonly mass_kg: number;
+  readonly climbLimited: boolean;
+  readonly belowOew: boolean;
+  readonly ok: boolean;
+}
+
+function cappedTakeoff(ev: Evaluator, a: AircraftProfile, mass_kg: number, cond: Conditions): CappedTakeoff {
+  const first = ev.takeoff(a, mass_kg, cond);
+  const bound = first.climb.limited || (!first.feasible && (first.reason === 'cannot-climb' || first.reason === 'cannot-climb-engine-out'));
+  const cm = first.climb.maxMass_kg;
+  const same = { first, t: first, mass_kg, climbLimited: false };
+  if (!bound) return { ...same, belowOew: false, ok: first.feasible };
+  if (cm === undefined || cm < a.oew_kg) return { ...same, belowOew: true, ok: false };
+  if (cm >= mass_kg) return { ...same, belowOew: false, ok: first.feasible && !first.climb.limited };
   const m = Math.floor(cm);
-  const tc = ev.takeoff(a, m, cond);
-  return { t: tc, mass_kg: m, climbLimited: true, ok: tc.feasible && !tc.climb.limited };
+  const t = ev.takeoff(a, m, cond);
+  return { first, t, mass_kg: m, climbLimited: true, belowOew: false, ok: t.feasible && !t.climb.limited };
 }
 
 function routeSummary(row: FleetRowInput, r: RouteResult | undefined, mass_kg: number): RouteSummary {
@@ -378,27 +389,27 @@ function evaluateRow(
 
   // 2. Takeoff at design conditions.
   const cond = ev.designConditions();
-  let t = ev.takeoff(a, mass, cond);
-  let climbOffload: number | undefined;
   // A climb limit is a finding runway length cannot cure: the aircraft must leave at the climb-limited
   // mass whatever the runway, so the runway is sized at that mass and the offload is reported.
-  const climbMass = t.climb.maxMass_kg;
-  const climbBound = t.climb.limited || (!t.feasible && (t.reason === 'cannot-climb' || t.reason === 'cannot-climb-engine-out'));
-  const climbLabel = t.climb.limitingLabel ?? `${t.climb.case} climb at V2`;
-  if (climbBound && (climbMass === undefined || climbMass < a.oew_kg)) {
+  const capped = cappedTakeoff(ev, a, mass, cond);
+  const t0 = capped.first;
+  const climbLabel = t0.climb.limitingLabel ?? `${t0.climb.case} climb at V2`;
+  const missed = `the gradient of the ${climbLabel} is ${(t0.climb.gradient * 100).toFixed(2)} %`;
+  if (capped.belowOew) {
     // Missing the minimum even at the operating empty mass: no mass and no runway cures it.
-    warnings.push(...t.warnings);
+    warnings.push(...t0.warnings);
     return cannotOperate(base, route, row,
-      `Cannot operate here: the gradient of the ${climbLabel} is ${(t.climb.gradient * 100).toFixed(2)} % at ${Math.round(mass)} kg, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum, and no mass down to the operating empty mass (${Math.round(a.oew_kg)} kg) meets it; a longer runway cannot cure this.`,
+      `Cannot operate here: ${missed} at ${Math.round(mass)} kg, below the ${(t0.climb.minimum * 100).toFixed(1)} % minimum, and no mass down to the operating empty mass (${Math.round(a.oew_kg)} kg) meets it; a longer runway cannot cure this.`,
       warnings, mass, routeSum);
   }
-  if (climbBound && climbMass !== undefined && climbMass < mass) {
+  let climbOffload: number | undefined;
+  const t = capped.t;
+  if (capped.climbLimited) {
     warnings.push(
-      `Climb-limited at the design mass of ${Math.round(mass)} kg: the gradient of the ${climbLabel} is ${(t.climb.gradient * 100).toFixed(2)} %, below the ${(t.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting every climb minimum is ${Math.floor(climbMass)} kg (${Math.round(mass - climbMass)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
+      `Climb-limited at the design mass of ${Math.round(mass)} kg: ${missed}, below the ${(t0.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting every climb minimum is ${capped.mass_kg} kg (${Math.round(mass - capped.mass_kg)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
     );
-    climbOffload = mass - Math.floor(climbMass);
-    mass = Math.floor(climbMass);
-    t = ev.takeoff(a, mass, cond);
+    climbOffload = mass - capped.mass_kg;
+    mass = capped.mass_kg;
     // The climb-limited mass is itself checked: it must meet the minima and be feasible.
     if (t.feasible && t.climb.limited) {
       warnings.push(...t.warnings);
@@ -772,7 +783,7 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
     // a climb minimum is computed at that point's climb-limited mass and marked `climbLimited`.
     const req = (elev: number, temp: number, landing: number | null): { required_m: number | null; impractical?: true; climbLimited?: true; mass_kg?: number } => {
       const c = cappedTakeoff(ev, a, mass, { pressureAltitude_m: elev, temperature_c: temp, slope: site.designSlope });
-      const capped = c.climbLimited ? { climbLimited: true as const, ...(c.mass_kg < mass ? { mass_kg: c.mass_kg } : {}) } : {};
+      const capped = c.climbLimited ? { climbLimited: true as const, mass_kg: c.mass_kg } : c.belowOew ? { climbLimited: true as const } : {};
       const t = c.t;
       if (!c.ok || !t.feasible) return { required_m: null, ...capped };
       const ctx = { elevation_m: elev, temperature_c: temp, mass_kg: c.mass_kg };

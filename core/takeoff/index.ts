@@ -114,7 +114,7 @@ export function engineOutAirInput(s: TakeoffSetup, steps?: number): EnergyAirInp
 }
 
 /** Builds the engine-failure model (multi-engine) over the shared all-engines table. */
-function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Failure {
+function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeof airborneDistance>, allowRaise: boolean): Failure {
   const a = s.aircraft;
   const n = s.engineCount;
   const oeiB = runTable(s, n - 1, a.engineOutDrag);
@@ -152,7 +152,6 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, allowRaise: boolean): Fa
   }
   // The energy method has no pull-up arc; fewer engines cannot reach the screen height sooner, so the
   // engine-out air distance is never taken below the all-engines transition arc (traced when it binds).
-  const aeoAir = allEnginesAir(s);
   const floored = aeoAir.ok && aeoAir.distance_m > energyAir.distance_m;
   const air = { ...energyAir, distance_m: floored && aeoAir.ok ? aeoAir.distance_m : energyAir.distance_m, floored };
   const stopOeiB = stopTable(s, n - 1, a.engineOutDrag);
@@ -366,7 +365,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   let engineOut: EngineOutResult | undefined;
   let speeds = baseSpeeds;
   if (n > 1) {
-    const fm = buildFailure(s, aeo, allowRaise);
+    const fm = buildFailure(s, aeo, air, allowRaise);
     if (!fm.ok && 'raiseVr_mps' in fm) return fm;
     if (!fm.ok) {
       if (basis !== 'normal') return infeasible(fm.reason, fm.message);
@@ -515,12 +514,13 @@ export function engineFailureAt(input: EngineFailureAtInput): EngineFailureAtRes
   }
   let aeoB = runTable(s, s.engineCount, 0);
   if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
-  let fm = buildFailure(s, aeoB.table, true);
+  const aeoAir = allEnginesAir(s);
+  let fm = buildFailure(s, aeoB.table, aeoAir, true);
   if (!fm.ok && 'raiseVr_mps' in fm) {
     s = withVrAtLeast(s, fm.raiseVr_mps * (1 + 1e-9));
     aeoB = runTable(s, s.engineCount, 0);
     if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
-    fm = buildFailure(s, aeoB.table, false);
+    fm = buildFailure(s, aeoB.table, allEnginesAir(s), false);
   }
   if (!fm.ok) {
     if ('raiseVr_mps' in fm) throw new Error('unreachable: VR raised twice');

@@ -10,12 +10,19 @@ import { describe, expect, it } from 'vitest';
 import { analyseTakeoff, runStudy, type StudyInput } from '../../../core/index.js';
 import { impracticalDoc, SINGLE_COMMUTER_ID } from './impractical.fixture.js';
 
+/** The hot and high study with its single-engine commuter given this power on a paved runway. */
+function weakSingleDoc(shaftPower_W: number): ReturnType<typeof impracticalDoc> {
+  const doc = impracticalDoc(45);
+  const single = doc.aircraft.find((a: { id: string }) => a.id === SINGLE_COMMUTER_ID);
+  single.shaftPower_W = shaftPower_W;
+  single.rollingFriction = 0.02;
+  return doc;
+}
+
 describe('a climb limit is sized at the climb-limited mass, or a reasoned "cannot operate" (item 7)', () => {
   it('an aircraft that misses the climb minimum even at OEW is "cannot operate here" with the reason, never "ok"', () => {
-    const doc = impracticalDoc(45);
+    const doc = weakSingleDoc(400000);
     const single = doc.aircraft.find((a: { id: string }) => a.id === SINGLE_COMMUTER_ID);
-    single.shaftPower_W = 400000;
-    single.rollingFriction = 0.02;
     // Precondition: even at OEW the single engine cannot meet the minimum at 3 500 m / 45 °C.
     const atOew = analyseTakeoff({ aircraft: single, mass_kg: single.oew_kg, pressureAltitude_m: 3500, temperature_c: 45, slope: 0, headwind_mps: 0, surface: 'dry' });
     expect(atOew.feasible && !atOew.climb.limited).toBe(false);
@@ -49,10 +56,7 @@ function twinDocWithDemoCommuter(): unknown {
 
 describe('the climb-limited mass is itself checked for feasibility (item 7)', () => {
   it('a climb-limited mass at which the takeoff is still not possible gives "cannot operate" with the takeoff reason', () => {
-    const doc = impracticalDoc(45);
-    const single = doc.aircraft.find((a: { id: string }) => a.id === SINGLE_COMMUTER_ID);
-    single.shaftPower_W = 500000;
-    single.rollingFriction = 0.02;
+    const doc = weakSingleDoc(500000);
     const r = runStudy(doc as StudyInput);
     const row = r.scenarios[0]!.rows.find((x) => x.aircraft === SINGLE_COMMUTER_ID)!;
     expect(row.status).toBe('cannot-operate');

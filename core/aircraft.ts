@@ -148,7 +148,7 @@ export interface AircraftProfile {
   /** Tailwheel: lift coefficient in the three-point attitude. */
   readonly threePointCl?: number;
 
-  /** Light aircraft: factor applied to the unfactored landing and takeoff distances (1.0–2.0). */
+  /** Light aircraft: factor applied to the unfactored landing and takeoff distances (1.0–2.0); default takeoff 1.25, landing 1/0.7 (core/operatingRules.ts). */
   readonly lightAircraftFactor?: number;
   /** Zero-lift drag, takeoff flaps, gear up (default: cd0Takeoff less the statistical gear increment). */
   readonly cd0TakeoffGearUp?: number;
@@ -246,7 +246,7 @@ export const AIRCRAFT_FIELDS: readonly FieldSpec[] = [
   f('freeRollTime_s', 'Free-roll time', 'times', 'time', 's', 0.5, 5, 'always', 'Time from touchdown to full braking.'),
   f('tailUpSpeed_mps', 'Tail-up speed', 'tailwheel', 'speed', 'm/s', 5, 60, 'tailwheel', 'Speed at which the tail is raised.'),
   f('threePointCl', 'Three-point lift coefficient', 'tailwheel', 'ratio', '', 0.3, 2.0, 'tailwheel', 'CL in the three-point attitude.'),
-  f('lightAircraftFactor', 'Light-aircraft distance factor', 'ground', 'ratio', '', 1.0, 2.0, 'optional', 'Factor on the unfactored distances for normal-category aircraft (default 1.0).'),
+  f('lightAircraftFactor', 'Light-aircraft distance factor', 'ground', 'ratio', '', 1.0, 2.0, 'optional', 'Factor on the unfactored takeoff and landing distances of normal-category aircraft; empty: takeoff × 1.25, landing ÷ 0.70 (planning default).'),
   f('cd0TakeoffGearUp', 'CD0, takeoff, gear up', 'aerodynamics', 'ratio', '', 0.01, 0.2, 'optional', 'Zero-lift drag, takeoff flaps, gear up (default: CD0 takeoff less the statistical gear increment).'),
   f('gearRetractionTime_s', 'Gear retraction time', 'times', 'time', 's', 2, 15, 'optional', 'Time from lift-off to gear fully up.'),
   f('vmca_mps', 'Minimum control speed, air', 'speeds', 'speed', 'm/s', 10, 90, 'optional', 'VMCA (CAS); bounds VR and V2 by 14 CFR 25.107.'),

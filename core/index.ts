@@ -8,6 +8,7 @@ export * from './surface.js';
 export * from './climate/index.js';
 export * from './runway.js';
 export * from './route/index.js';
+export * from './operatingRules.js';
 export * from './landing.js';
 export * from './requirement.js';
 export * from './plausibility.js';

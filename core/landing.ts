@@ -37,6 +37,10 @@ import { ConvergenceError } from './errors.js';
 import { SURFACES, type Surface, friction, isWet } from './surface.js';
 import { FT, G0, KT } from './units.js';
 import { check, finite, inRange } from './validate.js';
+import {
+  DEFAULT_OPERATING_RULES, EU_TURBOPROP_LANDING_FRACTION, EU_WET_FACTOR, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT,
+  ON_DEMAND_LANDING_FRACTION, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, type OperatingRuleSet, isOperatingRuleSet,
+} from './operatingRules.js';
 
 export const LANDING_METHOD_VERSION = 'landing-physics/2';
 
@@ -77,6 +81,14 @@ export const LANDING_RULE_LABELS: Readonly<Record<LandingRule, string>> = {
   'turboprop-alternate': 'turboprop alternate rule (distance / 0.7)',
   light: 'light-aircraft factor',
 };
+/** Plain words for a landing requirement under its rule set, e.g. "EU commercial air transport: distance ÷ 0.70". */
+export function landingRuleLabel(r: Pick<LandingRequirement, 'rule' | 'ruleSet' | 'multiplier' | 'basis'>): string {
+  const set = OPERATING_RULE_SET_INFO[r.ruleSet].label;
+  if (r.rule === 'light') return `${set}, light-aircraft factor × ${r.multiplier.toFixed(2)}`;
+  if (r.multiplier === 1) return `${set}, unfactored`;
+  return `${set}, ${r.rule === 'turboprop-alternate' ? 'turboprop alternate, ' : ''}distance × ${r.multiplier.toFixed(2)}`;
+}
+
 /** 'profile': VREF = profile.vrefFactor × VSR0 (default); '1.3vs': VREF = 1.3 × VS. */
 export type VrefBasis = 'profile' | '1.3vs';
 
@@ -95,7 +107,9 @@ export interface LandingInput {
   readonly surface: Surface;
   /** Operating rule; default from the certification basis (transport, commuter → 'transport'; normal → 'light'). */
   readonly rule?: LandingRule;
-  /** 'light' rule only: factor on the distance (1.0–2.0); default profile.lightAircraftFactor or 1.0. */
+  /** Operating rule set (default 'us-121'; core/operatingRules.ts). */
+  readonly ruleSet?: OperatingRuleSet;
+  /** 'light' rule only: factor on the distance (1.0–2.0); default profile.lightAircraftFactor, else ÷ 0.70 (LIGHT_LANDING_FACTOR_DEFAULT). */
   readonly factor?: number;
   readonly vrefBasis?: VrefBasis;
   /** Approach glide angle, degrees (default 3). */
@@ -136,6 +150,9 @@ export interface LandingSegments {
 
 export interface LandingRequirement {
   readonly rule: LandingRule;
+  readonly ruleSet: OperatingRuleSet;
+  /** Where the multiplier comes from, in words (rule set, regulation, "from memory" where so). */
+  readonly source: string;
   /** Which distance the rule multiplies: the dry-runway distance (121.195) or the distance on the surface (light). */
   readonly basis: 'dry-distance' | 'surface-distance';
   readonly basis_m: number;
@@ -445,18 +462,31 @@ export interface LandingRequirementInput {
   /** Unfactored distance on the dry equivalent surface, m (default: distance_m). */
   readonly dryDistance_m?: number;
   readonly rule: LandingRule;
+  /** Operating rule set (default 'us-121'; core/operatingRules.ts). */
+  readonly ruleSet?: OperatingRuleSet;
   /** Whether the runway is wet or slippery. */
   readonly wet: boolean;
   readonly engineType: EngineType;
-  /** 'light' rule: factor on the distance, 1.0–2.0 (default 1.0). */
+  /** 'light' rule: factor on the distance, 1.0–2.0 (default LIGHT_LANDING_FACTOR_DEFAULT, ÷ 0.70). */
   readonly factor?: number;
 }
 
+/** Where the rule's multiplier comes from, in words, for the trace, pages and the appendix. */
+function ruleSource(set: OperatingRuleSet, rule: LandingRule, fraction: number | undefined, wet: boolean): string {
+  const info = OPERATING_RULE_SET_INFO[set];
+  if (rule === 'light') return `light-aircraft factor (${LIGHT_FACTOR_SOURCE})${wet ? `; × ${EU_WET_FACTOR} wet (CAT.POL.A.330, from memory)` : ''}`;
+  if (fraction === undefined) return `${info.label}: unfactored (${info.source})`;
+  return `${info.label}: distance ÷ ${fraction.toFixed(2)}${wet ? ` × ${set === 'eu-cat' ? EU_WET_FACTOR : WET_TURBOJET_FACTOR} wet` : ''} (${info.source})`;
+}
+
 /**
- * Landing runway required by an operating rule.
- * 'transport' (14 CFR 121.195(b), (d)): dry distance / 0.60, × 1.15 on a wet runway for turbojets;
- * 'turboprop-alternate' (121.195(c)): dry distance / 0.70; 'light': distance on the surface × factor.
- * The result is never less than the unfactored distance on the actual surface.
+ * Landing runway required by an operating rule within a rule set (core/operatingRules.ts).
+ * us-121 'transport' (14 CFR 121.195(b), (d)): dry distance ÷ 0.60, × 1.15 on a wet runway for
+ * turbojets; 'turboprop-alternate' (121.195(c)): dry distance ÷ 0.70. us-135-eod: dry distance ÷ 0.80,
+ * × 1.15 wet for turbojets (135.385(f), (d)). us-91: the distance on the surface, unfactored. eu-cat:
+ * jets ÷ 0.60, turboprops ÷ 0.70, × 1.15 wet for all types. 'light': the distance × factor (eu-cat:
+ * the dry distance × factor × 1.15 when wet). The result is never less than the unfactored distance
+ * on the actual surface.
  */
 export function landingRequirement(input: LandingRequirementInput): LandingRequirement {
   const distance = inRange('distance_m', input.distance_m, { min: 0, minInclusive: false, unit: 'm' });
@@ -464,31 +494,51 @@ export function landingRequirement(input: LandingRequirementInput): LandingRequi
     ? distance
     : inRange('dryDistance_m', input.dryDistance_m, { min: 0, minInclusive: false, unit: 'm' });
   const rule = input.rule;
+  const set = input.ruleSet ?? DEFAULT_OPERATING_RULES;
   check(LANDING_RULES.includes(rule), 'rule', rule, `one of ${LANDING_RULES.join(', ')}`);
+  check(isOperatingRuleSet(set), 'ruleSet', set, `one of ${OPERATING_RULE_SETS.join(', ')}`);
+  check(rule !== 'turboprop-alternate' || set === 'us-121', 'rule', rule,
+    'the turboprop-alternate rule (121.195(c)) only under the us-121 rule set');
   check(typeof input.wet === 'boolean', 'wet', input.wet, 'true or false');
   check(input.factor === undefined || rule === 'light', 'factor', input.factor, 'a factor only with the light-aircraft rule');
   let basis: LandingRequirement['basis'];
   let basisM: number;
   let multiplier: number;
   let wetIncrease = false;
+  let fraction: number | undefined;
   if (rule === 'light') {
+    multiplier = inRange('factor', input.factor ?? LIGHT_LANDING_FACTOR_DEFAULT, FACTOR_RANGE);
+    if (set === 'eu-cat') {
+      basis = 'dry-distance';
+      basisM = dry;
+      if (input.wet) { multiplier *= EU_WET_FACTOR; wetIncrease = true; }
+    } else {
+      basis = 'surface-distance';
+      basisM = distance;
+    }
+  } else if (set === 'us-91') {
     basis = 'surface-distance';
     basisM = distance;
-    multiplier = inRange('factor', input.factor ?? 1, FACTOR_RANGE);
+    multiplier = 1;
   } else {
     basis = 'dry-distance';
     basisM = dry;
-    multiplier = 1 / (rule === 'transport' ? TRANSPORT_LANDING_FRACTION : TURBOPROP_ALTERNATE_FRACTION);
-    if (rule === 'transport' && input.wet && input.engineType === 'turbofan') {
-      multiplier *= WET_TURBOJET_FACTOR;
+    fraction = rule === 'turboprop-alternate' ? TURBOPROP_ALTERNATE_FRACTION
+      : set === 'us-135-eod' ? ON_DEMAND_LANDING_FRACTION
+        : set === 'eu-cat' && input.engineType !== 'turbofan' ? EU_TURBOPROP_LANDING_FRACTION
+          : TRANSPORT_LANDING_FRACTION;
+    multiplier = 1 / fraction;
+    if (input.wet && (set === 'eu-cat' || (rule === 'transport' && input.engineType === 'turbofan'))) {
+      multiplier *= set === 'eu-cat' ? EU_WET_FACTOR : WET_TURBOJET_FACTOR;
       wetIncrease = true;
     }
   }
   const byRule = basisM * multiplier;
   const required = Math.max(byRule, distance);
   return {
-    rule, basis, basis_m: basisM, multiplier, wetIncreaseApplied: wetIncrease, byRule_m: byRule, required_m: required,
+    rule, ruleSet: set, basis, basis_m: basisM, multiplier, wetIncreaseApplied: wetIncrease, byRule_m: byRule, required_m: required,
     governedBy: byRule >= distance ? 'rule' : 'surface-distance',
+    source: ruleSource(set, rule, fraction, wetIncrease),
   };
 }
 
@@ -530,6 +580,9 @@ export function analyseLanding(input: LandingInput): LandingResult {
   const surface = input.surface;
   const rule = input.rule ?? defaultLandingRule(a);
   check(LANDING_RULES.includes(rule), 'rule', rule, `one of ${LANDING_RULES.join(', ')}`);
+  if (input.ruleSet !== undefined) {
+    check(isOperatingRuleSet(input.ruleSet), 'ruleSet', input.ruleSet, `one of ${OPERATING_RULE_SETS.join(', ')}`);
+  }
   if (rule === 'turboprop-alternate') {
     check(a.engineType === 'turboprop', 'rule', rule, 'the turboprop-alternate rule (121.195(c)) only for turboprop aircraft');
   }
@@ -537,7 +590,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
     check(rule === 'light', 'factor', input.factor, 'a factor only with the light-aircraft rule');
   }
   const lightFactor = rule === 'light'
-    ? inRange(input.factor !== undefined ? 'factor' : 'aircraft.lightAircraftFactor', input.factor ?? a.lightAircraftFactor ?? 1, FACTOR_RANGE)
+    ? inRange(input.factor !== undefined ? 'factor' : 'aircraft.lightAircraftFactor', input.factor ?? a.lightAircraftFactor ?? LIGHT_LANDING_FACTOR_DEFAULT, FACTOR_RANGE)
     : 1;
   const vrefBasis = input.vrefBasis ?? 'profile';
   check(vrefBasis === 'profile' || vrefBasis === '1.3vs', 'vrefBasis', vrefBasis, 'one of profile, 1.3vs');
@@ -685,16 +738,20 @@ export function analyseLanding(input: LandingInput): LandingResult {
   // Required runway by the operating rule.
   const req = landingRequirement({
     distance_m: distance, dryDistance_m: dryDistance, rule, wet: isWet(surface), engineType: a.engineType,
+    ...(input.ruleSet !== undefined ? { ruleSet: input.ruleSet } : {}),
     ...(rule === 'light' ? { factor: lightFactor } : {}),
   });
   const { multiplier, required_m: required } = req;
-  if (rule === 'light' && lightFactor === 1) {
-    assumptions.push('Normal-category aircraft have no regulatory landing factor; factor 1.0 used.');
+  if (rule === 'light') {
+    assumptions.push(a.lightAircraftFactor !== undefined || input.factor !== undefined
+      ? `Light-aircraft landing factor ${lightFactor.toFixed(2)} (${input.factor !== undefined ? 'given' : 'profile'}).`
+      : `Light-aircraft landing factor ${lightFactor.toFixed(2)}: ${LIGHT_FACTOR_SOURCE}.`);
   }
+  assumptions.push(`Landing factor: ${req.source}.`);
   if (req.governedBy === 'surface-distance') {
     warnings.push(`The unfactored distance on the ${surface} surface (${distance.toFixed(0)} m) exceeds the rule length (${req.byRule_m.toFixed(0)} m) and governs.`);
   }
-  put('multiplier', `Rule multiplier (${rule})`, multiplier, '');
+  put('multiplier', `Rule multiplier (${req.ruleSet}, ${rule})`, multiplier, '', req.source);
   put('required', 'Required landing runway', required, 'm');
 
   return {

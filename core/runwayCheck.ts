@@ -46,6 +46,7 @@ import { validateAircraft } from './aircraft.js';
 import { analyseTakeoff, ALL_ENGINES_FACTOR } from './takeoff/index.js';
 import type { InfeasibleReason, TakeoffFeasible, TakeoffInput, TakeoffResult } from './takeoff/types.js';
 import { analyseLanding, type LandingResult, type LandingRule, TRANSPORT_LANDING_FRACTION } from './landing.js';
+import type { OperatingRuleSet } from './operatingRules.js';
 import { payloadForRange, rangeForPayload } from './route/design.js';
 import type { ReservePolicy } from './route/reserves.js';
 import { DECLARED_DISTANCE_RANGE } from './runway.js';
@@ -469,6 +470,8 @@ export interface MaxLandingMassInput {
   /** Landing distance available, m (0 < LDA ≤ 6 000). */
   readonly lda_m: number;
   readonly rule?: LandingRule;
+  /** Operating rule set for the landing factor (default 'us-121'). */
+  readonly ruleSet?: OperatingRuleSet;
   /** Lightest mass searched, kg (default OEW; OEW … MLW). */
   readonly minMass_kg?: number;
   /** The aircraft's plausibility bound (default: computed from the aircraft, core/plausibility.ts). */
@@ -510,6 +513,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
       ...(input.temperature_c !== undefined ? { temperature_c: input.temperature_c } : {}),
       slope: input.slope ?? 0, headwind_mps: input.headwind_mps ?? 0, surface: input.surface,
       ...(input.rule !== undefined ? { rule: input.rule } : {}),
+      ...(input.ruleSet !== undefined ? { ruleSet: input.ruleSet } : {}),
     });
     return { mass_kg: m, r, allowed: r.status === 'ok' && r.required_m <= limit };
   };
@@ -660,6 +664,8 @@ export interface AssessExistingRunwayInput {
   /** Landing temperature, °C (undefined: ISA at the field, the certified basis). */
   readonly landingTemperature_c?: number;
   readonly landingRule?: LandingRule;
+  /** Operating rule set for the landing factor (default 'us-121'). */
+  readonly landingRuleSet?: OperatingRuleSet;
   /** Design route for the payload and range penalties: stage length, m, payload, kg, and reserves (all three, or none). */
   readonly stageLength_m?: number;
   readonly payload_kg?: number;
@@ -747,6 +753,7 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
     ...(input.landingTemperature_c !== undefined ? { temperature_c: input.landingTemperature_c } : {}),
     slope, headwind_mps: wind, surface: input.surface,
     ...(input.landingRule !== undefined ? { rule: input.landingRule } : {}),
+    ...(input.landingRuleSet !== undefined ? { ruleSet: input.landingRuleSet } : {}),
   };
   const land = analyseLanding({ ...landingIn, mass_kg: lm });
   const landingBeyond = land.status === 'ok' && !withinPlausibility(land.required_m, bound);

@@ -203,6 +203,8 @@ export const studies = sqliteTable(
     landingMass: text('landing_mass', { enum: ['mlw', 'route'] }).notNull().default('mlw'),
     /** Operating rule set (null: the default, 'us-121'). */
     operatingRules: text('operating_rules', { enum: ['us-121', 'us-135-eod', 'us-91', 'eu-cat'] }),
+    /** Recorded reason a corrected reference length beyond 35 % may govern (null: no override). */
+    referenceOverrideReason: text('reference_override_reason'),
   },
   (t) => [index('studies_site').on(t.siteId)],
 );

@@ -7,14 +7,16 @@
  * that the panel at design conditions shows the results table's figures: takeoff at the given mass,
  * elevation (= pressure altitude), temperature, slope (+ uphill) and wind (+ headwind); landing at MLW
  * on a level runway with the same wind, at ISA temperature unless `landingTemperature` is 'design'
- * (then at the given temperature). A requirement beyond the aircraft's plausibility bound
+ * (then at the given temperature), factored by the study's operating rule set. Above the climb-limited
+ * mass the takeoff is sized at that mass (the study's climb cap, core/takeoff/climbCap.ts) and says so. A requirement beyond the aircraft's plausibility bound
  * (core/plausibility.ts, the same bound the study rows, sweeps and runway check apply) is not a length:
  * the side says "cannot practically operate here" with the reason.
  */
 import type { WhatIfOutcomeView, WhatIfSide } from '../templates/whatif.js';
 import {
-  InputDomainError, aircraftPlausibilityBound, airAt, analyseLanding, analyseTakeoff, checkPlausibility, requiredLength,
-  standardTemperatureC, takeoffDistances, type AircraftProfile, type PlausibilityBound, type Surface,
+  InputDomainError, aircraftPlausibilityBound, airAt, analyseLanding, analyseTakeoff, checkPlausibility, climbCappedTakeoff,
+  climbLimitedPeak, landingRuleLabel, requiredLength, standardTemperatureC, takeoffDistances, type AircraftProfile,
+  type OperatingRuleSet, type PlausibilityBound, type Surface,
 } from '../core/index.js';
 
 export interface WhatIfInput {
@@ -31,6 +33,8 @@ export interface WhatIfInput {
   readonly headwind_mps: number;
   readonly surface: Surface;
   readonly landingTemperature?: 'isa' | 'design';
+  /** Operating rule set for the landing factor (default 'us-121'). */
+  readonly operatingRules?: OperatingRuleSet;
 }
 
 export type { WhatIfSide } from '../templates/whatif.js';
@@ -44,28 +48,45 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
   const a = input.aircraft;
   const air = airAt(input.elevation_m, input.temperature_c);
   const warnings: string[] = [];
-  const to = analyseTakeoff({
-    aircraft: a,
-    mass_kg: input.mass_kg,
-    pressureAltitude_m: input.elevation_m,
-    temperature_c: input.temperature_c,
-    slope: input.slope,
-    headwind_mps: input.headwind_mps,
-    surface: input.surface,
+  const runAt = (mass_kg: number, temperature_c: number) => analyseTakeoff({
+    aircraft: a, mass_kg, pressureAltitude_m: input.elevation_m, temperature_c, slope: input.slope,
+    headwind_mps: input.headwind_mps, surface: input.surface,
   });
-  warnings.push(...to.warnings);
-  // Above the climb-limited mass no runway length makes the takeoff legal, so no length is shown
-  // (the distance the model gives there can be kilometres of near-level engine-out flight).
-  const climbLimit = to.climb.limited
-    ? `Climb-limited: the ${to.climb.case} climb gradient ${(to.climb.gradient * 100).toFixed(2)} % is below the minimum ${(to.climb.minimum * 100).toFixed(2)} %; ${to.climb.maxMass_kg === undefined ? 'no mass above the empty mass meets it' : `the greatest mass meeting it is ${Math.floor(to.climb.maxMass_kg)} kg`}. A longer runway does not cure this.`
-    : undefined;
+  // The study's climb-cap rule (core/takeoff/climbCap.ts): above the climb-limited mass the takeoff is
+  // sized at that mass (no runway length makes the heavier takeoff legal), and a climb-limited
+  // requirement is the greatest over the temperatures up to the one given.
+  const capped = climbCappedTakeoff(a, input.mass_kg, (m) => runAt(m, input.temperature_c));
+  const to = capped.t;
+  warnings.push(...capped.first.warnings, ...(capped.climbLimited ? to.warnings : []));
+  const first = capped.first;
+  const limitText = `the ${first.climb.limitingLabel ?? `${first.climb.case} climb`} gradient ${(first.climb.gradient * 100).toFixed(2)} % is below the minimum ${(first.climb.minimum * 100).toFixed(2)} %`;
+  let climbLimit: string | undefined;
+  let note: string | undefined;
+  let takeoffRequired = to.feasible ? to.required_m : undefined;
+  if (capped.belowOew) {
+    climbLimit = `Cannot operate here: ${limitText}, and no mass down to the empty mass meets it. A longer runway does not cure this.`;
+  } else if (capped.climbLimited && to.feasible && to.climb.limited) {
+    climbLimit = `Cannot operate here: even at the climb-limited mass of ${Math.round(capped.mass_kg)} kg the ${to.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`;
+  } else if (!capped.climbLimited && to.feasible && to.climb.limited) {
+    climbLimit = `Climb-limited: ${limitText}. A longer runway does not cure this.`;
+  } else if (capped.climbLimited && to.feasible) {
+    note = `Climb-limited at ${Math.round(input.mass_kg)} kg (${limitText}): sized at the climb-limited mass of ${Math.round(capped.mass_kg)} kg, ${Math.round(input.mass_kg - capped.mass_kg)} kg offload. A longer runway does not allow more mass.`;
+    const peak = climbLimitedPeak(a, input.mass_kg, input.temperature_c, to.required_m, runAt);
+    if (peak) {
+      note += ` The requirement peaks below this temperature: ${Math.round(peak.required_m)} m at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${Math.round(peak.mass_kg)} kg), and is sized on that peak as the study does.`;
+      takeoffRequired = peak.required_m;
+    }
+  }
   const takeoffBeyond = to.feasible && !climbLimit
-    ? checkPlausibility(takeoffDistances(to), bound, { elevation_m: input.elevation_m, temperature_c: input.temperature_c, mass_kg: input.mass_kg })
+    ? checkPlausibility(takeoffDistances(to), bound, { elevation_m: input.elevation_m, temperature_c: input.temperature_c, mass_kg: capped.mass_kg })
     : undefined;
   const takeoff: WhatIfSide = takeoffBeyond
     ? { ok: false, impractical: true, reason: takeoffBeyond.reason }
-    : to.feasible && !climbLimit
-      ? { ok: true, required_m: to.required_m, governing: to.governing }
+    : to.feasible && !climbLimit && takeoffRequired !== undefined
+      ? {
+        ok: true, required_m: takeoffRequired, governing: to.governing,
+        ...(capped.climbLimited ? { climbLimitedMass_kg: capped.mass_kg } : {}), ...(note ? { note } : {}),
+      }
       : { ok: false, reason: climbLimit ?? (to.feasible ? '' : to.message) };
   const ld = analyseLanding({
     aircraft: a,
@@ -75,6 +96,7 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
     slope: 0,
     headwind_mps: input.headwind_mps,
     surface: input.surface,
+    ...(input.operatingRules !== undefined ? { ruleSet: input.operatingRules } : {}),
   });
   warnings.push(...ld.warnings);
   const landingBeyond = ld.status === 'ok'
@@ -87,7 +109,7 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
   const landing: WhatIfSide = landingBeyond
     ? { ok: false, impractical: true, reason: landingBeyond.reason }
     : ld.status === 'ok'
-      ? { ok: true, required_m: ld.required_m, governing: ld.requirement.rule }
+      ? { ok: true, required_m: ld.required_m, governing: landingRuleLabel(ld.requirement), note: ld.requirement.source }
       : { ok: false, reason: ld.reason };
   const impractical = takeoffBeyond?.reason ?? landingBeyond?.reason;
   let required: { length_m: number; governing: 'takeoff' | 'landing' } | undefined;

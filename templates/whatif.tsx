@@ -21,6 +21,10 @@ export interface WhatIfSide {
   readonly reason?: string;
   /** Not ok because the requirement is beyond the aircraft's plausibility bound (core/plausibility.ts). */
   readonly impractical?: boolean;
+  /** Takeoff sized at the climb-limited mass below the mass asked for, kg. */
+  readonly climbLimitedMass_kg?: number;
+  /** What the number rests on (climb cap and offload; the landing factor's source). */
+  readonly note?: string;
 }
 
 /** What the panel shows: the server's what-if outcome (server/whatif.ts computes it). */
@@ -125,8 +129,8 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
             ) : null}
             <table class="compact">
               <tbody>
-                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? caseLabel(o.takeoff.governing) : o.takeoff.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.takeoff.reason}</td></tr>
-                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? caseLabel(o.landing.governing) : o.landing.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.landing.reason}</td></tr>
+                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? <>{caseLabel(o.takeoff.governing)}{o.takeoff.note ? <div class="muted" data-testid="whatif-takeoff-note">{o.takeoff.note}</div> : null}</> : o.takeoff.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.takeoff.reason}</td></tr>
+                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? <>{caseLabel(o.landing.governing)}{o.landing.note ? <div class="muted">{o.landing.note}</div> : null}</> : o.landing.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.landing.reason}</td></tr>
                 <tr><th scope="row">Density altitude</th><td class="num">{fmt(o.densityAltitude_m, 'altitude', units)}</td><td>{fmtIsaDeviation(o.isaDeviation_c, units)}</td></tr>
                 <tr><th scope="row">Speeds</th><td colspan={2}>
                   {o.v1_mps !== undefined ? `V1 ${fmt(o.v1_mps, 'speed', units)}, ` : ''}VR {fmt(o.vr_mps, 'speed', units)}, V2 {fmt(o.v2_mps, 'speed', units)}

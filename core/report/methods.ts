@@ -51,6 +51,8 @@ export const METHOD_REFERENCES: readonly MethodReference[] = [
   { id: 'CFR25', text: '14 CFR Part 25, Airworthiness Standards: Transport Category Airplanes; 25.107, 25.109, 25.113, 25.121, 25.125.' },
   { id: 'CFR23', text: '14 CFR Part 23, Airworthiness Standards: Normal Category Airplanes; 23.51, 23.59 (pre-amendment 64), 23.2115, 23.2130.' },
   { id: 'CFR121', text: '14 CFR Part 121, Operating Requirements; 121.195 (landing limitations), 121.639 and 121.645 (fuel supply); 14 CFR 91.167.' },
+  { id: 'CFR135', text: '14 CFR Part 135, Operating Requirements: Commuter and On Demand Operations; 135.385 (landing limitations, (f) eligible on-demand 80 %).' },
+  { id: 'EUOPS', text: 'EU Air Operations Regulation (EU) No 965/2012, Annex IV (Part-CAT): CAT.POL.A.230, .235 (performance class A landing), CAT.POL.A.305, .325, .330 (class B takeoff and landing); rule numbers and percentages from memory.' },
   { id: 'AND', text: 'Anderson, Aircraft Performance and Design, McGraw-Hill, 1999; sections 5.3, 6.7, 6.8.' },
   { id: 'RAY', text: 'Raymer, Aircraft Design: A Conceptual Approach, AIAA; section 17.8 (takeoff analysis).' },
   { id: 'GUD', text: 'Gudmundsson, General Aviation Aircraft Design, Elsevier; chapters 17 (takeoff) and 22 (landing); propeller static thrust.' },
@@ -215,18 +217,21 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
     title: 'Landing distance and required landing length',
     summary:
       'The landing distance from 50 ft is the sum of approach, flare, free roll and braking. The required length applies ' +
-      'the operating rule: divide by 0.6 on a dry runway, 1.15 times that when wet for turbojets, or a chosen factor for light aircraft. ' +
+      'the study\'s operating rule set: under US Part 121 divide by 0.6 on a dry runway, 1.15 times that when wet for turbojets; ' +
+      'Part 135 eligible on-demand divides by 0.8, Part 91 is unfactored, the EU commercial rules divide turboprops by 0.7 and add 15 % when wet for all types. ' +
+      'Light aircraft take a planning factor of 1/0.7 on landing and 1.25 on takeoff unless the profile gives its own. ' +
       'Landing is computed at the landing mass, at ISA temperature unless the study chooses the design temperature.',
     formulas: [
       'VREF = vrefFactor × VSR0,   flare R = V_f²/(0.2·g),   free roll = N·V_TD',
       'braking s_b = 1/(2·g·J_A) · ln(1 + J_A·V_TD²/J_T)',
-      'required = LD/0.60 (dry);   × 1.15 wet, turbojets;   LD/0.70 turboprop alternate;   LD × factor (light)',
+      'us-121: required = LD/0.60 (dry), × 1.15 wet turbojets, LD/0.70 turboprop alternate;   us-135-eod: LD/0.80;   us-91: LD',
+      'eu-cat: LD/0.60 jets, LD/0.70 turboprops, × 1.15 wet all types;   light: LD × 1/0.7 (takeoff × 1.25) unless the profile sets a factor',
     ],
     symbols: 'J_T = μ_b·cosθ + sinθ − T_idle/W;  J_A = ρ·S·(C_D − μ_b·C_L)/(2·W).',
     limits: 'Reverse thrust never credited; no contaminated runways.',
-    sources: ['AND', 'CFR25', 'CFR121'],
+    sources: ['AND', 'CFR25', 'CFR121', 'CFR135', 'EUOPS'],
     doc: 'landing-corrections-classification.md',
-    docAnchors: ['s_b = 1/(2 g J_A) · ln(1 + J_A V_TD² / J_T)', 'dry-runway LD / 0.60', 'LD / 0.70'],
+    docAnchors: ['s_b = 1/(2 g J_A) · ln(1 + J_A V_TD² / J_T)', 'dry LD / 0.60', 'dry LD / 0.80', 'takeoff × 1.25'],
   },
   {
     id: 'icao-corrections',

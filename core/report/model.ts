@@ -16,6 +16,7 @@
 import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type QuantityKind } from '../aircraft.js';
 import { CAUTION_TEXT, CAUTION_TITLE } from '../caution.js';
 import { SURFACE_LABELS } from '../surface.js';
+import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SET_INFO } from '../operatingRules.js';
 import { monthName } from '../climate/index.js';
 import type {
   RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
@@ -362,6 +363,7 @@ function fleetBlocks(input: StudyInput, result: StudyResult, byId: ReadonlyMap<s
 
 function methodIntroBlocks(result: StudyResult): Block[] {
   const o = result.options;
+  const rules = OPERATING_RULE_SET_INFO[o.operatingRules ?? DEFAULT_OPERATING_RULES];
   const reserves = o.reserves.policy === 'custom'
     ? `custom (alternate ${o.reserves.alternate_km ?? 0} km, ${o.reserves.holding_min ?? 0} min)`
     : o.reserves.policy === 'international' ? 'international (10 % trip time, alternate, 30 min hold)' : `cruise plus alternate (${o.reserves.alternate_km ?? 370.4} km${o.reserves.alternate_km === undefined ? ', 200 NM default' : ''}) plus 45 minutes`;
@@ -371,6 +373,9 @@ function methodIntroBlocks(result: StudyResult): Block[] {
       { label: 'Primary takeoff method', value: t(STUDY_METHOD_LABEL[o.method]) },
       { label: 'Runway surface for the design case', value: t(SURFACE_LABELS[o.surface]) },
       { label: 'Landing temperature', value: t(o.landingTemperature === 'isa' ? 'ISA at the field (certified data basis)' : 'design temperature') },
+      { label: 'Operating rules (landing factors)', value: t(`${rules.label}: ${rules.summary} (${rules.source})`) },
+      { label: 'Light-aircraft factors', value: t(`takeoff × ${LIGHT_TAKEOFF_FACTOR_DEFAULT}, landing × ${LIGHT_LANDING_FACTOR_DEFAULT.toFixed(2)} unless the profile gives its own: ${LIGHT_FACTOR_SOURCE}`) },
+      ...(o.referenceOverrideReason !== undefined ? [{ label: 'Override of the 35 % limit (recorded)', value: t(`corrected reference lengths beyond the 35 % limit of the percentage corrections govern. Reason given: "${o.referenceOverrideReason}"`) }] : []),
       { label: 'Fuel reserves for the design takeoff mass', value: t(reserves) },
       { label: 'Regular-use threshold', value: t(`${o.regularUseThreshold.toLocaleString('en-US')} annual operations`) },
       { label: 'Planning increment for the recommended length', value: q(o.roundingIncrement_m, 'length') },
@@ -755,6 +760,9 @@ function listingBlocks(args: AppendixModelInput): Block[] {
     { label: 'Primary method', value: t(o.method) },
     { label: 'Surface', value: t(o.surface) },
     { label: 'Landing temperature', value: t(o.landingTemperature) },
+    { label: 'Landing mass', value: t(o.landingMass) },
+    { label: 'Operating rules', value: t(o.operatingRules ?? `${DEFAULT_OPERATING_RULES} (default)`) },
+    ...(o.referenceOverrideReason !== undefined ? [{ label: 'Reference override reason', value: t(o.referenceOverrideReason) }] : []),
     { label: 'Regular-use threshold (operations/year)', value: exact(o.regularUseThreshold, 'count') },
     { label: 'Planning increment', value: exact(o.roundingIncrement_m, 'length') },
     { label: 'Reserve policy', value: t(o.reserves.policy) },

@@ -36,7 +36,7 @@ import {
   ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DESIGN_TEMPERATURE_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, ROUNDING_INCREMENT_RANGE,
   RESERVE_TIME_RANGE_MIN, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM,
 } from '../fields.js';
-import { LANDING_RULE_LABELS, analyseLanding, referenceLandingSpeed, roskamLandingFieldLength } from '../landing.js';
+import { analyseLanding, landingRuleLabel, referenceLandingSpeed, roskamLandingFieldLength } from '../landing.js';
 import { referenceLengthAtSite } from '../reference.js';
 import { requiredLength } from '../requirement.js';
 import {
@@ -45,10 +45,11 @@ import {
 } from '../plausibility.js';
 import { designTakeoffMass, type ReservePolicy, type RouteResult } from '../route/index.js';
 import { analyseRunwayProfile, checkDeclaredDistances, checkProfileSlopes } from '../runway.js';
-import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, type TakeoffResult } from '../takeoff/index.js';
+import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, climbCappedTakeoff, climbLimitedPeak, type CappedTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
 import { validateAircraft } from '../aircraft.js';
 import { calibrateTakeoff, type TakeoffCalibrationResult } from '../calibrate.js';
+import { DEFAULT_OPERATING_RULES } from '../operatingRules.js';
 import { assessExistingRunway, existingRunwayCheckOf, type MaxLandingMassResult, type MaxTakeoffMassResult } from '../runwayCheck.js';
 import type {
   AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint,
@@ -60,8 +61,8 @@ import type {
 export const STUDY_METHOD_VERSION = 'runwright-methods-3';
 
 /** Temperature sweep around the design temperature, °C. */
-export const SENSITIVITY_TEMPERATURE_SPAN_C = 15;
-export const SENSITIVITY_TEMPERATURE_STEP_C = 2.5;
+export const SENSITIVITY_TEMPERATURE_SPAN_C = PEAK_SCAN_SPAN_C;
+export const SENSITIVITY_TEMPERATURE_STEP_C = PEAK_SCAN_STEP_C;
 /** Elevation sweep: sea level to the site elevation plus this, m, in this many steps. */
 export const SENSITIVITY_ELEVATION_ABOVE_M = 1000;
 export const SENSITIVITY_ELEVATION_STEPS = 8;
@@ -249,8 +250,14 @@ class Evaluator {
       aircraft: a, mass_kg, pressureAltitude_m,
       ...(this.options.landingTemperature === 'design' ? { temperature_c: this.site.designTemperature_c } : {}),
       slope: 0, headwind_mps: 0, surface: this.options.surface,
+      ruleSet: this.options.operatingRules ?? DEFAULT_OPERATING_RULES,
     });
   }
+}
+
+/** The recorded override that lets a corrected reference length beyond 35 % govern: always on the page and in the report. */
+function overrideWarning(what: 'Takeoff' | 'Landing', reference_m: number, model_m: number, reason: string): string {
+  return `${what}: OVERRIDE RECORDED — the corrected reference length (${Math.round(reference_m)} m) governs although the corrections exceed the 35 % limit of the percentage method; the ${what === 'Takeoff' ? 'physics' : 'landing'} model gives ${Math.round(model_m)} m. Reason given: "${reason}".`;
 }
 
 function takeoffComponents(t: TakeoffResult): TraceItem[] {
@@ -302,32 +309,9 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
   return out;
 }
 
-/**
- * The takeoff at the given conditions with the climb cap applied, the one rule for study rows, the
- * temperature scan and the sweeps. `first` is the takeoff at the mass asked for. When that mass misses
- * a climb minimum, `belowOew` says no mass down to OEW meets it, else `climbLimited` says the takeoff
- * `t` was re-run at the climb-limited mass `mass_kg`. `ok`: `t` is feasible and meets every minimum.
- */
-interface CappedTakeoff {
-  readonly first: TakeoffResult;
-  readonly t: TakeoffResult;
-  readonly mass_kg: number;
-  readonly climbLimited: boolean;
-  readonly belowOew: boolean;
-  readonly ok: boolean;
-}
-
+/** The takeoff at the given conditions with the climb cap applied (core/takeoff/climbCap.ts). */
 function cappedTakeoff(ev: Evaluator, a: AircraftProfile, mass_kg: number, cond: Conditions): CappedTakeoff {
-  const first = ev.takeoff(a, mass_kg, cond);
-  const bound = first.climb.limited || (!first.feasible && (first.reason === 'cannot-climb' || first.reason === 'cannot-climb-engine-out'));
-  const cm = first.climb.maxMass_kg;
-  const same = { first, t: first, mass_kg, climbLimited: false };
-  if (!bound) return { ...same, belowOew: false, ok: first.feasible };
-  if (cm === undefined || cm < a.oew_kg) return { ...same, belowOew: true, ok: false };
-  if (cm >= mass_kg) return { ...same, belowOew: false, ok: first.feasible && !first.climb.limited };
-  const m = Math.floor(cm);
-  const t = ev.takeoff(a, m, cond);
-  return { first, t, mass_kg: m, climbLimited: true, belowOew: false, ok: t.feasible && !t.climb.limited };
+  return climbCappedTakeoff(a, mass_kg, (m) => ev.takeoff(a, m, cond));
 }
 
 function routeSummary(row: FleetRowInput, r: RouteResult | undefined, mass_kg: number): RouteSummary {
@@ -450,16 +434,19 @@ function evaluateRow(
     const ref = referenceLengthAtSite({ aircraft: a, operation: 'takeoff', site: refSite, set });
     if (ref.status === 'ok') {
       summary.reference_m = ref.length_m;
-      if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && ref.specificStudyRequired) {
+      const referenceMethod = opts.method === 'reference-icao' || opts.method === 'reference-authority';
+      const overridden = referenceMethod && ref.specificStudyRequired && opts.referenceOverrideReason !== undefined;
+      if (referenceMethod && ref.specificStudyRequired && !overridden) {
         // Beyond the 35 % limit of the percentage corrections (domain reference §1.1) the corrected
-        // length is indicative only and never governs: the physics model sizes the row.
+        // length is indicative only and never governs without a recorded override: the physics model sizes the row.
         warnings.push(...ref.warnings);
         warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${Math.round(ref.length_m)} m) is shown as indicative only and does not govern; the physics model (${Math.round(t.required_m)} m) sizes this aircraft.`);
-      } else if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
+      } else if (referenceMethod) {
         takeoffRequired = ref.length_m;
         summary.required_m = ref.length_m;
-        summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections`;
+        summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections${overridden ? ' (override beyond the 35 % limit)' : ''}`;
         warnings.push(...ref.warnings);
+        if (overridden) warnings.push(overrideWarning('Takeoff', ref.length_m, t.required_m, opts.referenceOverrideReason!));
         warnings.push('Reference-length method: the reference length is at MTOW; the design mass from the route is not credited.');
       }
     }
@@ -477,14 +464,7 @@ function evaluateRow(
   // the sensitivity grid up to the design temperature, with the climb cap applied at each.
   if (climbOffload !== undefined && takeoffRequired === t.required_m) {
     const uncapped = mass + climbOffload;
-    let peak: { temperature_c: number; required_m: number; mass_kg: number } | undefined;
-    for (let dt = -SENSITIVITY_TEMPERATURE_SPAN_C; dt < -1e-9; dt += SENSITIVITY_TEMPERATURE_STEP_C) {
-      const temperature_c = ev.site.designTemperature_c + dt;
-      if (temperature_c < -60) continue;
-      const c = cappedTakeoff(ev, a, uncapped, { ...cond, temperature_c });
-      if (!c.ok || !c.t.feasible) continue;
-      if (c.t.required_m > (peak?.required_m ?? takeoffRequired)) peak = { temperature_c, required_m: c.t.required_m, mass_kg: c.mass_kg };
-    }
+    const peak = climbLimitedPeak(a, uncapped, ev.site.designTemperature_c, takeoffRequired, (m, temperature_c) => ev.takeoff(a, m, { ...cond, temperature_c }));
     if (peak) {
       warnings.push(
         `The takeoff requirement of this climb-limited aircraft peaks below the design temperature: ${Math.round(peak.required_m)} m at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${Math.round(peak.mass_kg)} kg) against ${Math.round(takeoffRequired)} m at the design temperature. The row is sized on the greatest requirement over temperatures up to the design temperature.`,
@@ -508,7 +488,8 @@ function evaluateRow(
     mass_kg: landingMass,
     distance_m: l.distance_m,
     required_m: l.required_m,
-    rule: LANDING_RULE_LABELS[l.requirement.rule],
+    rule: landingRuleLabel(l.requirement),
+    ruleSource: l.requirement.source,
     factor: l.requirement.multiplier,
     vref_mps: l.speeds.vref_mps,
     components: [
@@ -524,7 +505,11 @@ function evaluateRow(
   }
   if ((opts.method === 'reference-icao' || opts.method === 'reference-authority') && a.reference?.landing_m !== undefined) {
     const ref = referenceLengthAtSite({ aircraft: a, operation: 'landing', site: refSite, set: opts.method === 'reference-authority' ? 'authority' : 'icao' });
-    if (ref.status === 'ok' && ref.specificStudyRequired) {
+    if (ref.status === 'ok' && ref.specificStudyRequired && opts.referenceOverrideReason !== undefined) {
+      landingRequired = ref.length_m;
+      landingSummary = { ...landingSummary, required_m: ref.length_m, rule: 'reference length + corrections (override beyond the 35 % limit)' };
+      warnings.push(overrideWarning('Landing', ref.length_m, l.required_m, opts.referenceOverrideReason));
+    } else if (ref.status === 'ok' && ref.specificStudyRequired) {
       warnings.push(`Landing: the corrected reference length (${Math.round(ref.length_m)} m) is beyond the 35 % limit of the percentage corrections and is indicative only; the landing model (${Math.round(l.required_m)} m) governs.`);
     } else if (ref.status === 'ok') {
       landingRequired = ref.length_m;
@@ -551,6 +536,7 @@ function evaluateRow(
         pressureAltitude_m: ev.site.pressureAltitude_m,
         temperature_c: ev.site.designTemperature_c,
         landingTemperature_c: opts.landingTemperature === 'design' ? ev.site.designTemperature_c : undefined,
+        landingRuleSet: opts.operatingRules ?? DEFAULT_OPERATING_RULES,
         surface: opts.surface,
         takeoffMass_kg: mass,
         landingMass_kg: landingMass,

@@ -7,6 +7,7 @@ import type { AircraftProfile } from '../aircraft.js';
 import type { Surface } from '../surface.js';
 import type { ProfilePoint } from '../runway.js';
 import type { PlausibilityFinding } from '../plausibility.js';
+import type { OperatingRuleSet } from '../operatingRules.js';
 
 export interface MonthlyClimate {
   /** Calendar month 1–12. */
@@ -101,13 +102,16 @@ export interface StudyOptions {
   readonly landingTemperature: 'isa' | 'design';
   /** Landing mass: maximum landing mass (default, conservative) or the arrival mass of the design route. */
   readonly landingMass: 'mlw' | 'route';
-  /** Operating rule set for the landing factors (default 'us-121'; core/landing.ts). */
+  /** Operating rule set for the landing factors (default 'us-121'; core/operatingRules.ts). */
   readonly operatingRules?: OperatingRuleSet;
+  /**
+   * Recorded override, reference methods only: when given, a corrected reference length beyond the
+   * 35 % limit of the percentage corrections governs anyway, and the reason is printed beside every
+   * row it affects. Absent (default): such a length is indicative only and the physics model governs.
+   */
+  readonly referenceOverrideReason?: string;
 }
 
-/** Operating rule sets: US Part 121, Part 135 eligible on-demand, Part 91 unfactored, European CAT. */
-export type OperatingRuleSet = 'us-121' | 'us-135-eod' | 'us-91' | 'eu-cat';
-export const OPERATING_RULE_SETS: readonly OperatingRuleSet[] = ['us-121', 'us-135-eod', 'us-91', 'eu-cat'];
 
 export interface StudyInput {
   readonly name: string;
@@ -226,6 +230,8 @@ export interface LandingSummary {
   readonly distance_m: number;
   readonly required_m: number;
   readonly rule: string;
+  /** Where the rule's factor comes from (rule set, regulation; "from memory" where so). */
+  readonly ruleSource?: string;
   readonly factor: number;
   readonly vref_mps: number;
   readonly components: readonly TraceItem[];

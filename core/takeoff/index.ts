@@ -12,11 +12,13 @@
  * Governing distance: transport and commuter — the greatest of 1.15 × all-engines distance to 35 ft,
  * the engine-out distance to 35 ft and the accelerate-stop distance at the chosen V1 (single-engine:
  * 1.15 × all-engines); normal category — the all-engines distance to 50 ft × lightAircraftFactor
+ * (default 1.25, LIGHT_TAKEOFF_FACTOR_DEFAULT)
  * (engine-failure figures shown as information for twins).
  *
  * Validity: see model.ts (input ranges); dry-runway certification rules applied on every surface
  * (the surface changes friction only). Infeasible physics is a result with a reason, never NaN.
  */
+import { LIGHT_TAKEOFF_FACTOR_DEFAULT } from '../operatingRules.js';
 import { buildSpeedTable, distanceAt, type SpeedTable } from './quadrature.js';
 import {
   MIN_ACCELERATION_MPS2, RUN_INTERVALS, rollAcceleration, runTable, stopTable, takeoffSetup, withVrAtLeast,
@@ -45,6 +47,7 @@ import type {
 export type * from './types.js';
 export { takeoffSetup, rollAcceleration, stopDeceleration, TAKEOFF_INPUT_RANGES, MIN_ACCELERATION_MPS2 } from './model.js';
 export type { TakeoffSetup } from './model.js';
+export { climbCappedTakeoff, climbLimitedPeak, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, type CappedTakeoff } from './climbCap.js';
 export { airborneDistance, rotationDistance, TRANSITION_LOAD_FACTOR } from './airborne.js';
 export { gearDragIncrement, gearUpCd0, climbAtV2, firstSegmentAt, climbChecks } from './climb.js';
 export { energyAirborne, MAX_ENGINE_OUT_AIR_M, GEAR_SELECT_DELAY_S, AIR_STEPS } from './energyAirborne.js';
@@ -337,7 +340,8 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   const liftoff = sVr + rot;
   const toScreen = liftoff + air.distance_m;
   const midpoint = liftoff + air.distance_m / 2;
-  const lightFactor = a.lightAircraftFactor ?? 1;
+  // Light aircraft: the profile's factor, else the planning default (core/operatingRules.ts).
+  const lightFactor = a.lightAircraftFactor ?? LIGHT_TAKEOFF_FACTOR_DEFAULT;
   const factored = basis === 'normal' ? toScreen * lightFactor : ALL_ENGINES_FACTOR * toScreen;
   const vAvg = 0.7 * s.vlofG;
   const aAvg = Math.max(rollAcceleration(s, n, 0)(vAvg), MIN_ACCELERATION_MPS2);
@@ -360,6 +364,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   t('All engines: equation-of-motion distance to VLOF', sVlof, 'm');
   t('All engines: average-force estimate to VLOF', avgForce, 'm');
   t('All engines: time to VLOF', aeo.tCum[aeo.count]!, 's');
+  if (basis === 'normal') t(`Light-aircraft takeoff factor (${a.lightAircraftFactor !== undefined ? 'profile' : 'planning default'})`, lightFactor, '');
 
   // Engine failure.
   let engineOut: EngineOutResult | undefined;

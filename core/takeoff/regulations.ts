@@ -113,7 +113,7 @@ export const VLOF_OVER_VMU = 1.1;
 /** Plain words for each governing case, used by pages, the appendix and the what-if panel. */
 export const TAKEOFF_GOVERNING_LABELS: Readonly<Record<GoverningCase, string>> = {
   'all-engines-factored': '115 % of the all-engines distance',
-  'all-engines': 'all-engines distance',
+  'all-engines': 'all-engines distance × light-aircraft factor',
   'balanced-field': 'balanced field length',
   'engine-out': 'engine-out continued takeoff',
   'accelerate-stop': 'accelerate-stop distance',

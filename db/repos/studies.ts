@@ -78,6 +78,7 @@ function optionsToColumns(o: StudyOptions) {
     landingTemperature: o.landingTemperature,
     landingMass: o.landingMass,
     operatingRules: o.operatingRules ?? null,
+    referenceOverrideReason: o.referenceOverrideReason ?? null,
   };
 }
 
@@ -98,6 +99,7 @@ function columnsToOptions(r: StudyRow): StudyOptions {
     landingTemperature: r.landingTemperature,
     landingMass: r.landingMass,
     ...(r.operatingRules === null ? {} : { operatingRules: r.operatingRules }),
+    ...(r.referenceOverrideReason === null ? {} : { referenceOverrideReason: r.referenceOverrideReason }),
   };
 }
 

@@ -20,7 +20,12 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
     'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status', 'reason',
     `takeoff_mass_${mass.symbol}`, `required_takeoff_${len.symbol}`, `required_landing_${len.symbol}`, `required_${len.symbol}`,
     'governing_side', 'takeoff_governing_case', 'runway_design_code', 'aerodrome_code', 'critical',
-    `recommended_length_${len.symbol}`, 'warnings',
+    `recommended_length_${len.symbol}`,
+    // The spread between methods: the physics takeoff, the corrected reference length and the
+    // indicative cross-checks (never governing), and the landing rule with its source.
+    `takeoff_physics_${len.symbol}`, `takeoff_reference_corrected_${len.symbol}`, `takeoff_torenbeek_indicative_${len.symbol}`,
+    `takeoff_roskam_indicative_${len.symbol}`, `landing_distance_unfactored_${len.symbol}`, 'landing_rule', 'landing_rule_source',
+    `landing_roskam_indicative_${len.symbol}`, 'warnings',
   ];
   const rows: string[][] = [];
   for (const s of out.scenarios) {
@@ -33,7 +38,13 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
         r.reason ?? '',
         M(r.takeoffMass_kg), ok ? L(r.requiredTakeoff_m) : '', ok ? L(r.requiredLanding_m) : '', ok ? L(r.required_m) : '',
         ok ? r.governing : '', r.takeoff?.governing ?? '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
-        critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '', r.warnings.join(' | '),
+        critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '',
+        // A row that cannot operate carries its reason only: no method figure that could read as a length.
+        ...(ok
+          ? [L(r.takeoff?.physics_m), L(r.takeoff?.reference_m), L(r.takeoff?.torenbeek_m), L(r.takeoff?.roskam_m),
+            L(r.landing?.distance_m), r.landing?.rule ?? '', r.landing?.ruleSource ?? '', L(r.landing?.roskam_m)]
+          : ['', '', '', '', '', '', '', '']),
+        r.warnings.join(' | '),
       ]);
     }
   }

@@ -3,7 +3,8 @@
  * converted from the user's units; the options are then checked by the study file's zod schema.
  */
 import {
-  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, FLEET_PAYLOAD_RANGE, PASSENGER_MASS_RANGE,
+  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DEFAULT_OPERATING_RULES, FLEET_PAYLOAD_RANGE,
+  OPERATING_RULE_SETS, PASSENGER_MASS_RANGE,
   REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
   type FleetRowInput, type StudyOptions, type UnitSystem,
 } from '../../core/index.js';
@@ -40,6 +41,8 @@ export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: r
   const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', min: PASSENGER_MASS_RANGE.min, max: PASSENGER_MASS_RANGE.max, required: true }, system, errors);
   const landingTemperature = readChoice(values, 'landingTemperature', ['isa', 'design'] as const, errors, 'isa');
   const landingMass = readChoice(values, 'landingMass', ['mlw', 'route'] as const, errors, 'mlw');
+  const operatingRules = readChoice(values, 'operatingRules', OPERATING_RULE_SETS, errors, DEFAULT_OPERATING_RULES);
+  const referenceOverrideReason = readText(values, 'referenceOverrideReason', { required: false, max: 500 }, errors);
   if (Object.keys(errors).length > 0 || name === undefined || siteId === undefined) return { ok: false, errors };
   const options = {
     regularUseThreshold,
@@ -56,6 +59,8 @@ export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: r
     passengerMass_kg,
     landingTemperature,
     landingMass,
+    operatingRules,
+    ...(referenceOverrideReason === undefined ? {} : { referenceOverrideReason }),
   };
   const r = optionsSchema.safeParse(options, { reportInput: true });
   if (!r.success) {
@@ -83,6 +88,8 @@ export function studyFormValues(s: { name: string; siteId: number; options: Stud
     passengerMass: fmtInput(o.passengerMass_kg, 'mass', system),
     landingTemperature: o.landingTemperature,
     landingMass: o.landingMass,
+    operatingRules: o.operatingRules ?? DEFAULT_OPERATING_RULES,
+    referenceOverrideReason: o.referenceOverrideReason ?? '',
   };
 }
 
@@ -99,6 +106,7 @@ export function newStudyValues(system: UnitSystem, siteId?: number): Record<stri
     passengerMass: fmtInput(95, 'mass', system),
     landingTemperature: 'isa',
     landingMass: 'mlw',
+    operatingRules: DEFAULT_OPERATING_RULES,
   };
 }
 

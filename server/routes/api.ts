@@ -6,7 +6,7 @@
  */
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import { InputDomainError, SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type StudyInput } from '../../core/index.js';
+import { InputDomainError, OPERATING_RULE_SETS, SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../../core/index.js';
 import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
 import {
   AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
@@ -83,6 +83,7 @@ const requirementSchema = z.strictObject({
     headwind_mps: num(TAKEOFF_INPUT_RANGES.headwind_mps.min, TAKEOFF_INPUT_RANGES.headwind_mps.max, 'm/s').default(0),
     surface: oneOf(SURFACES as unknown as readonly [string, ...string[]]).default('dry'),
     landingTemperature: oneOf(['isa', 'design']).default('isa'),
+    operatingRules: oneOf(OPERATING_RULE_SETS as unknown as readonly [string, ...string[]]).default('us-121'),
   }),
 });
 
@@ -280,6 +281,7 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
         headwind_mps: cond.headwind_mps,
         surface: cond.surface as (typeof SURFACES)[number],
         landingTemperature: cond.landingTemperature as 'isa' | 'design',
+        operatingRules: cond.operatingRules as OperatingRuleSet,
       });
       return c.json({ aircraft: a.id, conditions: { ...cond, mass_kg: cond.mass_kg ?? a.mtow_kg }, ...outcome });
     } catch (e) {

@@ -79,7 +79,7 @@ function studyWhatIf(studyId: number, input: StudyInput, latest: LoadedResult | 
   const design = start.conditions;
   const run = (c: WhatIfConditions): { outcome?: WhatIfOutcome; problem?: string } => {
     try {
-      return { outcome: whatIf({ aircraft: chosen, ...c, landingTemperature: input.options.landingTemperature }) };
+      return { outcome: whatIf({ aircraft: chosen, ...c, landingTemperature: input.options.landingTemperature, ...(input.options.operatingRules ? { operatingRules: input.options.operatingRules } : {}) }) };
     } catch (e) {
       if (e instanceof InputDomainError) return { problem: e.message };
       throw e;

@@ -10,7 +10,7 @@ import { z } from 'zod';
 import {
   ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, CONTINGENCY_FRACTION_RANGE,
   DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE,
-  MONTHLY_MEAN_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE,
+  MONTHLY_MEAN_RANGE, OPERATING_RULE_SETS, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE,
   RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
   analyseRunwayProfile, checkDerivedDesignTemperature, checkProfileSlopes, checkRunwayDeclaredDistances,
   designTemperatureFromMonthly, type StudyInput,
@@ -110,6 +110,14 @@ export const optionsSchema = z.strictObject({
   passengerMass_kg: numIn(PASSENGER_MASS_RANGE).default(95),
   landingTemperature: oneOf(['isa', 'design']).default('isa'),
   landingMass: oneOf(['mlw', 'route']).default('mlw'),
+  operatingRules: oneOf(OPERATING_RULE_SETS as unknown as readonly [string, ...string[]]).optional(),
+  /** Reference methods only: the recorded reason a corrected length beyond 35 % may govern (core StudyOptions). */
+  referenceOverrideReason: text(500).refine((x) => x.length >= 10, { error: 'at least 10 characters: say why the corrected length may govern' }).optional(),
+}).superRefine((o, ctx) => {
+  if (o.referenceOverrideReason !== undefined && o.method !== 'reference-icao' && o.method !== 'reference-authority') {
+    ctx.addIssue({ code: 'custom', path: ['referenceOverrideReason'], input: o.referenceOverrideReason,
+      message: `only with a reference-length method (reference-icao or reference-authority); the method is ${o.method}` });
+  }
 });
 
 export const studyFileSchema = z.strictObject({

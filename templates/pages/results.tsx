@@ -54,8 +54,9 @@ export function RowComponents(p: { row: RowResult }) {
       ) : null}
       {r.landing ? (
         <table class="compact">
-          <caption>Landing at {fmt(r.landing.mass_kg, 'mass', units)}: {r.landing.rule} rule × {r.landing.factor.toFixed(3)} ({fmt(r.landing.required_m, 'length', units)})</caption>
+          <caption>Landing at {fmt(r.landing.mass_kg, 'mass', units)}: {r.landing.rule} ({fmt(r.landing.required_m, 'length', units)})</caption>
           <tbody>
+            {r.landing.ruleSource ? <tr><th scope="row">Landing factor × {r.landing.factor.toFixed(3)}, from</th><td>{r.landing.ruleSource}</td></tr> : null}
             {r.landing.components.map((t) => <tr><th scope="row">{t.label}</th><td class="num">{traceValue(t, units)}</td></tr>)}
             <tr><th scope="row">VREF</th><td class="num">{fmt(r.landing.vref_mps, 'speed', units)}</td></tr>
             {r.landing.roskam_m !== undefined ? <tr><th scope="row">Roskam landing field length (indicative)</th><td class="num">{fmt(r.landing.roskam_m, 'length', units)}</td></tr> : null}

@@ -1,5 +1,5 @@
 /** Study pages: list, study form (name, site, options), overview with scenarios, scenario (fleet) form. */
-import { SURFACES, SURFACE_LABELS, type FleetRowInput, type StudyOptions } from '../../core/index.js';
+import { DEFAULT_OPERATING_RULES, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, SURFACES, SURFACE_LABELS, type FleetRowInput, type StudyOptions } from '../../core/index.js';
 import { ImportProblems, Notice, PostForm } from '../components.js';
 import { IDS } from '../ids.js';
 import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
@@ -65,7 +65,8 @@ export const STUDY_LABELS: Record<string, string> = {
   name: 'Study name', siteId: 'Site', units: 'Units of the study', regularUseThreshold: 'Regular-use threshold',
   roundingIncrement: 'Planning increment', surface: 'Design surface', method: 'Method', reservePolicy: 'Fuel reserves',
   alternate: 'Alternate distance', holding: 'Holding time', contingency: 'Contingency fuel', passengerMass: 'Mass per passenger',
-  landingTemperature: 'Landing temperature', landingMass: 'Landing mass',
+  landingTemperature: 'Landing temperature', landingMass: 'Landing mass', operatingRules: 'Operating rules',
+  referenceOverrideReason: 'Override reason (reference methods)',
 };
 
 export function StudyFormPage(p: { mode: 'new' | 'edit'; action: string; values: Values; errors: Errors; sites: readonly { id: number; name: string }[]; cancel: string }) {
@@ -91,6 +92,10 @@ export function StudyFormPage(p: { mode: 'new' | 'edit'; action: string; values:
             <SelectField name="method" label={STUDY_LABELS.method!} values={p.values} errors={p.errors} options={Object.entries(METHOD_LABELS).map(([value, label]) => ({ value, label }))} />
             <SelectField name="landingTemperature" label={STUDY_LABELS.landingTemperature!} values={p.values} errors={p.errors} options={[{ value: 'isa', label: 'ISA at the field (certified data basis)' }, { value: 'design', label: 'The design temperature' }]} />
             <SelectField name="landingMass" label={STUDY_LABELS.landingMass!} values={p.values} errors={p.errors} options={[{ value: 'mlw', label: 'Maximum landing mass' }, { value: 'route', label: 'Arrival mass of the design route' }]} />
+            <SelectField name="operatingRules" label={STUDY_LABELS.operatingRules!} values={p.values} errors={p.errors} options={OPERATING_RULE_SETS.map((r) => ({ value: r, label: OPERATING_RULE_SET_INFO[r].label }))}
+              hint="Sets the landing factors (docs/methods.md, Operating rules). Light aircraft use takeoff × 1.25 and landing ÷ 0.70 unless their profile gives a factor." />
+            <Field name="referenceOverrideReason" label={STUDY_LABELS.referenceOverrideReason!} values={p.values} errors={p.errors}
+              hint="Leave blank (recommended). With a reference-length method, a reason here lets a corrected length beyond the 35 % limit of the percentage corrections govern; the reason is printed beside every row it affects." />
           </div>
         </Section>
         <Section legend="Route and fuel">
@@ -166,6 +171,8 @@ export function StudyOverviewPage(p: StudyOverviewProps) {
           <li>Method: {METHOD_LABELS[o.method] ?? o.method}</li>
           <li>Regular use: at least {o.regularUseThreshold} annual operations · planning increment {fmt(o.roundingIncrement_m, 'length', units, units === 'si' ? 0 : 0)}</li>
           <li>Surface: {SURFACE_LABELS[o.surface]} · landing at {o.landingMass === 'mlw' ? 'MLW' : 'route arrival mass'}, {o.landingTemperature === 'isa' ? 'ISA' : 'design temperature'}</li>
+          <li>Operating rules: {OPERATING_RULE_SET_INFO[o.operatingRules ?? DEFAULT_OPERATING_RULES].label} ({OPERATING_RULE_SET_INFO[o.operatingRules ?? DEFAULT_OPERATING_RULES].summary})</li>
+          {o.referenceOverrideReason !== undefined ? <li><strong>Override recorded</strong>: corrected reference lengths beyond the 35 % limit govern. Reason: “{o.referenceOverrideReason}”</li> : null}
           <li>Reserves: {POLICY_LABELS[o.reserves.policy] ?? o.reserves.policy}{o.reserves.alternate_km !== undefined ? `, alternate ${fmt(o.reserves.alternate_km * 1000, 'distance', units)}` : ''}{o.reserves.contingencyFraction !== undefined ? `, contingency ${fmtPct(o.reserves.contingencyFraction)}` : ''} · {fmt(o.passengerMass_kg, 'mass', units)} per passenger</li>
         </ul>
       </details>

@@ -214,8 +214,9 @@ describe('14 CFR 121.195(b)-(d) landing factors (check case 19)', () => {
   it('turboprop alternate: LD / 0.70 [121.195(c)]', () => {
     expectClose(landingRequirement({ distance_m: 1400, rule: 'turboprop-alternate', wet: false, engineType: 'turboprop' }).required_m, 2000, { abs: 1e-9 });
   });
-  it('light rule: distance × factor (no regulatory factor; 1.0 default)', () => {
-    expectClose(landingRequirement({ distance_m: 500, rule: 'light', wet: false, engineType: 'piston' }).required_m, 500, { abs: 1e-12 });
+  it('light rule: distance × factor (no US regulatory factor; default ÷ 0.70, the class B factor of CAT.POL.A.325, from memory)', () => {
+    expectClose(landingRequirement({ distance_m: 500, rule: 'light', wet: false, engineType: 'piston' }).required_m, 500 / 0.7, { rel: 1e-12 });
+    expectClose(landingRequirement({ distance_m: 500, rule: 'light', wet: false, engineType: 'piston', factor: 1 }).required_m, 500, { abs: 1e-12 });
     expectClose(landingRequirement({ distance_m: 500, rule: 'light', wet: false, engineType: 'piston', factor: 1.43 }).required_m, 715, { abs: 1e-9 });
   });
   it('the rule is applied to the dry distance, and the unfactored wet distance is a floor', () => {
@@ -243,10 +244,12 @@ describe('analyseLanding — rules, defaults and options (common practice, 14 CF
     expect(wet.distance_m).toBeGreaterThan(dry.distance_m);
     expectClose(wet.required_m, Math.max((1.15 * dry.distance_m) / 0.6, wet.distance_m), { rel: 1e-12 });
   });
-  it('light aircraft: factor from the profile or the caller', () => {
+  it('light aircraft: factor from the caller, else the profile, else the planning default ÷ 0.70 (CAT.POL.A.325, from memory)', () => {
     const k = byId('kestrel-ut1');
     const r1 = ok(analyseLanding(base(k)));
-    expectClose(r1.required_m, r1.distance_m, { rel: 1e-12 });
+    expectClose(r1.required_m, r1.distance_m / 0.7, { rel: 1e-12 });
+    const r0 = ok(analyseLanding(base({ ...k, lightAircraftFactor: 1 })));
+    expectClose(r0.required_m, r0.distance_m, { rel: 1e-12 });
     const r2 = ok(analyseLanding(base(k, { factor: 1.43 })));
     expectClose(r2.required_m, 1.43 * r2.distance_m, { rel: 1e-12 });
   });

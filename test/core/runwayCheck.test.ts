@@ -158,7 +158,7 @@ const CASES: Case[] = [
   { label: 'swift-bj8, demo site, runway 22', aircraft: byId('swift-bj8'), ...SITE, slope: SLOPE_22, direction: RWY_22 },
   { label: 'plover-ct19, demo site, runway 22', aircraft: byId('plover-ct19'), ...SITE, slope: SLOPE_22, direction: RWY_22 },
   { label: 'albatross-nb180, sea level 25 °C, 1800 m', aircraft: ALBATROSS, pressureAltitude_m: 0, temperature_c: 25, headwind_mps: 0, surface: 'dry', slope: 0, direction: { tora_m: 1800, toda_m: 1800, asda_m: 1800 } },
-  { label: 'pipit-lt2 (normal category), demo site, runway 22', aircraft: byId('pipit-lt2'), ...SITE, slope: SLOPE_22, direction: { tora_m: 500, toda_m: 520, asda_m: 500 } },
+  { label: 'pipit-lt2 (normal category), demo site, runway 22', aircraft: byId('pipit-lt2'), ...SITE, slope: SLOPE_22, direction: { tora_m: 650, toda_m: 670, asda_m: 650 } },
 ];
 
 function needsAt(c: MaxTakeoffMassInput, mass_kg: number) {

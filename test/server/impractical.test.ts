@@ -37,7 +37,8 @@ describe('study outputs of a row beyond the plausibility bound', () => {
     expect(row.requiredLanding_m).toBeNull();
     expect(row.reason).toMatch(REASON);
     expect(json.scenarios[0].criticalAircraft).toBe('heron-st1');
-    expect(json.scenarios[0].recommendedLength_m).toBeLessThan(1300);
+    // The light single, with the planning factors (takeoff × 1.25, landing ÷ 0.70), sets a modest length.
+    expect(json.scenarios[0].recommendedLength_m).toBeLessThan(1500);
   });
 
   it('the results CSV carries the reason in its own column and no length for the row', () => {
@@ -47,6 +48,7 @@ describe('study outputs of a row beyond the plausibility bound', () => {
     expect(row.reason).toMatch(REASON);
     expect(row.required_takeoff_m).toBe('');
     expect(row.required_m).toBe('');
+    expect(row.takeoff_physics_m).toBe('');
     expect(row.critical).toBe('no');
     expect(rows.find((r) => r.critical === 'yes')!.aircraft_id).toBe('heron-st1');
   });

@@ -106,3 +106,31 @@ describe('appendix model of a study with a climb-limited aircraft', () => {
     ]);
   });
 });
+
+describe('appendix: operating rules and the recorded override (issue 13, items 12 and 14)', () => {
+  const factsOf = (m: AppendixModel, id: string) =>
+    (m.sections.find((s) => s.id === id)?.blocks ?? []).flatMap((b) => (b.type === 'facts' ? b.items : []));
+  const text = (c: Cell): string => ('text' in c ? c.text : '');
+  it('the method section names the rule set, its source and the light-aircraft factors; the listing names the set', () => {
+    const method = factsOf(model, 'method');
+    expect(text(method.find((f) => f.label === 'Operating rules (landing factors)')!.value)).toMatch(/^US Part 121 \(scheduled\): .*14 CFR 121\.195/);
+    expect(text(method.find((f) => f.label === 'Light-aircraft factors')!.value)).toMatch(/takeoff × 1\.25, landing × 1\.43 .*CAT\.POL\.A\.305.*from memory/);
+    expect(text(factsOf(model, 'inputs').find((f) => f.label === 'Operating rules')!.value)).toBe('us-121 (default)');
+    expect(method.some((f) => f.label.startsWith('Override'))).toBe(false);
+  });
+  it('an override reason is printed in the method section, in the listing and beside each row it lets govern', () => {
+    const doc = structuredClone(demo) as { options: Record<string, unknown>; site: Record<string, unknown> };
+    doc.options.method = 'reference-icao';
+    doc.options.operatingRules = 'eu-cat';
+    doc.options.referenceOverrideReason = 'The operator chart for this aerodrome agrees (test).';
+    doc.site.elevation_m = 2200;
+    const inp = inputOf(doc);
+    const res = runStudy(inp);
+    const m = buildAppendixModel({ input: inp, result: res, charts: [], inputDigest: 'e'.repeat(64), date: '2026-12-03', version: '0.1.0-test' });
+    expect(text(factsOf(m, 'method').find((f) => f.label === 'Override of the 35 % limit (recorded)')!.value)).toContain('The operator chart for this aerodrome agrees (test).');
+    expect(text(factsOf(m, 'inputs').find((f) => f.label === 'Reference override reason')!.value)).toBe('The operator chart for this aerodrome agrees (test).');
+    expect(text(factsOf(m, 'method').find((f) => f.label === 'Operating rules (landing factors)')!.value)).toMatch(/^EU commercial air transport/);
+    const warnings = JSON.stringify(m.sections.find((s) => s.id === 'assumptions')!.blocks);
+    expect(warnings).toContain('OVERRIDE RECORDED');
+  });
+});

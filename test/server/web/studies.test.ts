@@ -130,3 +130,43 @@ describe('study what-if', () => {
     expect(r.text).toMatch(/<input type="hidden" id="wi-prev" name="prev" value="kestrel-ut1" hx-swap-oob="true"/);
   });
 });
+
+describe('operating rules and the recorded override on the study form (issue 13, items 12 and 14)', () => {
+  const form = (siteId: number, extra: Record<string, string>) => ({
+    name: 'Rules', siteId: String(siteId), units: 'si', regularUseThreshold: '500', roundingIncrement: '50', surface: 'dry',
+    method: 'physics', reservePolicy: 'cruise-45min', passengerMass: '95', landingTemperature: 'isa', landingMass: 'mlw', ...extra,
+  });
+
+  it('an unknown rule set and an override without a reference method are refused, naming the field; nothing is saved', async () => {
+    const { app, sqlite, siteId } = makeApp();
+    const c = await browser(app);
+    const before = sqlite.prepare('select count(*) n from studies').get() as { n: number };
+    const bad = await c.post('/studies', form(siteId, { operatingRules: 'us-999' }));
+    expect(bad.status).toBe(422);
+    expect(bad.text).toContain('Operating rules</a>: &quot;us-999&quot; is not allowed; one of us-121, us-135-eod, us-91, eu-cat');
+    const over = await c.post('/studies', form(siteId, { referenceOverrideReason: 'Operator chart agrees with the corrected length.' }));
+    expect(over.status).toBe(422);
+    expect(over.text).toContain('Override reason (reference methods)</a>: only with a reference-length method');
+    const short = await c.post('/studies', form(siteId, { method: 'reference-icao', referenceOverrideReason: 'because' }));
+    expect(short.status).toBe(422);
+    expect(short.text).toContain('at least 10 characters');
+    expect(sqlite.prepare('select count(*) n from studies').get()).toEqual(before);
+  });
+
+  it('the chosen rule set and the override reason are saved, shown on the study page and kept by the edit form', async () => {
+    const { app, db, siteId } = makeApp();
+    const c = await browser(app);
+    const reason = 'Operator chart agrees with the corrected length.';
+    const st = await c.post('/studies', form(siteId, { method: 'reference-icao', operatingRules: 'eu-cat', referenceOverrideReason: reason }));
+    expect(st.status).toBe(303);
+    const id = Number(/\/studies\/(\d+)/.exec(st.headers.get('location')!)![1]);
+    expect(getStudy(db, id)!.options).toMatchObject({ operatingRules: 'eu-cat', referenceOverrideReason: reason });
+    const page = await c.get(`/studies/${id}`);
+    expect(page.text).toContain('Operating rules: EU commercial air transport');
+    expect(page.text).toContain('Override recorded');
+    expect(page.text).toContain(reason);
+    const edit = await c.get(`/studies/${id}/edit`);
+    expect(edit.text).toMatch(/<option value="eu-cat" selected/);
+    expect(edit.text).toContain(`value="${reason}"`);
+  });
+});

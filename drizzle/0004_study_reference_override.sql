@@ -1,0 +1,1 @@
+ALTER TABLE `studies` ADD `reference_override_reason` text;

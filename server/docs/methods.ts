@@ -10,6 +10,7 @@ export const METHOD_TOPICS = [
   'landing-corrections-classification.md',
   'route.md',
   'calibration-existing-runway.md',
+  'demo-fleet.md',
 ] as const;
 
 const dir = fileURLToPath(new URL('../../docs/methods/', import.meta.url));

@@ -162,11 +162,12 @@ describe('Propeller thrust blend: continuity, monotonicity, T(0) from the figure
       expect(custom.figureOfMeritDefault).toBe(false);
     }
   });
-  it('the demo 1.1 t single: static thrust ≈ 3.16 kN (its profile FM 0.50), and below the static value already at 15 m/s', () => {
-    // Before: k_p 0.85 gave 4.27 kN held flat to 19 m/s (min() blend). FM 0.55 would give 3.37 kN.
+  it('the demo 1.1 t single: static thrust ≈ 3.08 kN (its profile FM 0.50, 130 kW), and below the static value already at 15 m/s', () => {
+    // T0 = FM^(2/3) (2 ρ A P²)^(1/3) = 0.5^(2/3) × (2 × 1.225 × π 0.95² × 130 000²)^(1/3) = 3 085 N (hand value).
+    // Before: k_p 0.85 gave 4.27 kN held flat to 19 m/s (min() blend).
     const e = engineModel({ aircraft: byId('kestrel-ut1'), air: airAt(0, 15) });
     expect(e.figureOfMeritDefault).toBe(false);
-    expectClose(e.staticThrust_N, 3163, { abs: 5 });
+    expectClose(e.staticThrust_N, 3085, { abs: 5 });
     expect(e.thrust(15)).toBeLessThan(0.95 * e.staticThrust_N);
     expect(e.thrust(15)).toBeLessThan((0.6 * e.shaftPower_W!) / 15);
   });

@@ -60,20 +60,22 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
   warnings.push(...capped.first.warnings, ...(capped.climbLimited ? to.warnings : []));
   const first = capped.first;
   const limitText = `the ${first.climb.limitingLabel ?? `${first.climb.case} climb`} gradient ${(first.climb.gradient * 100).toFixed(2)} % is below the minimum ${(first.climb.minimum * 100).toFixed(2)} %`;
+  const kg = (x: number): string => `${Math.round(x).toLocaleString('en-US')} kg`;
+  const m = (x: number): string => `${Math.round(x).toLocaleString('en-US')} m`;
   let climbLimit: string | undefined;
   let note: string | undefined;
   let takeoffRequired = to.feasible ? to.required_m : undefined;
   if (capped.belowOew) {
     climbLimit = `Cannot operate here: ${limitText}, and no mass down to the empty mass meets it. A longer runway does not cure this.`;
   } else if (capped.climbLimited && to.feasible && to.climb.limited) {
-    climbLimit = `Cannot operate here: even at the climb-limited mass of ${Math.round(capped.mass_kg)} kg the ${to.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`;
+    climbLimit = `Cannot operate here: even at the climb-limited mass of ${kg(capped.mass_kg)} the ${to.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`;
   } else if (!capped.climbLimited && to.feasible && to.climb.limited) {
     climbLimit = `Climb-limited: ${limitText}. A longer runway does not cure this.`;
   } else if (capped.climbLimited && to.feasible) {
-    note = `Climb-limited at ${Math.round(input.mass_kg)} kg (${limitText}): sized at the climb-limited mass of ${Math.round(capped.mass_kg)} kg, ${Math.round(input.mass_kg - capped.mass_kg)} kg offload. A longer runway does not allow more mass.`;
+    note = `Climb-limited at ${kg(input.mass_kg)} (${limitText}): sized at the climb-limited mass of ${kg(capped.mass_kg)}, ${kg(input.mass_kg - capped.mass_kg)} offload. A longer runway does not allow more mass.`;
     const peak = climbLimitedPeak(a, input.mass_kg, input.temperature_c, to.required_m, runAt);
     if (peak) {
-      note += ` The requirement peaks below this temperature: ${Math.round(peak.required_m)} m at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${Math.round(peak.mass_kg)} kg), and is sized on that peak as the study does.`;
+      note += ` The requirement peaks below this temperature: ${m(peak.required_m)} at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${kg(peak.mass_kg)}), and is sized on that peak as the study does.`;
       takeoffRequired = peak.required_m;
     }
   }

@@ -58,7 +58,7 @@ import type {
 } from './types.js';
 
 /** Version of the study engine and the models it calls; changes whenever a number can change. */
-export const STUDY_METHOD_VERSION = 'runwright-methods-3';
+export const STUDY_METHOD_VERSION = 'runwright-methods-4';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = PEAK_SCAN_SPAN_C;

@@ -302,7 +302,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
     const seg = climb.limitingSegment === 'first' ? climb.firstSegment! : { gradient: climb.gradient, minimum: climb.minimum };
     warnings.push(
       climb.maxMass_kg !== undefined
-        ? `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %); the greatest mass that meets every climb minimum is ${climb.maxMass_kg.toFixed(0)} kg. A longer runway cannot cure this.`
+        ? `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %); the greatest mass that meets every climb minimum is ${Math.floor(climb.maxMass_kg).toLocaleString('en-US')} kg. A longer runway cannot cure this.`
         : `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %) even at the operating empty mass. A longer runway cannot cure this.`,
     );
   }

@@ -17,7 +17,7 @@ describe('whatIf climb limit (14 CFR 25.121(b) engine-out minimum, 2.4 % for twi
     expect(r.takeoff.ok).toBe(true);
     const m = r.takeoff.climbLimitedMass_kg!;
     expect(m).toBeLessThan(tern.mtow_kg);
-    expect(r.takeoff.note).toMatch(new RegExp(`^Climb-limited at ${tern.mtow_kg} kg \\(the .* gradient [\\d.]+ % is below the minimum 2\\.40 %\\): sized at the climb-limited mass of ${Math.round(m)} kg, ${Math.round(tern.mtow_kg - m)} kg offload\\.`));
+    expect(r.takeoff.note).toMatch(new RegExp(`^Climb-limited at ${tern.mtow_kg.toLocaleString("en-US")} kg \\(the .* gradient [\\d.]+ % is below the minimum 2\\.40 %\\): sized at the climb-limited mass of ${Math.round(m).toLocaleString("en-US")} kg, ${Math.round(tern.mtow_kg - m).toLocaleString("en-US")} kg offload\\.`));
     // The number is the takeoff at that mass (or the cooler-day peak the note names), never the heavier one.
     const atCap = whatIf({ ...base, mass_kg: m });
     expect(atCap.takeoff.climbLimitedMass_kg).toBeUndefined();

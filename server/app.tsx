@@ -160,7 +160,8 @@ export function createApp(deps: AppDeps): Hono<AppEnv> {
     else if (err instanceof InputDomainError) { status = 422; message = err.message; }
     else if (err instanceof ImportError) { status = 422; message = err.message; problems = err.problems.map(formatProblem); }
     else if (err instanceof JobTimeoutError || err instanceof JobUnavailableError) { status = 503; message = err.message; }
-    else if (err instanceof ConvergenceError) { message = `A calculation did not converge (${err.message}); nothing was changed.`; }
+    // A solver that did not meet its tolerance: the input could not be computed, a 422 with the solver's words.
+    else if (err instanceof ConvergenceError) { status = 422; message = `A calculation did not converge: ${err.message}. Nothing was changed; check the inputs named on the page, or report the case.`; }
     if (status === 500) console.error(err);
     if (api) return c.json({ error: status === 500 ? 'internal' : status === 503 ? 'unavailable' : 'rejected', message, ...(problems ? { problems } : {}) }, status);
     return page(c, { title: status === 404 ? 'Not found' : 'Problem', status }, () => (

@@ -30,9 +30,14 @@ export function sha256Hex(text: string): string {
   return createHash('sha256').update(text, 'utf8').digest('hex');
 }
 
-/** Digest of a study input (the identity of a study for reports and saved results). */
+/**
+ * Digest of a study input (the identity of a study for reports and saved results). The display units
+ * (`options.units`) are left out: they change no number, so switching a study between SI and US
+ * units keeps its saved result current (every view takes the units from the study or the request).
+ */
 export function inputDigest(input: StudyInput): string {
-  return sha256Hex(canonicalJson(input));
+  const { units: _display, ...options } = input.options;
+  return sha256Hex(canonicalJson({ ...input, options }));
 }
 
 export function studyOutput(input: StudyInput): StudyOutput {

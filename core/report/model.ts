@@ -629,7 +629,9 @@ function assumptionBlocks(result: StudyResult): Block[] {
     o.landingTemperature === 'isa'
       ? 'Landing at ISA temperature at the field elevation (certified landing data are scheduled for standard temperature).'
       : 'Landing at the design temperature (more demanding than the certified data basis).',
-    'Design takeoff mass from the longest regular route and its payload, with fuel reserves carried and not burnt; landing at the arrival mass.',
+    `Design takeoff mass from the longest regular route and its payload, with fuel reserves carried and not burnt; ${o.landingMass === 'route'
+      ? 'landing at the arrival mass of that route (at most the maximum landing mass).'
+      : 'landing at the maximum landing mass (conservative; the arrival mass is not credited).'}`,
     'No reverse thrust is credited; no obstacle-limited takeoff path is assessed.',
     `Regular use at ${o.regularUseThreshold.toLocaleString('en-US')} annual operations per aircraft group; the recommended length is rounded up to the planning increment.`,
     'Aircraft performance profiles are planning profiles; where the manufacturer\'s planning data exist, they take precedence.',

@@ -23,6 +23,7 @@ import type {
   StudyOptions,
   Surface,
 } from '../../core/index.js';
+import { DEFAULT_OPERATING_RULES } from '../../core/index.js';
 import { DuplicateIdError, NotFoundError } from '../errors.js';
 import { aircraft, fleetRows, savedResults, scenarios, sites, studies } from '../schema.js';
 import { transaction } from '../transaction.js';
@@ -77,7 +78,8 @@ function optionsToColumns(o: StudyOptions) {
     passengerMass_kg: o.passengerMass_kg,
     landingTemperature: o.landingTemperature,
     landingMass: o.landingMass,
-    operatingRules: o.operatingRules ?? null,
+    // Stored filled in, as the study file's schema fills it: equal studies give equal files and digests.
+    operatingRules: o.operatingRules ?? DEFAULT_OPERATING_RULES,
     referenceOverrideReason: o.referenceOverrideReason ?? null,
   };
 }
@@ -98,7 +100,7 @@ function columnsToOptions(r: StudyRow): StudyOptions {
     passengerMass_kg: r.passengerMass_kg,
     landingTemperature: r.landingTemperature,
     landingMass: r.landingMass,
-    ...(r.operatingRules === null ? {} : { operatingRules: r.operatingRules }),
+    operatingRules: r.operatingRules ?? DEFAULT_OPERATING_RULES,
     ...(r.referenceOverrideReason === null ? {} : { referenceOverrideReason: r.referenceOverrideReason }),
   };
 }

@@ -8,7 +8,7 @@ import { createRequire } from 'node:module';
 import { availableParallelism } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { rebuildError, runTask, type SerialError, type TaskName, type Tasks } from './tasks.js';
+import { rebuildError, runTask, serialiseError, type SerialError, type TaskName, type Tasks } from './tasks.js';
 
 /** What each task is, for messages ("… took longer than 120 s"). */
 const TASK_LABEL: Record<TaskName, string> = {
@@ -47,7 +47,14 @@ export interface JobRunner {
 export function inlineJobs(): JobRunner {
   return {
     mode: 'inline',
-    run: async (task, input) => runTask(task, input),
+    // Errors cross the same boundary as a worker's, so a test sees the types the workers give.
+    run: async (task, input) => {
+      try {
+        return await runTask(task, input);
+      } catch (e) {
+        throw rebuildError(serialiseError(e));
+      }
+    },
     close: async () => {},
   };
 }

@@ -3,9 +3,11 @@
  * computing a study, reading a climate station file, drawing an appendix PDF (pdfTask.ts), and
  * parsing and checking a catalogue file (the main thread then commits the validated rows: no task
  * ever opens the database; docs/storage.md, "One owner of the database file"). Errors are carried
- * across the thread boundary as plain objects and rebuilt with their type (ImportError, InputDomainError, DuplicateIdError).
+ * across the thread boundary as plain objects and rebuilt with their type (ImportError, InputDomainError
+ * with its range, ConvergenceError, DuplicateIdError); the inline runner passes its errors through the
+ * same boundary, so tests see what the workers give.
  */
-import { InputDomainError, type StudyInput } from '../../core/index.js';
+import { ConvergenceError, InputDomainError, type DomainRange, type StudyInput } from '../../core/index.js';
 import { DuplicateIdError } from '../../db/errors.js';
 import { catalogueTransferList, parseAircraftJson, type ParsedCatalogue } from '../catalogue.js';
 import { parseAircraftCsv } from '../io/csv.js';
@@ -49,23 +51,27 @@ export function runTask<K extends TaskName>(name: K, input: Tasks[K]['input']): 
 
 export type SerialError =
   | { readonly kind: 'import'; readonly what: string; readonly problems: readonly ImportProblem[] }
-  | { readonly kind: 'domain'; readonly field: string; readonly value: unknown; readonly allowed: string }
+  | { readonly kind: 'domain'; readonly field: string; readonly value: unknown; readonly allowed: string; readonly range?: DomainRange }
+  | { readonly kind: 'convergence'; readonly solver: string; readonly iterations: number; readonly residual: number }
   | { readonly kind: 'duplicate'; readonly what: 'aircraft' | 'site' | 'study'; readonly id: string | number }
-  | { readonly kind: 'other'; readonly name: string; readonly message: string };
+  | { readonly kind: 'other'; readonly name: string; readonly message: string; readonly stack?: string };
 
 export function serialiseError(e: unknown): SerialError {
   if (e instanceof ImportError) return { kind: 'import', what: e.what, problems: e.problems };
-  if (e instanceof InputDomainError) return { kind: 'domain', field: e.field, value: e.value, allowed: e.allowed };
+  if (e instanceof InputDomainError) return { kind: 'domain', field: e.field, value: e.value, allowed: e.allowed, ...(e.range ? { range: e.range } : {}) };
+  if (e instanceof ConvergenceError) return { kind: 'convergence', solver: e.solver, iterations: e.iterations, residual: e.residual };
   if (e instanceof DuplicateIdError) return { kind: 'duplicate', what: e.kind, id: e.id };
   const err = e instanceof Error ? e : new Error(String(e));
-  return { kind: 'other', name: err.name, message: err.message };
+  return { kind: 'other', name: err.name, message: err.message, ...(err.stack ? { stack: err.stack } : {}) };
 }
 
 export function rebuildError(s: SerialError): Error {
   if (s.kind === 'import') return new ImportError(s.what, s.problems);
-  if (s.kind === 'domain') return new InputDomainError(s.field, s.value, s.allowed);
+  if (s.kind === 'domain') return new InputDomainError(s.field, s.value, s.allowed, s.range);
+  if (s.kind === 'convergence') return new ConvergenceError(s.solver, s.iterations, s.residual);
   if (s.kind === 'duplicate') return new DuplicateIdError(s.what, s.id);
   const e = new Error(s.message);
   e.name = s.name;
+  if (s.stack) e.stack = s.stack;
   return e;
 }

@@ -40,7 +40,7 @@ export function reportRoutes(deps: ReportRouteDeps): Hono<AppEnv> {
     const latest = state.ready ? deps.service.latest(state) : undefined;
     if (!latest || !latest.current) return seeOther(c, `/studies/${study.id}/results`);
     const { output, input, saved } = latest.loaded;
-    const units = viewOf(c, output.options.units).units;
+    const units = viewOf(c, study.options.units).units;
     const now = deps.clock();
     const key = `${saved.id}:${units}:${issueDate(now)}`;
     let pdf = cache.get(key);

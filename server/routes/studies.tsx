@@ -355,19 +355,24 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     return seeOther(c, `/studies/${s.id}/results`);
   });
 
+  /**
+   * The saved result of the study's current inputs, as the page and the appendix use it. A result
+   * saved for other inputs is never served as a download: `latest` is then undefined, and the caller
+   * sends the user to the results page, which recomputes.
+   */
   const currentResult = (c: Context<AppEnv>) => {
     const s = studyOr404(c);
     if (!s) return undefined;
     const state = service.state(s.id);
     const latest = state.ready ? service.latest(state) : undefined;
-    return { study: s, latest };
+    return { study: s, latest: latest?.current ? latest : undefined };
   };
 
   app.get('/:id/results.csv', (c) => {
     const x = currentResult(c);
     if (!x) return notFound(c, 'study', c.req.param('id'));
     if (!x.latest) return seeOther(c, `/studies/${x.study.id}/results`);
-    const units = viewOf(c, x.latest.loaded.output.options.units).units;
+    const units = viewOf(c, x.study.options.units).units;
     // A saved result never changes: its files are built once (a large study's take tens of ms).
     const key = `csv:${x.latest.loaded.saved.id}:${units}`;
     let bytes = files.get(key);
@@ -388,12 +393,13 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
   app.get('/:id/results/rows/:s/:r', (c) => {
     const x = currentResult(c);
     if (!x) return notFound(c, 'study', c.req.param('id'));
+    if (!x.latest) return seeOther(c, `/studies/${x.study.id}/results`);
     const si = Number(c.req.param('s'));
     const ri = Number(c.req.param('r'));
-    const row = x.latest?.loaded.output.scenarios[si]?.rows[ri];
+    const row = x.latest.loaded.output.scenarios[si]?.rows[ri];
     if (!row) return notFound(c, 'result row', `${c.req.param('s')}/${c.req.param('r')}`);
     if (isHtmx(c)) return fragment(c, { units: x.study.options.units }, () => <RowComponents row={row} />);
-    const scenario = x.latest!.loaded.output.scenarios[si]!;
+    const scenario = x.latest.loaded.output.scenarios[si]!;
     return page(c, { title: `${row.aircraftName}: components`, units: x.study.options.units }, () => (
       <>
         <h1>{row.aircraftName} <span class="muted">in {scenario.name}</span></h1>

@@ -110,7 +110,7 @@ export const optionsSchema = z.strictObject({
   passengerMass_kg: numIn(PASSENGER_MASS_RANGE).default(95),
   landingTemperature: oneOf(['isa', 'design']).default('isa'),
   landingMass: oneOf(['mlw', 'route']).default('mlw'),
-  operatingRules: oneOf(OPERATING_RULE_SETS as unknown as readonly [string, ...string[]]).optional(),
+  operatingRules: oneOf(OPERATING_RULE_SETS as unknown as readonly [string, ...string[]]).default('us-121'),
   /** Reference methods only: the recorded reason a corrected length beyond 35 % may govern (core StudyOptions). */
   referenceOverrideReason: text(500).refine((x) => x.length >= 10, { error: 'at least 10 characters: say why the corrected length may govern' }).optional(),
 }).superRefine((o, ctx) => {

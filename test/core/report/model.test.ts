@@ -115,7 +115,7 @@ describe('appendix: operating rules and the recorded override (issue 13, items 1
     const method = factsOf(model, 'method');
     expect(text(method.find((f) => f.label === 'Operating rules (landing factors)')!.value)).toMatch(/^US Part 121 \(scheduled\): .*14 CFR 121\.195/);
     expect(text(method.find((f) => f.label === 'Light-aircraft factors')!.value)).toMatch(/takeoff × 1\.25, landing × 1\.43 .*CAT\.POL\.A\.305.*from memory/);
-    expect(text(factsOf(model, 'inputs').find((f) => f.label === 'Operating rules')!.value)).toBe('us-121 (default)');
+    expect(text(factsOf(model, 'inputs').find((f) => f.label === 'Operating rules')!.value)).toBe('us-121');
     expect(method.some((f) => f.label.startsWith('Override'))).toBe(false);
   });
   it('an override reason is printed in the method section, in the listing and beside each row it lets govern', () => {
@@ -134,3 +134,29 @@ describe('appendix: operating rules and the recorded override (issue 13, items 1
     expect(warnings).toContain('OVERRIDE RECORDED');
   });
 });
+
+describe('appendix: the landing mass is stated as the engine used it (issue 14 regression)', () => {
+  const assumptionsText = (m: AppendixModel) => JSON.stringify(m.sections.find((s) => s.id === 'assumptions')!.blocks);
+  it('default (MLW): the assumptions say maximum landing mass, never "landing at the arrival mass"', () => {
+    expect(input.options.landingMass).toBe('mlw');
+    expect(assumptionsText(model)).toContain('landing at the maximum landing mass');
+    expect(assumptionsText(model)).not.toContain('landing at the arrival mass.');
+    expect(text(factsOf(model, 'inputs').find((f) => f.label === 'Landing mass')!.value)).toBe('mlw');
+  });
+  it('route option: the assumptions say the arrival mass of the route', () => {
+    const doc = structuredClone(demo) as { options: Record<string, unknown> };
+    doc.options.landingMass = 'route';
+    const inp = inputOf(doc);
+    const res = runStudy(inp);
+    const m = buildAppendixModel({ input: inp, result: res, charts: [], inputDigest: 'd'.repeat(64), date: '2026-12-03', version: '0.1.0-test' });
+    expect(assumptionsText(m)).toContain('landing at the arrival mass of that route');
+    expect(text(factsOf(m, 'inputs').find((f) => f.label === 'Landing mass')!.value)).toBe('route');
+  });
+});
+
+function factsOf(m: AppendixModel, id: string) {
+  return (m.sections.find((s) => s.id === id)?.blocks ?? []).flatMap((b) => (b.type === 'facts' ? b.items : []));
+}
+function text(c: Cell): string {
+  return 'text' in c ? c.text : '';
+}

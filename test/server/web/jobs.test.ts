@@ -62,3 +62,36 @@ describe('worker-thread job pool', () => {
     expect(order).toEqual(['health 200', 'study']);
   });
 });
+
+describe('typed errors across the thread boundary (issue 14 regression)', () => {
+  it('ConvergenceError and InputDomainError (with its range) survive serialise → rebuild', async () => {
+    const { ConvergenceError, InputDomainError } = await import('../../../core/index.js');
+    const { rebuildError, serialiseError } = await import('../../../server/jobs/tasks.js');
+    const c = rebuildError(serialiseError(new ConvergenceError('greatest takeoff mass', 80, 0.4)));
+    expect(c).toBeInstanceOf(ConvergenceError);
+    expect(c.message).toBe('greatest takeoff mass did not converge after 80 iterations (residual 0.4)');
+    const d = rebuildError(serialiseError(new InputDomainError('mass_kg', 9, '≥ 10 kg', { min: 10, unit: 'kg' })));
+    expect(d).toBeInstanceOf(InputDomainError);
+    expect((d as InstanceType<typeof InputDomainError>).range).toEqual({ min: 10, unit: 'kg' });
+  });
+
+  it('a study whose computation fails to converge in a worker answers 422 with the solver\'s message, page and API', async () => {
+    const { ConvergenceError } = await import('../../../core/index.js');
+    const { rebuildError, serialiseError } = await import('../../../server/jobs/tasks.js');
+    // The worker's path: the task throws, the worker posts serialiseError(e), the pool rejects with rebuildError.
+    const failing = {
+      mode: 'workers' as const,
+      close: async () => {},
+      run: async () => { throw rebuildError(serialiseError(new ConvergenceError('balanced V1', 60, 0.02))); },
+    };
+    const { app, studyId } = makeApp({ jobs: failing as never });
+    const api = await app.request(`/api/studies/${studyId}/run`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: '{}' });
+    expect(api.status).toBe(422);
+    expect(((await api.json()) as { message: string }).message).toContain('balanced V1 did not converge after 60 iterations');
+    const { browser } = await import('./helpers.js');
+    const c = await browser(app);
+    const pageRes = await c.post(`/studies/${studyId}/run`, {});
+    expect(pageRes.status).toBe(422);
+    expect(pageRes.text).toContain('A calculation did not converge: balanced V1 did not converge');
+  });
+});

@@ -90,6 +90,15 @@ describe('building and computing a study', () => {
     await c.post(`/studies/${studyId}/scenarios/${scenario.id}`, { name: 'Renamed base', rows: String(scenario.fleet.length), ...Object.fromEntries(scenario.fleet.flatMap((r, i) => [[`r${i}_aircraft`, r.aircraft], [`r${i}_ops`, String(r.annualOperations)], [`r${i}_stage`, String(r.stageLength_km)], [`r${i}_payload`, String(r.payload_kg)]])) });
     const changed = await c.get(`/studies/${studyId}/results`);
     expect(changed.text).toContain('The inputs have changed since the last computation');
+    // Issue 14 regression: the downloads never serve the result of other inputs; they send the user
+    // to the results page (which recomputes), as the appendix does.
+    for (const path of ['results.csv', 'results.json', 'appendix.pdf', 'results/rows/0/0']) {
+      const r = await c.get(`/studies/${studyId}/${path}`);
+      expect(r.status, path).toBe(303);
+      expect(r.headers.get('location'), path).toBe(`/studies/${studyId}/results`);
+    }
+    await c.post(`/studies/${studyId}/run`, {});
+    expect((await c.get(`/studies/${studyId}/results.csv`)).text).toContain('Renamed base');
   });
 
   it('a study that is not ready lists what is missing instead of computing', async () => {
@@ -168,5 +177,30 @@ describe('operating rules and the recorded override on the study form (issue 13,
     const edit = await c.get(`/studies/${id}/edit`);
     expect(edit.text).toMatch(/<option value="eu-cat" selected/);
     expect(edit.text).toContain(`value="${reason}"`);
+  });
+});
+
+describe('switching a study between SI and US units keeps its result current (issue 14 regression)', () => {
+  it('the digest leaves out the display units; the page, the CSV and the appendix follow the new units without recomputing', async () => {
+    const { app, db, studyId } = makeApp();
+    const c = await browser(app);
+    await c.post(`/studies/${studyId}/run`, {});
+    const before = latestStudyResult(db, studyId)!;
+    const s = getStudy(db, studyId)!;
+    const { inputDigest } = await import('../../../server/study.js');
+    const si = demoInput();
+    expect(inputDigest({ ...si, options: { ...si.options, units: 'us' } })).toBe(inputDigest(si));
+    const { studyFormValues } = await import('../../../server/forms/study.js');
+    // The form's numbers are in SI (its `_units`); only the study's display units change.
+    const values = { ...studyFormValues({ name: s.name, siteId: s.siteId, options: s.options }, 'si'), _units: 'si', units: 'us' };
+    expect((await c.post(`/studies/${studyId}`, values)).status).toBe(303);
+    expect(getStudy(db, studyId)!.options.units).toBe('us');
+    const page = await c.get(`/studies/${studyId}/results`);
+    expect(page.text).not.toContain('The inputs have changed since the last computation');
+    expect(page.text).toMatch(/Recommended runway length[^]*? ft/);
+    expect(latestStudyResult(db, studyId)!.id).toBe(before.id);
+    const csv = await c.get(`/studies/${studyId}/results.csv`);
+    expect(csv.status).toBe(200);
+    expect(csv.text.split('\n')[1]).toContain('required_ft');
   });
 });

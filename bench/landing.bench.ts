@@ -3,8 +3,8 @@
  * and its dry equivalent, factoring, trace) over the demo fleet, alternating dry and wet runways and a
  * headwind case (quadrature path). Bounded to about 1.5 s.
  */
-import type { AircraftProfile } from '../core/aircraft.js';
-import { analyseLanding } from '../core/landing.js';
+import type { AircraftProfile } from '../core/index.js';
+import { analyseLanding } from '../core/index.js';
 import demoStudy from '../examples/demo-study.json' with { type: 'json' };
 
 const demoFleet = demoStudy.aircraft;

@@ -3,8 +3,8 @@
  * (demo aircraft tern-rj90, 'cruise-45min' reserves). No target set by an issue yet.
  */
 import { readFileSync } from 'node:fs';
-import type { AircraftProfile } from '../core/aircraft.js';
-import { designTakeoffMass, payloadRangeDiagram } from '../core/route/index.js';
+import type { AircraftProfile } from '../core/index.js';
+import { designTakeoffMass, payloadRangeDiagram } from '../core/index.js';
 import { ratePerSecond, type BenchModule } from './harness.js';
 
 const fleet = JSON.parse(readFileSync(new URL('../examples/demo-study.json', import.meta.url), 'utf8')).aircraft as AircraftProfile[];

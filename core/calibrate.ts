@@ -34,7 +34,7 @@ import type { AircraftProfile } from './aircraft.js';
 import { validateAircraft, AIRCRAFT_FIELDS } from './aircraft.js';
 import { analyseTakeoff, TAKEOFF_INPUT_RANGES } from './takeoff/index.js';
 import type { TakeoffInput, TakeoffResult } from './takeoff/types.js';
-import { brentRoot } from './takeoff/roots.js';
+import { brentRoot } from './numeric/index.js';
 import { analyseLanding, type LandingInput, type LandingResult } from './landing.js';
 import { InputDomainError } from './errors.js';
 import { check, finite, inRange } from './validate.js';

@@ -1,5 +1,6 @@
 export * from './errors.js';
 export * from './validate.js';
+export * from './numeric/index.js';
 export * from './fields.js';
 export * from './units.js';
 export * from './atmosphere.js';

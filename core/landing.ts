@@ -33,10 +33,10 @@
  */
 import { type AircraftProfile, type EngineType, stallSpeed, validateAircraft } from './aircraft.js';
 import { airAt, standardTemperatureC } from './atmosphere.js';
-import { ConvergenceError } from './errors.js';
 import { SURFACES, type Surface, friction, isWet } from './surface.js';
 import { FT, G0, KT } from './units.js';
 import { check, finite, inRange } from './validate.js';
+import { gaussLegendre } from './numeric/index.js';
 import {
   DEFAULT_OPERATING_RULES, EU_TURBOPROP_LANDING_FRACTION, EU_WET_FACTOR, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT,
   ON_DEMAND_LANDING_FRACTION, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, type OperatingRuleSet, isOperatingRuleSet,
@@ -262,54 +262,8 @@ export type LandingBrakingResult = LandingBrakingOk | LandingBrakingCannotStop;
 /** Gauss–Legendre points per panel and panels per smooth piece of the braking integrand. */
 const GL_POINTS = 16;
 const GL_PANELS = 4;
-const GL_NEWTON_TOL = 1e-15;
-const GL_NEWTON_MAX_ITER = 100;
 
-/** Nodes and weights of n-point Gauss–Legendre quadrature on [−1, 1] (Newton on P_n). */
-export function gaussLegendreNodes(n: number): { readonly nodes: readonly number[]; readonly weights: readonly number[] } {
-  check(Number.isInteger(n) && n >= 1 && n <= 64, 'n', n, 'a whole number from 1 to 64');
-  const nodes: number[] = new Array<number>(n).fill(0);
-  const weights: number[] = new Array<number>(n).fill(0);
-  for (let i = 0; i < Math.ceil(n / 2); i++) {
-    let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 0;
-    let it = 0;
-    for (;;) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      const pn = n === 1 ? x : p1;
-      const pnm1 = n === 1 ? 1 : p0;
-      dp = (n * (x * pn - pnm1)) / (x * x - 1);
-      const dx = pn / dp;
-      x -= dx;
-      if (Math.abs(dx) < GL_NEWTON_TOL) break;
-      if (++it >= GL_NEWTON_MAX_ITER) throw new ConvergenceError('Gauss–Legendre nodes', it, Math.abs(dx));
-    }
-    // Recompute the derivative at the converged node for the weight.
-    let p0 = 1;
-    let p1 = x;
-    for (let k = 2; k <= n; k++) {
-      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-      p0 = p1;
-      p1 = p2;
-    }
-    dp = n === 1 ? 1 : (n * (x * p1 - p0)) / (x * x - 1);
-    const w = 2 / ((1 - x * x) * dp * dp);
-    nodes[i] = -x;
-    nodes[n - 1 - i] = x;
-    weights[i] = w;
-    weights[n - 1 - i] = w;
-  }
-  if (n % 2 === 1) nodes[(n - 1) / 2] = 0;
-  return { nodes, weights };
-}
-
-const GL = gaussLegendreNodes(GL_POINTS);
+const GL = gaussLegendre(GL_POINTS);
 
 /**
  * Braking distance from the start airspeed to a stop over the ground (groundspeed V, airspeed V + V_w).

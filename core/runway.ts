@@ -26,6 +26,17 @@ import { InputDomainError } from './errors.js';
 import { RUNWAY_EFFECTIVE_GRADIENT_RANGE, RUNWAY_SLOPE_RANGE } from './fields.js';
 import { check, inRange } from './validate.js';
 
+
+/** One takeoff/landing direction of a runway with its declared distances, m. */
+export interface RunwayDirectionInput {
+  /** Runway designator of this takeoff/landing direction, e.g. "12". */
+  readonly designator: string;
+  readonly tora_m: number;
+  readonly toda_m: number;
+  readonly asda_m: number;
+  readonly lda_m: number;
+}
+
 export const RUNWAY_METHOD_VERSION = 'runway-geometry/1';
 
 /** One intermediate value shown with a runway result. */

@@ -51,12 +51,47 @@ import { payloadForRange, rangeForPayload } from './route/design.js';
 import type { ReservePolicy } from './route/reserves.js';
 import { DECLARED_DISTANCE_RANGE } from './runway.js';
 import type { Surface } from './surface.js';
-import type { ExistingRunwayCheck, RunwayDirectionInput } from './study/types.js';
-import { ConvergenceError } from './errors.js';
+import type { RunwayDirectionInput } from './runway.js';
+import { bisect } from './numeric/index.js';
 import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, withinPlausibility, type PlausibilityBound } from './plausibility.js';
 import { FT } from './units.js';
 import { standardTemperatureC } from './atmosphere.js';
 import { check, finite, inRange } from './validate.js';
+
+
+/** The check of one runway direction at the design masses, as a study row stores it. */
+export interface ExistingRunwayCheck {
+  readonly runway: string;
+  readonly designator: string;
+  /**
+   * Needs at the design takeoff mass against the declared distances, m (core/runwayCheck.ts);
+   * absent when the takeoff (or the landing) is not possible at all at that mass.
+   */
+  readonly takeoffRunNeeded_m?: number;
+  readonly takeoffDistanceNeeded_m?: number;
+  readonly accelerateStopNeeded_m?: number;
+  readonly landingNeeded_m?: number;
+  readonly tora_m: number;
+  readonly toda_m: number;
+  readonly asda_m: number;
+  readonly lda_m: number;
+  readonly takeoffOk: boolean;
+  readonly landingOk: boolean;
+  /** Greatest takeoff mass the declared distances allow at design conditions, kg. */
+  readonly maxTakeoffMass_kg?: number;
+  /** What limits it: 'TORA' | 'TODA' | 'ASDA' | 'climb' | 'MTOW' | 'none-feasible' (TakeoffMassLimit in core/runwayCheck.ts). */
+  readonly limitedBy: string;
+  /** Payload that can fly the design stage at that mass, and the penalty against the design payload. */
+  readonly payloadAtMax_kg?: number;
+  readonly payloadPenalty_kg?: number;
+  readonly passengersPenalty?: number;
+  /** Range with the design payload at that mass, and the penalty against the design stage. */
+  readonly rangeAtMax_km?: number;
+  readonly rangePenalty_km?: number;
+  /** Greatest landing mass the LDA allows, kg. */
+  readonly maxLandingMass_kg?: number;
+  readonly note?: string;
+}
 
 export const RUNWAY_CHECK_METHOD_VERSION = 'runway-check/1';
 
@@ -399,13 +434,12 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   let lo = lower === climbCap ? hiTrial : trial(lower);
   let lightSteps = 0;
   if (tooLight(lo) && !tooLight(hi)) {
-    let a0 = lo;
-    let b0 = hi;
-    while (b0.mass_kg - a0.mass_kg > TAKEOFF_MASS_TOL_KG) {
-      if (++lightSteps > MASS_MAX_ITERATIONS) throw new ConvergenceError('lightest mass with a decision speed', MASS_MAX_ITERATIONS, b0.mass_kg - a0.mass_kg);
-      const mid = trial(0.5 * (a0.mass_kg + b0.mass_kg));
-      if (tooLight(mid)) a0 = mid; else b0 = mid;
-    }
+    const light = bisect({
+      name: 'lightest mass with a decision speed', lo, hi, at: (t) => t.mass_kg, trial, holds: tooLight,
+      tol: TAKEOFF_MASS_TOL_KG, maxIterations: MASS_MAX_ITERATIONS,
+    });
+    lightSteps = light.iterations;
+    const b0 = light.hi;
     lo = b0;
     trace.push({ label: 'Lightest mass with a decision speed (V1 window not empty)', value: b0.mass_kg, unit: 'kg' });
     warnings.push(`Below about ${kg(b0.mass_kg)} the model finds no decision speed (VR below the V1 reached after a failure at VMCG); the search starts there.`);
@@ -427,12 +461,13 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     }, lightSteps);
   }
   // Bisection: lo allowed, hi refused.
-  let it = lightSteps;
-  while (hi.mass_kg - lo.mass_kg > TAKEOFF_MASS_TOL_KG) {
-    if (++it > MASS_MAX_ITERATIONS) throw new ConvergenceError('greatest takeoff mass', MASS_MAX_ITERATIONS, hi.mass_kg - lo.mass_kg);
-    const mid = trial(0.5 * (lo.mass_kg + hi.mass_kg));
-    if (mid.allowed) lo = mid; else hi = mid;
-  }
+  const found = bisect({
+    name: 'greatest takeoff mass', lo, hi, at: (t) => t.mass_kg, trial, holds: (t) => t.allowed,
+    tol: TAKEOFF_MASS_TOL_KG, maxIterations: MASS_MAX_ITERATIONS,
+  });
+  lo = found.lo;
+  hi = found.hi;
+  const it = lightSteps + found.iterations;
   const by: TakeoffMassLimit = trialLimit(hi);
   if (!hi.result.feasible) warnings.push(`Just above the greatest allowed mass the takeoff is infeasible: ${hi.result.message}`);
   if (hi.result.feasible && hi.result.engineOut?.v1Limited === 'vmcg') {
@@ -542,14 +577,10 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
         : `Even at ${kg(lower)} the landing is not possible here: ${r.reason}`,
     }, 0);
   }
-  let lo = bottom;
-  let hi = top;
-  let it = 0;
-  while (hi.mass_kg - lo.mass_kg > LANDING_MASS_TOL_KG) {
-    if (++it > MASS_MAX_ITERATIONS) throw new ConvergenceError('greatest landing mass', MASS_MAX_ITERATIONS, hi.mass_kg - lo.mass_kg);
-    const mid = trial(0.5 * (lo.mass_kg + hi.mass_kg));
-    if (mid.allowed) lo = mid; else hi = mid;
-  }
+  const { lo, hi, iterations: it } = bisect({
+    name: 'greatest landing mass', lo: bottom, hi: top, at: (t) => t.mass_kg, trial, holds: (t) => t.allowed,
+    tol: LANDING_MASS_TOL_KG, maxIterations: MASS_MAX_ITERATIONS,
+  });
   trace.push({ label: 'Bisection steps', value: it, unit: '' });
   const hiReq = req(hi);
   return done({

@@ -4,7 +4,7 @@
  * region (MainRegion), which carries its own <title> so that htmx updates the document title.
  */
 import type { Child } from 'hono/jsx';
-import { CAUTION_TEXT, CAUTION_TITLE } from '../core/caution.js';
+import { CAUTION_TEXT, CAUTION_TITLE } from '../core/index.js';
 import { IDS } from './ids.js';
 import { CSRF_FIELD, CSRF_HEADER, useView } from './view.js';
 import { UNIT_SYSTEM_LABELS } from './format.js';

@@ -8,6 +8,11 @@ import type { Surface } from '../surface.js';
 import type { ProfilePoint } from '../runway.js';
 import type { PlausibilityFinding } from '../plausibility.js';
 import type { OperatingRuleSet } from '../operatingRules.js';
+import type { RunwayDirectionInput } from '../runway.js';
+import type { ExistingRunwayCheck } from '../runwayCheck.js';
+
+export type { RunwayDirectionInput } from '../runway.js';
+export type { ExistingRunwayCheck } from '../runwayCheck.js';
 
 export interface MonthlyClimate {
   /** Calendar month 1–12. */
@@ -26,15 +31,6 @@ export interface SiteClimate {
   /** Number of years behind the monthly values, when known. */
   readonly years?: number;
   readonly monthly: readonly MonthlyClimate[];
-}
-
-export interface RunwayDirectionInput {
-  /** Runway designator of this takeoff/landing direction, e.g. "12". */
-  readonly designator: string;
-  readonly tora_m: number;
-  readonly toda_m: number;
-  readonly asda_m: number;
-  readonly lda_m: number;
 }
 
 export type Pavement = 'paved' | 'grass';
@@ -250,39 +246,6 @@ export interface RouteSummary {
   readonly arrivalMass_kg: number;
   readonly tripFuel_kg: number;
   readonly reserveFuel_kg: number;
-}
-
-export interface ExistingRunwayCheck {
-  readonly runway: string;
-  readonly designator: string;
-  /**
-   * Needs at the design takeoff mass against the declared distances, m (core/runwayCheck.ts);
-   * absent when the takeoff (or the landing) is not possible at all at that mass.
-   */
-  readonly takeoffRunNeeded_m?: number;
-  readonly takeoffDistanceNeeded_m?: number;
-  readonly accelerateStopNeeded_m?: number;
-  readonly landingNeeded_m?: number;
-  readonly tora_m: number;
-  readonly toda_m: number;
-  readonly asda_m: number;
-  readonly lda_m: number;
-  readonly takeoffOk: boolean;
-  readonly landingOk: boolean;
-  /** Greatest takeoff mass the declared distances allow at design conditions, kg. */
-  readonly maxTakeoffMass_kg?: number;
-  /** What limits it: 'TORA' | 'TODA' | 'ASDA' | 'climb' | 'MTOW' | 'none-feasible' (TakeoffMassLimit in core/runwayCheck.ts). */
-  readonly limitedBy: string;
-  /** Payload that can fly the design stage at that mass, and the penalty against the design payload. */
-  readonly payloadAtMax_kg?: number;
-  readonly payloadPenalty_kg?: number;
-  readonly passengersPenalty?: number;
-  /** Range with the design payload at that mass, and the penalty against the design stage. */
-  readonly rangeAtMax_km?: number;
-  readonly rangePenalty_km?: number;
-  /** Greatest landing mass the LDA allows, kg. */
-  readonly maxLandingMass_kg?: number;
-  readonly note?: string;
 }
 
 export interface RowResult {

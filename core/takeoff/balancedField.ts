@@ -24,7 +24,7 @@
  *
  * Validity: engine-out acceleration above MIN_ACCELERATION_MPS2 from VEF to VLOF; stop tables to VR.
  */
-import { brentRoot } from './roots.js';
+import { brentRoot } from '../numeric/index.js';
 import { distanceAt, speedAtTime, timeAt, type SpeedTable } from './quadrature.js';
 import { STOP_ALLOWANCE_S } from './regulations.js';
 import type { V1Basis } from './types.js';

@@ -18,7 +18,7 @@
  *
  * Validity: V2 below M 0.4; gradients as sines (equal to tangents within 0.1 % below 5 %).
  */
-import { brentRoot } from './roots.js';
+import { brentRoot } from '../numeric/index.js';
 import { withMass, type TakeoffSetup } from './model.js';
 import { climbMinimum, firstSegmentMinimum } from './regulations.js';
 

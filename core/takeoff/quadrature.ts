@@ -15,6 +15,7 @@
  *
  * Validity: a(V) ≥ `minAccel` > 0 at every node (otherwise the build reports where it fails).
  */
+import { gaussLegendre } from '../numeric/index.js';
 import { ConvergenceError } from '../errors.js';
 
 /** Gauss–Legendre points per interval. */
@@ -23,32 +24,6 @@ export const GAUSS_POINTS = 5;
 export const INVERSE_X_TOL = 1e-13;
 /** Iteration cap of that inversion. */
 export const INVERSE_MAX_ITERATIONS = 60;
-
-/** Gauss–Legendre nodes and weights on [−1, 1] (Newton on P_n; pure, computed once). */
-export function gaussLegendre(n: number): { x: Float64Array; w: Float64Array } {
-  const x = new Float64Array(n);
-  const w = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    let z = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 1;
-    for (let it = 0; it < 100; it++) {
-      let p0 = 1;
-      let p1 = z;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      dp = (n * (z * p1 - p0)) / (z * z - 1);
-      const dz = p1 / dp;
-      z -= dz;
-      if (Math.abs(dz) < 1e-16) break;
-    }
-    x[n - 1 - i] = z;
-    w[n - 1 - i] = 2 / ((1 - z * z) * dp * dp);
-  }
-  return { x, w };
-}
 
 /**
  * Matrix M ((n+1) × n, row-major) such that the antiderivative F(x) = ∫_{-1}^{x} p(ξ) dξ of the
@@ -83,7 +58,7 @@ function antiderivativeMatrix(nodes: Float64Array): Float64Array {
 }
 
 const RULE = gaussLegendre(GAUSS_POINTS);
-const ANTI = antiderivativeMatrix(RULE.x);
+const ANTI = antiderivativeMatrix(RULE.nodes);
 const NC = GAUSS_POINTS + 1; // coefficients per antiderivative
 /** Scratch buffers for node values, filled and consumed within one synchronous table build. */
 const FT_SCRATCH = new Float64Array(GAUSS_POINTS);
@@ -207,7 +182,7 @@ export function buildSpeedTable(i: TableInput): TableBuild {
     const h0 = hi[k]!;
     const mk = kind[k]!;
     for (let j = 0; j < n; j++) {
-      const x = RULE.x[j]!;
+      const x = RULE.nodes[j]!;
       const v = mapV(mk, l0, h0, x);
       const a = i.accel(v);
       evals++;

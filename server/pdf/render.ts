@@ -15,7 +15,7 @@
  */
 import PDFDocument from 'pdfkit';
 import type { StudyInput, UnitSystem } from '../../core/index.js';
-import { studyCharts } from '../../core/report/charts.js';
+import { studyCharts } from '../../core/index.js';
 import {
   buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row, type ValueKind,
 } from '../../core/index.js';

@@ -26,18 +26,19 @@ function specifiers(file: string): string[] {
   return [...src.matchAll(IMPORT_RE)].map((m) => m[1] ?? m[2] ?? m[3]!).filter(Boolean);
 }
 
-/** Top-level folder a relative import lands in, or the package name for bare imports. */
-function target(file: string, spec: string): { folder?: string; pkg?: string } {
+/** Top-level folder a relative import lands in (and the path inside the repository), or the package name for bare imports. */
+function target(file: string, spec: string): { folder?: string; pkg?: string; path?: string } {
   if (!spec.startsWith('.')) return { pkg: spec };
   const abs = resolve(root, dirname(file), spec);
-  return { folder: relative(root, abs).split(sep)[0] };
+  const path = relative(root, abs).split(sep).join('/');
+  return { folder: path.split('/')[0], path };
 }
 
-function violations(folder: string, rule: (t: { folder?: string; pkg?: string }) => string | undefined): string[] {
+function violations(folder: string, rule: (t: { folder?: string; pkg?: string; path?: string }, file: string) => string | undefined): string[] {
   const out: string[] = [];
   for (const f of files(folder)) {
     for (const s of specifiers(f)) {
-      const why = rule(target(f, s));
+      const why = rule(target(f, s), f.split(sep).join('/'));
       if (why) out.push(`${f}: imports '${s}' (${why})`);
     }
   }
@@ -63,6 +64,18 @@ describe('dependency direction (DEVELOPERS.md)', () => {
       expect(violations(folder, (t) => (t.folder && banned.includes(t.folder) ? `${folder} must not import ${t.folder}` : undefined))).toEqual([]);
     });
   }
+
+  it('server, templates, db, bench and scripts import core only through core/index.ts', () => {
+    const v = ['server', 'templates', 'db', 'bench', 'scripts'].flatMap((folder) =>
+      violations(folder, (t) => (t.folder === 'core' && t.path !== 'core/index.js' ? 'import core through core/index.ts' : undefined)));
+    expect(v).toEqual([]);
+  });
+
+  it('inside core, only the study engine and the report model import core/study (the models stand below it)', () => {
+    expect(violations('core', (t, file) =>
+      t.path?.startsWith('core/study/') && !/^core\/(study|report)\//.test(file) && file !== 'core/index.ts'
+        ? 'a model must not import the study engine above it' : undefined)).toEqual([]);
+  });
 
   it('the rule checker finds a forbidden import when one exists', () => {
     // A check that can fail: this very test file imports node:fs, which the core rule rejects.

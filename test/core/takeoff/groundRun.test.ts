@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { G0 } from '../../../core/units.js';
 import { runTable, stopTable, takeoffSetup, rollAcceleration, type TakeoffSetup } from '../../../core/takeoff/model.js';
 import {
-  buildSpeedTable, distanceAt, gaussLegendre, speedAtTime, timeAt, type SpeedTable,
+  buildSpeedTable, distanceAt, speedAtTime, timeAt, type SpeedTable,
 } from '../../../core/takeoff/quadrature.js';
 import { rotationDistance } from '../../../core/takeoff/airborne.js';
 import type { TakeoffInput } from '../../../core/takeoff/types.js';
@@ -32,21 +32,6 @@ function kConstants(s: TakeoffSetup, thrustTotal_N: number): { kt: number; ka: n
     * (s.muRolling * cl - a.cd0Takeoff - s.phi * s.k * cl * cl);
   return { kt, ka };
 }
-
-describe('Gauss–Legendre rule (Abramowitz & Stegun 25.4.29, derived)', () => {
-  it('5 points: nodes ±0.9061798459, ±0.5384693101, 0; weights sum to 2; exact to degree 9', () => {
-    const { x, w } = gaussLegendre(5);
-    expectClose(x[4]!, 0.9061798459386640, { abs: 1e-14 });
-    expectClose(x[3]!, 0.5384693101056831, { abs: 1e-14 });
-    expectClose(x[2]!, 0, { abs: 1e-15 });
-    expectClose(w[2]!, 128 / 225, { abs: 1e-14 });
-    let sum = 0;
-    let deg8 = 0;
-    for (let i = 0; i < 5; i++) { sum += w[i]!; deg8 += w[i]! * x[i]! ** 8; }
-    expectClose(sum, 2, { abs: 1e-14 });
-    expectClose(deg8, 2 / 9, { abs: 1e-14 });
-  });
-});
 
 describe('Ground run against the exact closed form, constant thrust and quadratic aerodynamics (Raymer §17.8 / Gudmundsson ch. 17 / Anderson Ex. 6.6; domain reference §6.1 ln form)', () => {
   it('calm, level: s = ln[(K_T + K_A·V²)/K_T]/(2g·K_A) within 0.1 % (achieved ≪ 0.001 %)', () => {

@@ -1,5 +1,5 @@
 /**
- * Bracketing root finder for the takeoff solvers (balanced V1, climb-limited mass).
+ * Bracketing root finder (balanced V1, climb-limited mass, calibration).
  *
  * Source: R. P. Brent, *Algorithms for Minimization without Derivatives* (1973), ch. 4: inverse
  * quadratic interpolation with secant and bisection safeguards; convergence is guaranteed once the

@@ -11,6 +11,7 @@
  * with margin; default 1.2); tail-up speed below VLOF for tailwheel aircraft; engine data matching the
  * engine type; minimum control speed given for multi-engine aircraft.
  */
+import type { QuantityKind } from './units.js';
 import { InputDomainError } from './errors.js';
 import {
   REFERENCE_LENGTH_RANGE, REFERENCE_TABLE_ELEVATION_RANGE, REFERENCE_TABLE_LENGTH_RANGE, REFERENCE_TABLE_MASS_RANGE,
@@ -177,10 +178,7 @@ export interface AircraftProfile {
   readonly reference?: ReferenceLengths;
 }
 
-export type QuantityKind =
-  | 'length' | 'shortLength' | 'mass' | 'area' | 'force' | 'power' | 'speed' | 'temperature'
-  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude' | 'distance' | 'temperatureDelta'
-  | 'energy' | 'massFlow';
+export type { QuantityKind } from './units.js';
 
 export type FieldGroup =
   | 'identity' | 'weights' | 'geometry' | 'aerodynamics' | 'propulsion' | 'ground' | 'speeds'

@@ -88,3 +88,109 @@ export const dFtoDC = (df: number): number => df / 1.8;
 
 /** Display unit systems. Storage and core stay SI. */
 export type UnitSystem = 'si' | 'us';
+
+// ---------------------------------------------------------------------------------------------
+// Display units: the one SI ↔ display table (pages, forms, CSV, the appendix and the JSON API all use it).
+// ---------------------------------------------------------------------------------------------
+
+/** What a number is, for choosing its display unit. */
+export type QuantityKind =
+  | 'length' | 'shortLength' | 'mass' | 'area' | 'force' | 'power' | 'speed' | 'temperature'
+  | 'time' | 'ratio' | 'count' | 'tsfc' | 'bsfc' | 'altitude' | 'distance' | 'temperatureDelta'
+  | 'energy' | 'massFlow';
+
+/**
+ * Display kinds: the quantity kinds plus slopes shown in percent. Temperature differences have no
+ * offset (1 K = 1.8 °F). Route distances are SI metres on the way in (a `_km` value is multiplied by
+ * 1000 first).
+ */
+export type DisplayKind = QuantityKind | 'slopePct';
+
+export interface UnitDef {
+  readonly symbol: string;
+  /** SI value → display value. */
+  readonly from: (si: number) => number;
+  /** Display value → SI value. */
+  readonly to: (shown: number) => number;
+  /** Decimal places shown. */
+  readonly digits: number;
+}
+
+const lin = (symbol: string, factor: number, digits: number): UnitDef => ({
+  symbol,
+  from: (v) => v / factor,
+  to: (v) => v * factor,
+  digits,
+});
+
+const DISPLAY_UNITS: Readonly<Record<UnitSystem, Readonly<Record<DisplayKind, UnitDef>>>> = {
+  si: {
+    length: lin('m', 1, 0),
+    shortLength: lin('m', 1, 2),
+    altitude: lin('m', 1, 0),
+    mass: lin('kg', 1, 0),
+    area: lin('m²', 1, 1),
+    force: lin('kN', 1000, 1),
+    power: lin('kW', 1000, 0),
+    speed: lin('kt', KT, 0),
+    temperature: { symbol: '°C', from: (c) => c, to: (c) => c, digits: 1 },
+    time: lin('s', 1, 1),
+    ratio: lin('', 1, 3),
+    count: lin('', 1, 0),
+    tsfc: lin('1/h', 1, 3),
+    bsfc: lin('kg/kWh', 1, 3),
+    distance: lin('km', 1000, 0),
+    slopePct: lin('%', 0.01, 2),
+    temperatureDelta: lin('K', 1, 1),
+    energy: lin('MJ', 1e6, 1),
+    massFlow: lin('kg/h', 1, 0),
+  },
+  us: {
+    length: lin('ft', FT, 0),
+    shortLength: lin('ft', FT, 1),
+    altitude: lin('ft', FT, 0),
+    mass: lin('lb', LB, 0),
+    area: lin('ft²', FT * FT, 0),
+    force: lin('lbf', LBF, 0),
+    power: lin('hp', HP, 0),
+    speed: lin('kt', KT, 0),
+    temperature: { symbol: '°F', from: (c) => cToF(c), to: (f) => fToC(f), digits: 1 },
+    time: lin('s', 1, 1),
+    ratio: lin('', 1, 3),
+    count: lin('', 1, 0),
+    tsfc: lin('1/h', 1, 3),
+    bsfc: lin('lb/(hp·h)', LB / (HP / 1000), 3),
+    distance: lin('NM', NM, 0),
+    slopePct: lin('%', 0.01, 2),
+    temperatureDelta: { symbol: '°F', from: dCtoDF, to: dFtoDC, digits: 1 },
+    // 1 ft·lbf = 0.3048 m × 4.4482216152605 N (exact definitions).
+    energy: lin('million ft·lbf', 1e6 * FT * LBF, 1),
+    massFlow: lin('lb/h', LB, 0),
+  },
+};
+
+/** The display unit of a kind in a unit system. */
+export function unitOf(kind: DisplayKind, system: UnitSystem): UnitDef {
+  return DISPLAY_UNITS[system][kind];
+}
+
+/** SI value → display value. */
+export const toDisplay = (si: number, kind: DisplayKind, system: UnitSystem): number => unitOf(kind, system).from(si);
+/** Display value → SI value. */
+export const fromDisplay = (shown: number, kind: DisplayKind, system: UnitSystem): number => unitOf(kind, system).to(shown);
+
+/**
+ * Text of a prefilled form input in the display unit: nine significant digits (not the display
+ * rounding), so that saving a form unchanged gives back the stored SI value to within 1e-9 relative.
+ * Blank for a missing or non-finite value.
+ */
+export function displayInputValue(si: number | undefined | null, kind: DisplayKind, system: UnitSystem): string {
+  if (si === undefined || si === null || !Number.isFinite(si)) return '';
+  return String(Number(toDisplay(si, kind, system).toPrecision(9)));
+}
+
+/** A limit of a range in the display unit, rounded to one digit more than the kind shows. */
+export function displayLimit(si: number, kind: DisplayKind, system: UnitSystem): string {
+  const u = unitOf(kind, system);
+  return String(Number(u.from(si).toFixed(Math.min(6, u.digits + 1))));
+}

@@ -4,7 +4,8 @@
  * them (and answers 422 with the raw values), so the browser never silently refuses what was typed.
  */
 import type { Child } from 'hono/jsx';
-import { unitSymbol, type DisplayKind } from './format.js';
+import type { DisplayKind } from '../core/index.js';
+import { unitSymbol } from './format.js';
 import { useView } from './view.js';
 
 export type Values = Readonly<Record<string, string>>;

@@ -5,7 +5,8 @@
  * "Update" button submits the same GET and the whole page comes back.
  */
 import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../core/index.js';
-import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol, type DisplayKind } from './format.js';
+import type { DisplayKind } from '../core/index.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol } from './format.js';
 import { fieldId, type Errors, type Values } from './forms.js';
 import { IDS } from './ids.js';
 import { useView } from './view.js';

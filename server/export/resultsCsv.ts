@@ -4,9 +4,8 @@
  * A row that cannot operate has empty requirement cells and its reason in the `reason` column.
  */
 import { stringify } from 'csv-stringify/sync';
-import { CAUTION_TEXT, type UnitSystem } from '../../core/index.js';
+import { CAUTION_TEXT, unitOf, type UnitSystem } from '../../core/index.js';
 import type { StudyOutput } from '../study.js';
-import { unitOf } from '../../templates/format.js';
 import { csvSafeRecords } from '../io/csvSafe.js';
 
 const round = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : '');

@@ -4,8 +4,7 @@
  * The zod schemas (server/schemas) then check the converted object; their messages, written in SI,
  * are restated in the user's units by `localiseMessage`.
  */
-import type { UnitSystem } from '../../core/index.js';
-import { fmtLimit, unitOf, type DisplayKind } from '../../templates/format.js';
+import { displayLimit as fmtLimit, unitOf, type DisplayKind, type UnitSystem } from '../../core/index.js';
 
 /** Form values as submitted: field name → raw text (first value for repeated names). */
 export type FormValues = Readonly<Record<string, string>>;

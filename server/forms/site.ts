@@ -10,8 +10,8 @@ import {
   MONTHLY_MEAN_RANGE, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE,
   InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances,
   type MonthlyClimate, type ProfilePoint, type RunwayDirectionInput, type RunwayInput, type SiteClimate, type UnitSystem,
+  unitOf,
 } from '../../core/index.js';
-import { unitOf } from '../../templates/format.js';
 import { climateSchema, runwaySchema } from '../schemas/study.js';
 import { numIn, text } from '../schemas/common.js';
 import type { FormResult } from './aircraft.js';

@@ -6,9 +6,8 @@ import {
   ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DEFAULT_OPERATING_RULES, FLEET_PAYLOAD_RANGE,
   OPERATING_RULE_SETS, PASSENGER_MASS_RANGE,
   REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
-  type FleetRowInput, type StudyOptions, type UnitSystem,
+  displayInputValue as fmtInput, type FleetRowInput, type StudyOptions, type UnitSystem,
 } from '../../core/index.js';
-import { fmtInput } from '../../templates/format.js';
 import { optionsSchema } from '../schemas/study.js';
 import { ident } from '../schemas/common.js';
 import type { FormResult } from './aircraft.js';

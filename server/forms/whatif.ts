@@ -1,6 +1,5 @@
 /** What-if panel form: conditions typed in the user's units → SI what-if conditions. */
-import { SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type Surface, type UnitSystem } from '../../core/index.js';
-import { unitOf, type DisplayKind } from '../../templates/format.js';
+import { SURFACES, TAKEOFF_INPUT_RANGES, unitOf, type AircraftProfile, type DisplayKind, type Surface, type UnitSystem } from '../../core/index.js';
 import { readChoice, readNumber, type FieldErrors, type FormValues } from './fields.js';
 import type { FormResult } from './aircraft.js';
 

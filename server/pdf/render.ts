@@ -15,11 +15,11 @@
  */
 import PDFDocument from 'pdfkit';
 import type { StudyInput, UnitSystem } from '../../core/index.js';
-import { studyCharts } from '../../core/index.js';
+import { studyCharts, unitOf } from '../../core/index.js';
 import {
   buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row, type ValueKind,
 } from '../../core/index.js';
-import { fmt, fmtLengthBoth, fmtNumber, fmtPct, unitOf, UNIT_SYSTEM_LABELS } from '../../templates/format.js';
+import { fmt, fmtLengthBoth, fmtNumber, fmtPct, UNIT_SYSTEM_LABELS } from '../../templates/format.js';
 import { canonicalJson, inputDigest, type StudyOutput } from '../study.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';
 import { FONT, registerFonts } from './fonts.js';

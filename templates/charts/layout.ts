@@ -5,7 +5,7 @@
 import { scaleBand, scaleLinear } from 'd3-scale';
 import { line, curveLinear, curveStepAfter } from 'd3-shape';
 import type { ChartModel, UnitSystem } from '../../core/index.js';
-import { unitOf } from '../format.js';
+import { unitOf } from '../../core/index.js';
 
 export interface Box { readonly width: number; readonly height: number; readonly left: number; readonly right: number; readonly top: number; readonly bottom: number }
 

@@ -77,6 +77,15 @@ describe('dependency direction (DEVELOPERS.md)', () => {
         ? 'a model must not import the study engine above it' : undefined)).toEqual([]);
   });
 
+  it('units are converted only through core/units.ts: the server\'s forms, schemas and exports do not import templates/format.ts, which holds no conversion table', () => {
+    const v = ['server/forms', 'server/schemas', 'server/export'].flatMap((folder) =>
+      violations(folder, (t) => (t.path === 'templates/format.js' ? 'convert units through core/units.ts, not templates' : undefined)));
+    expect(v).toEqual([]);
+    const fmt = readFileSync(join(root, 'templates/format.ts'), 'utf8');
+    expect(fmt).not.toMatch(/\bfrom:\s*\(|\bto:\s*\(|lin\(/);
+    expect(readFileSync(join(root, 'core/units.ts'), 'utf8')).toMatch(/export function unitOf/);
+  });
+
   it('the rule checker finds a forbidden import when one exists', () => {
     // A check that can fail: this very test file imports node:fs, which the core rule rejects.
     const v = violations('test/arch', (t) => (t.pkg?.startsWith('node:') ? 'node module' : undefined));

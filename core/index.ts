@@ -25,6 +25,7 @@ export * from './study/run.js';
 export * from './report/charts.js';
 export * from './calibrate.js';
 export * from './runwayCheck.js';
+export * from './whatif.js';
 export * from './report/siteCharts.js';
 export * from './report/model.js';
 export * from './report/methods.js';

@@ -5,48 +5,14 @@
  * "Update" button submits the same GET and the whole page comes back.
  */
 import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../core/index.js';
-import type { DisplayKind } from '../core/index.js';
+import type { DisplayKind, WhatIfOutcome } from '../core/index.js';
 import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol } from './format.js';
 import { fieldId, type Errors, type Values } from './forms.js';
 import { IDS } from './ids.js';
 import { useView } from './view.js';
 
-/** One side of the what-if: takeoff or landing. */
-export interface WhatIfSide {
-  readonly ok: boolean;
-  /** Required length, m (when ok). */
-  readonly required_m?: number;
-  /** Governing case, e.g. "balanced-field" or "transport". */
-  readonly governing?: string;
-  /** Why it cannot be done here (when not ok). */
-  readonly reason?: string;
-  /** Not ok because the requirement is beyond the aircraft's plausibility bound (core/plausibility.ts). */
-  readonly impractical?: boolean;
-  /** Takeoff sized at the climb-limited mass below the mass asked for, kg. */
-  readonly climbLimitedMass_kg?: number;
-  /** What the number rests on (climb cap and offload; the landing factor's source). */
-  readonly note?: string;
-}
-
-/** What the panel shows: the server's what-if outcome (server/whatif.ts computes it). */
-export interface WhatIfOutcomeView {
-  readonly takeoff: WhatIfSide;
-  readonly landing: WhatIfSide;
-  readonly required_m?: number;
-  readonly governing?: 'takeoff' | 'landing';
-  /** Reason when a side is beyond the plausibility bound: the aircraft cannot practically operate here. */
-  readonly impractical?: string;
-  /** The aircraft's plausibility bound, m. */
-  readonly plausibilityBound_m?: number;
-  readonly densityAltitude_m: number;
-  readonly isaDeviation_c: number;
-  readonly v1_mps?: number;
-  readonly vr_mps?: number;
-  readonly v2_mps?: number;
-  readonly vref_mps?: number;
-  readonly landingMass_kg: number;
-  readonly warnings: readonly string[];
-}
+/** What the panel shows: core's what-if outcome (core/whatif.ts). */
+export type WhatIfOutcomeView = WhatIfOutcome;
 
 export interface WhatIfProps {
   /** GET URL of the panel (whole page without htmx, the result region with it). */

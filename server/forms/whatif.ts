@@ -1,16 +1,9 @@
 /** What-if panel form: conditions typed in the user's units → SI what-if conditions. */
-import { SURFACES, TAKEOFF_INPUT_RANGES, unitOf, type AircraftProfile, type DisplayKind, type Surface, type UnitSystem } from '../../core/index.js';
+import { SURFACES, TAKEOFF_INPUT_RANGES, unitOf, type AircraftProfile, type DisplayKind, type UnitSystem, type WhatIfConditions } from '../../core/index.js';
 import { readChoice, readNumber, type FieldErrors, type FormValues } from './fields.js';
 import type { FormResult } from './aircraft.js';
 
-export interface WhatIfConditions {
-  readonly elevation_m: number;
-  readonly temperature_c: number;
-  readonly mass_kg: number;
-  readonly slope: number;
-  readonly headwind_mps: number;
-  readonly surface: Surface;
-}
+export type { WhatIfConditions } from '../../core/index.js';
 
 const R = TAKEOFF_INPUT_RANGES;
 

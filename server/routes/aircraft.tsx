@@ -18,19 +18,19 @@ import {
 import { IDS } from '../../templates/ids.js';
 import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
 import { AircraftChoices } from '../../templates/pages/studies.js';
-import { WhatIfPanel, WhatIfResult, type WhatIfProps } from '../../templates/whatif.js';
+import { WhatIfResult } from '../../templates/whatif.js';
 import { aircraftFigures } from '../aircraftFigures.js';
 import { commitCatalogue, commitCatalogueBulk, exportAircraftJson } from '../catalogue.js';
 import { readAircraftForm } from '../forms/aircraft.js';
 import { formValues, type FormValues } from '../forms/fields.js';
-import { readWhatIfForm, startingConditions, type WhatIfConditions } from '../forms/whatif.js';
+import type { WhatIfConditions } from '../forms/whatif.js';
+import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportAircraftCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
 import type { AppEnv } from '../web/env.js';
 import { FLEET_SUGGESTIONS, LIST_PAGE_SIZE, choosePage } from '../web/paging.js';
 import { fragment, isHtmx, page, seeOther, viewOf } from '../web/page.js';
-import { whatIf, type WhatIfOutcome } from '../whatif.js';
 import { InputDomainError } from '../../core/index.js';
 import { download, notFound, formUnits } from './common.js';
 
@@ -60,35 +60,13 @@ function referenceConditions(a: AircraftProfile): WhatIfConditions {
   return { elevation_m: 0, temperature_c: 15, mass_kg: a.mtow_kg, slope: 0, headwind_mps: 0, surface: 'dry' };
 }
 
-function runWhatIf(a: AircraftProfile, c: WhatIfConditions): { outcome?: WhatIfOutcome; problem?: string } {
-  try {
-    return { outcome: whatIf({ aircraft: a, ...c }) };
-  } catch (e) {
-    if (e instanceof InputDomainError) return { problem: e.message };
-    throw e;
-  }
-}
-
-/** The what-if panel's props for an aircraft, from the query (submitted panel) or the reference conditions. */
-export function aircraftWhatIf(a: AircraftProfile, query: FormValues, system: UnitSystem): { props: WhatIfProps; invalid: boolean } {
-  const start = startingConditions(referenceConditions(a), system, a);
-  const base = runWhatIf(a, start.conditions);
-  const submitted = ['temperature', 'elevation', 'mass', 'slope', 'wind'].some((k) => query[k] !== undefined);
-  const common = {
-    action: `${path(a.id)}/whatif`,
-    baseline: { required_m: base.outcome?.required_m, label: 'sea level, ISA, MTOW, dry, still air' },
+/** The what-if panel of an aircraft, from the query (submitted panel) or the reference conditions. */
+export function aircraftWhatIf(a: AircraftProfile, query: FormValues, system: UnitSystem): WhatIfPanelState {
+  return whatIfPanel({
+    action: `${path(a.id)}/whatif`, aircraft: a, start: referenceConditions(a),
+    baselineLabel: 'sea level, ISA, MTOW, dry, still air',
     intro: 'Change the conditions and the requirement follows (physics model; landing at MLW).',
-  };
-  if (!submitted) {
-    return { props: { ...common, values: start.values, errors: {}, ...(base.outcome ? { outcome: base.outcome } : {}), ...(base.problem ? { problem: base.problem } : {}) }, invalid: false };
-  }
-  const read = readWhatIfForm(query, system, a);
-  if (!read.ok) return { props: { ...common, values: query, errors: read.errors }, invalid: true };
-  const r = runWhatIf(a, read.value);
-  return {
-    props: { ...common, values: query, errors: {}, ...(r.outcome ? { outcome: r.outcome } : {}), ...(r.problem ? { problem: r.problem } : {}) },
-    invalid: r.problem !== undefined,
-  };
+  }, query, system);
 }
 
 export function aircraftRoutes(deps: AircraftRouteDeps): Hono<AppEnv> {

@@ -6,7 +6,7 @@
  */
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import { InputDomainError, OPERATING_RULE_SETS, SURFACES, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../../core/index.js';
+import { InputDomainError, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../../core/index.js';
 import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
 import {
   AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
@@ -23,7 +23,6 @@ import { canonicalJson, parseStudyDocument, problemFromDomainError } from '../st
 import { StudyService } from '../studies/state.js';
 import type { AppEnv } from '../web/env.js';
 import { API_LIST_DEFAULT, API_LIST_MAX, chooseOffset } from '../web/paging.js';
-import { whatIf } from '../whatif.js';
 import { idParam } from './common.js';
 
 export interface ApiRouteDeps {

@@ -20,20 +20,20 @@ import {
   ScenarioFormPage, StudiesListPage, StudyFormPage, StudyOverviewPage,
 } from '../../templates/pages/studies.js';
 import { ViewContext } from '../../templates/view.js';
-import { WhatIfPanel, WhatIfResult, type WhatIfProps } from '../../templates/whatif.js';
+import { WhatIfPanel, WhatIfResult } from '../../templates/whatif.js';
 import { resultsCsv } from '../export/resultsCsv.js';
 import { formValues, type FormValues } from '../forms/fields.js';
 import { FLEET_SELECT_MAX, FLEET_SUGGESTIONS, pageOfList } from '../web/paging.js';
 import { newStudyValues, readScenarioForm, readStudyForm, scenarioFormValues, studyFormValues } from '../forms/study.js';
-import { readWhatIfForm, startingConditions, type WhatIfConditions } from '../forms/whatif.js';
+import type { WhatIfConditions } from '../forms/whatif.js';
+import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportFleetCsv, importFleetCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
-import { StudyService, type LoadedResult, type StudyState } from '../studies/state.js';
+import { StudyService, type LoadedResult } from '../studies/state.js';
 import type { AppEnv } from '../web/env.js';
 import { Lru } from '../web/lru.js';
 import { fragment, isHtmx, page, pageWithContent, seeOther, viewOf } from '../web/page.js';
-import { whatIf, type WhatIfOutcome } from '../whatif.js';
 import { download, formUnits, idParam, notFound } from './common.js';
 
 export interface StudyRouteDeps {
@@ -48,7 +48,7 @@ const DEFAULT_BLANK_ROWS = 3;
 
 // ------------------------------------------------------------------------------------------- what-if
 
-interface StudyWhatIf { readonly props: WhatIfProps; readonly invalid: boolean; readonly replaceMass?: string }
+type StudyWhatIf = WhatIfPanelState;
 
 function designMass(a: AircraftProfile, latest: LoadedResult | undefined): number {
   let m: number | undefined;
@@ -75,39 +75,13 @@ function studyWhatIf(studyId: number, input: StudyInput, latest: LoadedResult | 
     headwind_mps: 0,
     surface: input.options.surface,
   };
-  const start = startingConditions(exact, units, chosen);
-  const design = start.conditions;
-  const run = (c: WhatIfConditions): { outcome?: WhatIfOutcome; problem?: string } => {
-    try {
-      return { outcome: whatIf({ aircraft: chosen, ...c, landingTemperature: input.options.landingTemperature, ...(input.options.operatingRules ? { operatingRules: input.options.operatingRules } : {}) }) };
-    } catch (e) {
-      if (e instanceof InputDomainError) return { problem: e.message };
-      throw e;
-    }
-  };
-  const base = run(design);
-  const common = {
-    action: `/studies/${studyId}/whatif`,
-    aircraftChoices: input.aircraft.map((a) => ({ value: a.id, label: a.name })),
-    baseline: { required_m: base.outcome?.required_m, label: 'the design conditions' },
+  return whatIfPanel({
+    action: `/studies/${studyId}/whatif`, aircraft: chosen, start: exact,
+    choices: input.aircraft.map((a) => ({ value: a.id, label: a.name })),
+    baselineLabel: 'the design conditions',
     intro: `Start from the site's design conditions and the aircraft's design takeoff mass; change any value (physics model, landing at MLW, ${input.options.landingTemperature === 'isa' ? 'ISA' : 'design temperature'} for the landing).`,
-  };
-  const submitted = ['temperature', 'elevation', 'mass', 'slope', 'wind'].some((k) => query[k] !== undefined);
-  if (!submitted) {
-    return { props: { ...common, values: { ...start.values, aircraft: chosen.id }, errors: {}, ...base }, invalid: base.problem !== undefined };
-  }
-  // A different aircraft chosen: its own design mass replaces the mass field.
-  const aircraftChanged = query.prev !== undefined && query.prev !== chosen.id;
-  const values: Record<string, string> = { ...query, aircraft: chosen.id };
-  let replaceMass: string | undefined;
-  if (aircraftChanged) {
-    replaceMass = start.values.mass!;
-    values.mass = replaceMass;
-  }
-  const read = readWhatIfForm(values, units, chosen);
-  if (!read.ok) return { props: { ...common, values, errors: read.errors }, invalid: true, ...(replaceMass ? { replaceMass } : {}) };
-  const r = run(read.value);
-  return { props: { ...common, values, errors: {}, ...r }, invalid: r.problem !== undefined, ...(replaceMass ? { replaceMass } : {}) };
+    options: { landingTemperature: input.options.landingTemperature, ...(input.options.operatingRules ? { operatingRules: input.options.operatingRules } : {}) },
+  }, query, units);
 }
 
 // ------------------------------------------------------------------------------------------- routes

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  FT, HP, INHG, KT, LB, LBF, NM, STATUTE_MILE,
+  FT, HP, INHG, KT, LB, NM, STATUTE_MILE,
   cToF, cToK, dCtoDF, dFtoDC, fToC, feet, fpmToMps, ftToM, hpToW, inHgToPa, kToC, kgToLb, kmhToMps, ktToMps,
   lbToKg, lbfToN, mToFt, mToMi, mToNm, metres, miToM, mpsToFpm, mpsToKmh, mpsToKt, nToLbf, nmToM, paToInHg,
   wToHp, type Feet, type Metres,

@@ -10,7 +10,7 @@ import type { AircraftProfile } from '../../core/index.js';
 import { runCli, type CliIo } from '../../server/cli.js';
 import { resultsCsv } from '../../server/export/resultsCsv.js';
 import { parseStudyDocument, studyOutput, type StudyOutput } from '../../server/study.js';
-import { whatIf } from '../../server/whatif.js';
+import { whatIf } from '../../core/index.js';
 import { WhatIfResult } from '../../templates/whatif.js';
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from '../core/study/impractical.fixture.js';
 import { browser, makeApp } from './web/helpers.js';

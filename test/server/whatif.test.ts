@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { AircraftProfile } from '../../core/index.js';
-import { whatIf } from '../../server/whatif.js';
+import { whatIf } from '../../core/index.js';
 import demo from '../../examples/demo-study.json' with { type: 'json' };
 
 const tern = demo.aircraft.find((a) => a.id === 'tern-rj90') as unknown as AircraftProfile;

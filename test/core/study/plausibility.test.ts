@@ -11,7 +11,7 @@ import {
   checkPlausibility, maxTakeoffMassForRunway, plausibilityBound, runStudy, STUDY_METHOD_VERSION,
   type AircraftProfile, type StudyInput,
 } from '../../../core/index.js';
-import { whatIf } from '../../../server/whatif.js';
+import { whatIf } from '../../../core/index.js';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from './impractical.fixture.js';
 

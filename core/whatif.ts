@@ -1,6 +1,6 @@
 /**
- * One-off requirement for one aircraft at given conditions: the live what-if panel and
- * POST /api/compute/requirement. Composes core's takeoff and landing analyses (physics model) and
+ * One-off requirement for one aircraft at given conditions (core): the live what-if panel and
+ * POST /api/compute/requirement. Bad input throws InputDomainError (field, value, range). Composes core's takeoff and landing analyses (physics model) and
  * the greater-of rule; no rounding (templates round for display).
  *
  * Conventions (docs/web.md, "What-if panel"), the same as the study engine's (core/study/run.ts) so
@@ -8,37 +8,75 @@
  * elevation (= pressure altitude), temperature, slope (+ uphill) and wind (+ headwind); landing at MLW
  * on a level runway with the same wind, at ISA temperature unless `landingTemperature` is 'design'
  * (then at the given temperature), factored by the study's operating rule set. Above the climb-limited
- * mass the takeoff is sized at that mass (the study's climb cap, core/takeoff/climbCap.ts) and says so. A requirement beyond the aircraft's plausibility bound
- * (core/plausibility.ts, the same bound the study rows, sweeps and runway check apply) is not a length:
+ * mass the takeoff is sized at that mass (the study's climb cap, core/takeoff/climbCap.ts) and says
+ * so. A requirement beyond the aircraft's plausibility bound (core/plausibility.ts, the same bound the study rows, sweeps and runway check apply) is not a length:
  * the side says "cannot practically operate here" with the reason.
  */
-import type { WhatIfOutcomeView, WhatIfSide } from '../templates/whatif.js';
-import {
-  InputDomainError, aircraftPlausibilityBound, airAt, analyseLanding, analyseTakeoff, checkPlausibility, climbCappedTakeoff,
-  climbLimitedPeak, landingRuleLabel, requiredLength, standardTemperatureC, takeoffDistances, type AircraftProfile,
-  type OperatingRuleSet, type PlausibilityBound, type Surface,
-} from '../core/index.js';
+import type { AircraftProfile } from './aircraft.js';
+import { airAt, standardTemperatureC } from './atmosphere.js';
+import { analyseLanding, landingRuleLabel } from './landing.js';
+import type { OperatingRuleSet } from './operatingRules.js';
+import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, type PlausibilityBound } from './plausibility.js';
+import { requiredLength } from './requirement.js';
+import type { Surface } from './surface.js';
+import { analyseTakeoff, climbCappedTakeoff, climbLimitedPeak } from './takeoff/index.js';
 
-export interface WhatIfInput {
-  readonly aircraft: AircraftProfile;
-  /** Field elevation = pressure altitude, m. */
+/** Conditions of a what-if, SI: field elevation (= pressure altitude), temperature, takeoff mass, slope, wind, surface. */
+export interface WhatIfConditions {
   readonly elevation_m: number;
-  /** Outside air temperature, °C. */
   readonly temperature_c: number;
-  /** Takeoff mass, kg. */
   readonly mass_kg: number;
   /** Runway slope, ratio (+ uphill in the takeoff direction). */
   readonly slope: number;
   /** Wind along the runway, m/s (+ headwind). */
   readonly headwind_mps: number;
   readonly surface: Surface;
+}
+
+/** One side of the what-if: takeoff or landing. */
+export interface WhatIfSide {
+  readonly ok: boolean;
+  /** Required length, m (when ok). */
+  readonly required_m?: number;
+  /** Governing case, e.g. "balanced-field", or the landing rule's words. */
+  readonly governing?: string;
+  /** Why it cannot be done here (when not ok). */
+  readonly reason?: string;
+  /** Not ok because the requirement is beyond the aircraft's plausibility bound (core/plausibility.ts). */
+  readonly impractical?: boolean;
+  /** Takeoff sized at the climb-limited mass below the mass asked for, kg. */
+  readonly climbLimitedMass_kg?: number;
+  /** What the number rests on (climb cap and offload; the landing factor's source). */
+  readonly note?: string;
+}
+
+/** The what-if's outcome, as the panel and POST /api/compute/requirement give it. */
+export interface WhatIfOutcome {
+  readonly takeoff: WhatIfSide;
+  readonly landing: WhatIfSide;
+  readonly required_m?: number;
+  readonly governing?: 'takeoff' | 'landing';
+  /** Reason when a side is beyond the plausibility bound: the aircraft cannot practically operate here. */
+  readonly impractical?: string;
+  /** The aircraft's plausibility bound, m. */
+  readonly plausibilityBound_m?: number;
+  readonly densityAltitude_m: number;
+  readonly isaDeviation_c: number;
+  readonly v1_mps?: number;
+  readonly vr_mps?: number;
+  readonly v2_mps?: number;
+  readonly vref_mps?: number;
+  readonly landingMass_kg: number;
+  readonly warnings: readonly string[];
+}
+
+export interface WhatIfInput extends WhatIfConditions {
+  readonly aircraft: AircraftProfile;
   readonly landingTemperature?: 'isa' | 'design';
   /** Operating rule set for the landing factor (default 'us-121'). */
   readonly operatingRules?: OperatingRuleSet;
 }
 
-export type { WhatIfSide } from '../templates/whatif.js';
-export type WhatIfOutcome = WhatIfOutcomeView;
 
 /**
  * Runs the what-if. Bad input throws InputDomainError (field, value, range); infeasible physics is a
@@ -131,9 +169,4 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
     landingMass_kg: a.mlw_kg,
     warnings: [...new Set(warnings)],
   };
-}
-
-/** Whether an error is a bad-input error the what-if reports as a field problem. */
-export function isInputError(e: unknown): e is InputDomainError {
-  return e instanceof InputDomainError;
 }

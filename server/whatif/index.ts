@@ -1,0 +1,1 @@
+export { whatIfPanel, type WhatIfPanelState, type WhatIfPanelSpec } from './panel.js';

@@ -2,6 +2,7 @@ export * from './errors.js';
 export * from './validate.js';
 export * from './numeric/index.js';
 export * from './fields.js';
+export * from './studyFields.js';
 export * from './units.js';
 export * from './atmosphere.js';
 export * from './aircraft.js';

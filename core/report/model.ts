@@ -16,6 +16,7 @@
 import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type QuantityKind } from '../aircraft.js';
 import { CAUTION_TEXT, CAUTION_TITLE } from '../caution.js';
 import { SURFACE_LABELS } from '../surface.js';
+import { STUDY_OPTION_FIELDS, optionValue } from '../studyFields.js';
 import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SET_INFO } from '../operatingRules.js';
 import { monthName } from '../climate/index.js';
 import type {
@@ -755,25 +756,25 @@ function listingBlocks(args: AppendixModelInput): Block[] {
     rows: input.scenarios.flatMap((s) => s.fleet.map((f) => row(t(s.name), t(f.aircraft), exact(f.annualOperations, 'count'), t(exactNumber(f.stageLength_km)), exact(f.payload_kg, 'mass')))),
     note: 'Stage lengths are listed in km, as stored in the study file.',
   });
-  const o = input.options;
   blocks.push({ type: 'subheading', text: 'Options' });
-  blocks.push({ type: 'facts', items: [
-    { label: 'Units', value: t(o.units === 'si' ? 'SI' : 'US customary') },
-    { label: 'Primary method', value: t(o.method) },
-    { label: 'Surface', value: t(o.surface) },
-    { label: 'Landing temperature', value: t(o.landingTemperature) },
-    { label: 'Landing mass', value: t(o.landingMass) },
-    { label: 'Operating rules', value: t(o.operatingRules ?? `${DEFAULT_OPERATING_RULES} (default)`) },
-    ...(o.referenceOverrideReason !== undefined ? [{ label: 'Reference override reason', value: t(o.referenceOverrideReason) }] : []),
-    { label: 'Regular-use threshold (operations/year)', value: exact(o.regularUseThreshold, 'count') },
-    { label: 'Planning increment', value: exact(o.roundingIncrement_m, 'length') },
-    { label: 'Reserve policy', value: t(o.reserves.policy) },
-    ...(o.reserves.alternate_km !== undefined ? [{ label: 'Alternate distance (km)', value: t(exactNumber(o.reserves.alternate_km)) }] : []),
-    ...(o.reserves.holding_min !== undefined ? [{ label: 'Holding time (min)', value: t(exactNumber(o.reserves.holding_min)) }] : []),
-    ...(o.reserves.contingencyFraction !== undefined ? [{ label: 'Contingency fraction', value: exact(o.reserves.contingencyFraction, 'ratio') }] : []),
-    { label: 'Mass per passenger', value: exact(o.passengerMass_kg, 'mass') },
-  ] });
+  blocks.push({ type: 'facts', items: optionListing(input.options) });
   return blocks;
+}
+
+/**
+ * Every study option, one fact per row of STUDY_OPTION_FIELDS (core/studyFields.ts): a new option is
+ * listed without touching this function. An option left out of the file says so.
+ */
+export function optionListing(options: StudyInput['options']): { label: string; value: Cell }[] {
+  return STUDY_OPTION_FIELDS.map((f) => {
+    const v = optionValue(options, f.path);
+    if (v === undefined) return { label: f.label, value: t(f.path === 'roundingIncrement_m' ? 'default for the units' : 'not given') };
+    if (typeof v === 'number' && f.kind !== 'choice' && f.kind !== 'text') {
+      // Values the file holds in km are shown as distances (km or NM).
+      return { label: f.label, value: f.path.endsWith('_km') ? exact(v * 1000, 'distance') : exact(v, f.kind === 'slopePct' ? 'ratio' : f.kind) };
+    }
+    return { label: f.label, value: t(String(v)) };
+  });
 }
 
 /** A number with all its significant digits (up to 12), no grouping. */

@@ -3,9 +3,8 @@
  * converted from the user's units; the options are then checked by the study file's zod schema.
  */
 import {
-  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CONTINGENCY_FRACTION_RANGE, DEFAULT_OPERATING_RULES, FLEET_PAYLOAD_RANGE,
-  OPERATING_RULE_SETS, PASSENGER_MASS_RANGE,
-  REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
+  ANNUAL_OPERATIONS_RANGE, DEFAULT_OPERATING_RULES, FLEET_PAYLOAD_RANGE, OPERATING_RULE_SETS, RESERVE_POLICIES,
+  STAGE_LENGTH_RANGE_KM, STUDY_METHODS, SURFACES, optionFieldByForm,
   displayInputValue as fmtInput, type FleetRowInput, type StudyOptions, type UnitSystem,
 } from '../../core/index.js';
 import { optionsSchema } from '../schemas/study.js';
@@ -19,8 +18,14 @@ export interface StudyFields {
   readonly options: StudyOptions;
 }
 
-const METHODS = ['physics', 'reference-icao', 'reference-authority', 'calibrated'] as const;
-const POLICIES = ['cruise-45min', 'international', 'custom'] as const;
+const METHODS = STUDY_METHODS;
+const POLICIES = RESERVE_POLICIES;
+
+/** An option's range from its row in STUDY_OPTION_FIELDS, scaled to the form's unit (km → m, fraction → %). */
+function limits(form: string, scale = 1): { min: number; max: number } {
+  const r = optionFieldByForm(form).range!;
+  return { min: r.min * scale, max: r.max * scale };
+}
 
 export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: readonly number[]): FormResult<StudyFields> {
   const errors: FieldErrors = {};
@@ -29,15 +34,15 @@ export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: r
   const siteId = /^\d+$/.test(siteRaw) && siteIds.includes(Number(siteRaw)) ? Number(siteRaw) : undefined;
   if (siteId === undefined) errors.siteId = siteIds.length === 0 ? 'create a site first' : 'choose one of the sites';
   const units = readChoice(values, 'units', ['si', 'us'] as const, errors, system);
-  const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', min: REGULAR_USE_THRESHOLD_RANGE.min, max: REGULAR_USE_THRESHOLD_RANGE.max, required: true, integer: true }, system, errors);
-  const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', min: ROUNDING_INCREMENT_RANGE.min, max: ROUNDING_INCREMENT_RANGE.max, required: true }, system, errors);
+  const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', ...limits('regularUseThreshold'), required: true, integer: true }, system, errors);
+  const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', ...limits('roundingIncrement'), required: true }, system, errors);
   const surface = readChoice(values, 'surface', SURFACES, errors, 'dry');
   const method = readChoice(values, 'method', METHODS, errors, 'physics');
   const policy = readChoice(values, 'reservePolicy', POLICIES, errors, 'cruise-45min');
-  const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', min: ALTERNATE_DISTANCE_RANGE_KM.min * 1000, max: ALTERNATE_DISTANCE_RANGE_KM.max * 1000, required: policy === 'custom' }, system, errors);
-  const holding_min = readNumber(values, { name: 'holding', kind: 'count', min: RESERVE_TIME_RANGE_MIN.min, max: RESERVE_TIME_RANGE_MIN.max, required: policy === 'custom' }, system, errors);
-  const contingencyPct = readNumber(values, { name: 'contingency', kind: 'count', min: CONTINGENCY_FRACTION_RANGE.min * 100, max: CONTINGENCY_FRACTION_RANGE.max * 100, required: false }, system, errors);
-  const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', min: PASSENGER_MASS_RANGE.min, max: PASSENGER_MASS_RANGE.max, required: true }, system, errors);
+  const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', ...limits('alternate', 1000), required: policy === 'custom' }, system, errors);
+  const holding_min = readNumber(values, { name: 'holding', kind: 'count', ...limits('holding'), required: policy === 'custom' }, system, errors);
+  const contingencyPct = readNumber(values, { name: 'contingency', kind: 'count', ...limits('contingency', 100), required: false }, system, errors);
+  const passengerMass_kg = readNumber(values, { name: 'passengerMass', kind: 'mass', ...limits('passengerMass'), required: true }, system, errors);
   const landingTemperature = readChoice(values, 'landingTemperature', ['isa', 'design'] as const, errors, 'isa');
   const landingMass = readChoice(values, 'landingMass', ['mlw', 'route'] as const, errors, 'mlw');
   const operatingRules = readChoice(values, 'operatingRules', OPERATING_RULE_SETS, errors, DEFAULT_OPERATING_RULES);

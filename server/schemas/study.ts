@@ -8,12 +8,11 @@
  */
 import { z } from 'zod';
 import {
-  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, CONTINGENCY_FRACTION_RANGE,
-  DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE,
-  MONTHLY_MEAN_RANGE, OPERATING_RULE_SETS, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE,
-  RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, SURFACES,
-  analyseRunwayProfile, checkDerivedDesignTemperature, checkProfileSlopes, checkRunwayDeclaredDistances,
-  designTemperatureFromMonthly, type StudyInput,
+  ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE,
+  MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE, MONTHLY_MEAN_RANGE, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE,
+  SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, STUDY_OPTION_FIELDS, analyseRunwayProfile, checkDerivedDesignTemperature,
+  checkProfileSlopes, checkRunwayDeclaredDistances, designTemperatureFromMonthly, type OptionFieldSpec, type StudyInput,
+  type StudyOptions,
 } from '../../core/index.js';
 import { aircraftSchema } from './aircraft.js';
 import { coreCheck, ident, int, numIn, oneOf, text } from './common.js';
@@ -92,33 +91,44 @@ export const scenarioSchema = z.strictObject({
   fleet: z.array(fleetRowSchema).min(1, { error: 'at least one fleet row' }).max(200),
 });
 
-export const reservesSchema = z.strictObject({
-  policy: oneOf(['cruise-45min', 'international', 'custom']),
-  alternate_km: numIn(ALTERNATE_DISTANCE_RANGE_KM).optional(),
-  holding_min: numIn(RESERVE_TIME_RANGE_MIN).optional(),
-  contingencyFraction: numIn(CONTINGENCY_FRACTION_RANGE).optional(),
-});
+/** The zod type of one study option, from its row in STUDY_OPTION_FIELDS (core/studyFields.ts). */
+function optionType(f: OptionFieldSpec): z.ZodType {
+  let t: z.ZodType;
+  if (f.kind === 'choice') t = oneOf(f.choices as unknown as readonly [string, ...string[]]);
+  else if (f.kind === 'text') {
+    const { min, max } = f.text!;
+    t = text(max).refine((x) => x.length >= min, { error: `at least ${min} characters: say why the corrected length may govern` });
+  } else t = f.integer ? intIn(f.range!) : numIn(f.range!);
+  t = t.meta({ description: f.help });
+  return f.default !== undefined ? t.default(f.default as never) : t.optional();
+}
 
+const topOptions = STUDY_OPTION_FIELDS.filter((f) => !f.path.includes('.'));
+const reserveOptions = STUDY_OPTION_FIELDS.filter((f) => f.path.startsWith('reserves.'));
+
+/** Reserves: the policy is required inside the object; the object itself defaults to the default policy. */
+export const reservesSchema = z.strictObject(Object.fromEntries(reserveOptions.map((f) => {
+  const key = f.path.slice('reserves.'.length);
+  const t = optionType({ ...f, default: undefined });
+  return [key, key === 'policy' ? (t as z.ZodOptional<z.ZodType>).unwrap() : t];
+}))) as unknown as z.ZodType<StudyOptions['reserves']>;
+
+const reserveDefault = { policy: reserveOptions.find((f) => f.path === 'reserves.policy')!.default as StudyOptions['reserves']['policy'] };
+
+/**
+ * The options, built from STUDY_OPTION_FIELDS: each option's range, choices, default and help come
+ * from its row. Default planning increment 50 m, or 100 ft (30.48 m) in US units (resolved in studyInputOf).
+ */
 export const optionsSchema = z.strictObject({
-  regularUseThreshold: intIn(REGULAR_USE_THRESHOLD_RANGE).default(500),
-  /** Default 50 m, or 100 ft (30.48 m) when the study is in US units (resolved in studyInputOf). */
-  roundingIncrement_m: numIn(ROUNDING_INCREMENT_RANGE).optional(),
-  surface: oneOf(SURFACES as unknown as readonly [string, ...string[]]).default('dry'),
-  method: oneOf(['physics', 'reference-icao', 'reference-authority', 'calibrated']).default('physics'),
-  units: oneOf(['si', 'us']).default('si'),
-  reserves: reservesSchema.default({ policy: 'cruise-45min' }),
-  passengerMass_kg: numIn(PASSENGER_MASS_RANGE).default(95),
-  landingTemperature: oneOf(['isa', 'design']).default('isa'),
-  landingMass: oneOf(['mlw', 'route']).default('mlw'),
-  operatingRules: oneOf(OPERATING_RULE_SETS as unknown as readonly [string, ...string[]]).default('us-121'),
-  /** Reference methods only: the recorded reason a corrected length beyond 35 % may govern (core StudyOptions). */
-  referenceOverrideReason: text(500).refine((x) => x.length >= 10, { error: 'at least 10 characters: say why the corrected length may govern' }).optional(),
-}).superRefine((o, ctx) => {
+  ...Object.fromEntries(topOptions.map((f) => [f.path, optionType(f)])),
+  reserves: reservesSchema.default(reserveDefault),
+}).superRefine((parsed, ctx) => {
+  const o = parsed as Partial<StudyOptions>;
   if (o.referenceOverrideReason !== undefined && o.method !== 'reference-icao' && o.method !== 'reference-authority') {
     ctx.addIssue({ code: 'custom', path: ['referenceOverrideReason'], input: o.referenceOverrideReason,
-      message: `only with a reference-length method (reference-icao or reference-authority); the method is ${o.method}` });
+      message: `only with a reference-length method (reference-icao or reference-authority); the method is ${String(o.method)}` });
   }
-});
+}) as unknown as z.ZodType<Omit<StudyOptions, 'roundingIncrement_m'> & { roundingIncrement_m?: number }, unknown>;
 
 export const studyFileSchema = z.strictObject({
   format: z.literal('runwright-study', { error: 'must be "runwright-study"' }),

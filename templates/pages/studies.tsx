@@ -1,5 +1,5 @@
 /** Study pages: list, study form (name, site, options), overview with scenarios, scenario (fleet) form. */
-import { DEFAULT_OPERATING_RULES, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, SURFACES, SURFACE_LABELS, type FleetRowInput, type StudyOptions } from '../../core/index.js';
+import { DEFAULT_OPERATING_RULES, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, STUDY_OPTION_FIELDS, SURFACES, SURFACE_LABELS, optionFieldByForm, type FleetRowInput, type StudyOptions } from '../../core/index.js';
 import { ImportProblems, Notice, PostForm } from '../components.js';
 import { IDS } from '../ids.js';
 import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
@@ -61,13 +61,13 @@ const POLICY_LABELS: Record<string, string> = {
   custom: 'Custom: alternate distance, holding time, contingency',
 };
 
+/** Labels of the study form's fields: the option labels come from STUDY_OPTION_FIELDS (core/studyFields.ts). */
 export const STUDY_LABELS: Record<string, string> = {
-  name: 'Study name', siteId: 'Site', units: 'Units of the study', regularUseThreshold: 'Regular-use threshold',
-  roundingIncrement: 'Planning increment', surface: 'Design surface', method: 'Method', reservePolicy: 'Fuel reserves',
-  alternate: 'Alternate distance', holding: 'Holding time', contingency: 'Contingency fuel', passengerMass: 'Mass per passenger',
-  landingTemperature: 'Landing temperature', landingMass: 'Landing mass', operatingRules: 'Operating rules',
-  referenceOverrideReason: 'Override reason (reference methods)',
+  name: 'Study name', siteId: 'Site',
+  ...Object.fromEntries(STUDY_OPTION_FIELDS.map((f) => [f.form, f.label])),
 };
+/** The help text of an option's form field (core/studyFields.ts). */
+const hint = (form: string): string => optionFieldByForm(form).help;
 
 export function StudyFormPage(p: { mode: 'new' | 'edit'; action: string; values: Values; errors: Errors; sites: readonly { id: number; name: string }[]; cancel: string }) {
   return (
@@ -81,30 +81,30 @@ export function StudyFormPage(p: { mode: 'new' | 'edit'; action: string; values:
             <Field name="name" label={STUDY_LABELS.name!} values={p.values} errors={p.errors} required />
             <SelectField name="siteId" label={STUDY_LABELS.siteId!} values={p.values} errors={p.errors} options={[{ value: '', label: 'Choose a site' }, ...p.sites.map((s) => ({ value: String(s.id), label: s.name }))]} />
             <SelectField name="units" label={STUDY_LABELS.units!} values={p.values} errors={p.errors} options={(['si', 'us'] as const).map((u) => ({ value: u, label: UNIT_SYSTEM_LABELS[u] }))}
-              hint="Study pages, the CSV results and the appendix use these units." />
+              hint={hint('units')} />
           </div>
         </Section>
         <Section legend="Options">
           <div class="grid">
-            <Field name="regularUseThreshold" label={STUDY_LABELS.regularUseThreshold!} type="number" values={p.values} errors={p.errors} required hint="Annual operations at or above which an aircraft (group) is in regular use." />
-            <Field name="roundingIncrement" label={STUDY_LABELS.roundingIncrement!} kind="length" values={p.values} errors={p.errors} required hint="The recommended length is rounded up to this step." />
+            <Field name="regularUseThreshold" label={STUDY_LABELS.regularUseThreshold!} type="number" values={p.values} errors={p.errors} required hint={hint('regularUseThreshold')} />
+            <Field name="roundingIncrement" label={STUDY_LABELS.roundingIncrement!} kind="length" values={p.values} errors={p.errors} required hint={hint('roundingIncrement')} />
             <SelectField name="surface" label={STUDY_LABELS.surface!} values={p.values} errors={p.errors} options={SURFACES.map((s) => ({ value: s, label: SURFACE_LABELS[s] }))} />
             <SelectField name="method" label={STUDY_LABELS.method!} values={p.values} errors={p.errors} options={Object.entries(METHOD_LABELS).map(([value, label]) => ({ value, label }))} />
             <SelectField name="landingTemperature" label={STUDY_LABELS.landingTemperature!} values={p.values} errors={p.errors} options={[{ value: 'isa', label: 'ISA at the field (certified data basis)' }, { value: 'design', label: 'The design temperature' }]} />
             <SelectField name="landingMass" label={STUDY_LABELS.landingMass!} values={p.values} errors={p.errors} options={[{ value: 'mlw', label: 'Maximum landing mass' }, { value: 'route', label: 'Arrival mass of the design route' }]} />
             <SelectField name="operatingRules" label={STUDY_LABELS.operatingRules!} values={p.values} errors={p.errors} options={OPERATING_RULE_SETS.map((r) => ({ value: r, label: OPERATING_RULE_SET_INFO[r].label }))}
-              hint="Sets the landing factors (docs/methods.md, Operating rules). Light aircraft use takeoff × 1.25 and landing ÷ 0.70 unless their profile gives a factor." />
+              hint={hint('operatingRules')} />
             <Field name="referenceOverrideReason" label={STUDY_LABELS.referenceOverrideReason!} values={p.values} errors={p.errors}
-              hint="Leave blank (recommended). With a reference-length method, a reason here lets a corrected length beyond the 35 % limit of the percentage corrections govern; the reason is printed beside every row it affects." />
+              hint={hint('referenceOverrideReason')} />
           </div>
         </Section>
         <Section legend="Route and fuel">
           <div class="grid">
             <SelectField name="reservePolicy" label={STUDY_LABELS.reservePolicy!} values={p.values} errors={p.errors} options={Object.entries(POLICY_LABELS).map(([value, label]) => ({ value, label }))} />
-            <Field name="alternate" label={STUDY_LABELS.alternate!} kind="distance" values={p.values} errors={p.errors} hint="Needed for custom reserves; otherwise 200 NM (370.4 km) when blank, 0 for none." />
-            <Field name="holding" label={`${STUDY_LABELS.holding!} (min)`} type="number" values={p.values} errors={p.errors} hint="Custom reserves only." />
-            <Field name="contingency" label={`${STUDY_LABELS.contingency!} (% of trip fuel)`} type="number" values={p.values} errors={p.errors} hint="Custom reserves; blank uses each aircraft's own." />
-            <Field name="passengerMass" label={STUDY_LABELS.passengerMass!} kind="mass" values={p.values} errors={p.errors} required hint="With baggage; states payload penalties as passengers." />
+            <Field name="alternate" label={STUDY_LABELS.alternate!} kind="distance" values={p.values} errors={p.errors} hint={hint('alternate')} />
+            <Field name="holding" label={`${STUDY_LABELS.holding!} (min)`} type="number" values={p.values} errors={p.errors} hint={hint('holding')} />
+            <Field name="contingency" label={`${STUDY_LABELS.contingency!} (% of trip fuel)`} type="number" values={p.values} errors={p.errors} hint={hint('contingency')} />
+            <Field name="passengerMass" label={STUDY_LABELS.passengerMass!} kind="mass" values={p.values} errors={p.errors} required hint={hint('passengerMass')} />
           </div>
         </Section>
         <p class="actions"><button type="submit" class="primary">Save study</button> <a href={p.cancel}>Cancel</a></p>

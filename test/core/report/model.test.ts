@@ -128,7 +128,7 @@ describe('appendix: operating rules and the recorded override (issue 13, items 1
     const res = runStudy(inp);
     const m = buildAppendixModel({ input: inp, result: res, charts: [], inputDigest: 'e'.repeat(64), date: '2026-12-03', version: '0.1.0-test' });
     expect(text(factsOf(m, 'method').find((f) => f.label === 'Override of the 35 % limit (recorded)')!.value)).toContain('The operator chart for this aerodrome agrees (test).');
-    expect(text(factsOf(m, 'inputs').find((f) => f.label === 'Reference override reason')!.value)).toBe('The operator chart for this aerodrome agrees (test).');
+    expect(text(factsOf(m, 'inputs').find((f) => f.label === 'Override reason (reference methods)')!.value)).toBe('The operator chart for this aerodrome agrees (test).');
     expect(text(factsOf(m, 'method').find((f) => f.label === 'Operating rules (landing factors)')!.value)).toMatch(/^EU commercial air transport/);
     const warnings = JSON.stringify(m.sections.find((s) => s.id === 'assumptions')!.blocks);
     expect(warnings).toContain('OVERRIDE RECORDED');
@@ -160,3 +160,29 @@ function factsOf(m: AppendixModel, id: string) {
 function text(c: Cell): string {
   return 'text' in c ? c.text : '';
 }
+
+describe('appendix listing: every study option, from the one option table (issue 14)', () => {
+  it('lists one fact per row of STUDY_OPTION_FIELDS, with the value of every option the study sets', async () => {
+    const { STUDY_OPTION_FIELDS, optionValue } = await import('../../../core/index.js');
+    const doc = structuredClone(demo) as { options: Record<string, unknown> };
+    Object.assign(doc.options, {
+      method: 'reference-icao', referenceOverrideReason: 'Listed in full for the test.', landingMass: 'route',
+      reserves: { policy: 'custom', alternate_km: 250, holding_min: 35, contingencyFraction: 0.04 },
+    });
+    const inp = inputOf(doc);
+    const m = buildAppendixModel({ input: inp, result: runStudy(inp), charts: [], inputDigest: 'c'.repeat(64), date: '2026-12-03', version: '0.1.0-test' });
+    const listed = factsOf(m, 'inputs');
+    for (const f of STUDY_OPTION_FIELDS) {
+      const fact = listed.find((x) => x.label === f.label);
+      expect(fact, f.path).toBeDefined();
+      const v = optionValue(inp.options, f.path);
+      expect(v, `${f.path} set in this study`).toBeDefined();
+      if (typeof v === 'number') expect('si' in fact!.value ? fact!.value.si : undefined, f.path).toBe(f.path.endsWith('_km') ? v * 1000 : v);
+      else expect(text(fact!.value), f.path).toBe(String(v));
+    }
+    // Every key of the options object has its row in the table (nothing added without a listing).
+    const keys = (o: Record<string, unknown>, pre = ''): string[] => Object.entries(o).flatMap(([k, v]) =>
+      v !== null && typeof v === 'object' ? keys(v as Record<string, unknown>, `${pre}${k}.`) : [`${pre}${k}`]);
+    for (const k of keys(inp.options as unknown as Record<string, unknown>)) expect(STUDY_OPTION_FIELDS.map((f) => f.path), k).toContain(k);
+  });
+});

@@ -53,6 +53,7 @@ import { DECLARED_DISTANCE_RANGE } from './runway.js';
 import type { Surface } from './surface.js';
 import type { RunwayDirectionInput } from './runway.js';
 import { bisect } from './numeric/index.js';
+import { PASSENGER_MASS_RANGE } from './fields.js';
 import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, withinPlausibility, type PlausibilityBound } from './plausibility.js';
 import { FT } from './units.js';
 import { standardTemperatureC } from './atmosphere.js';
@@ -626,8 +627,6 @@ export interface RoutePenaltyResult {
   readonly trace: readonly RunwayCheckTraceEntry[];
   readonly warnings: readonly string[];
 }
-
-const PASSENGER_MASS_RANGE = { min: 50, max: 200, unit: 'kg' } as const;
 
 /** Payload and range lost on a route when the takeoff mass is limited (route payloadForRange / rangeForPayload). */
 export function routePenalty(input: RoutePenaltyInput): RoutePenaltyResult {

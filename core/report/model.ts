@@ -459,13 +459,31 @@ const COMPONENT_COLUMNS = 7;
 /** A line of the components table: a label and, per aircraft, a value (undefined = not applicable). */
 interface ComponentLine { readonly label: string; readonly value: (r: RowResult) => Cell | undefined; readonly bold?: boolean }
 
+/** One section of a row's components: its lines, each with a cell per row (undefined: not applicable). */
+export interface ComponentSection {
+  readonly title: string;
+  readonly lines: readonly { readonly label: string; readonly bold: boolean; readonly cells: readonly (Cell | undefined)[] }[];
+}
+
+/** The components table as rows of the appendix (a column per aircraft). */
 function componentRows(rows: readonly RowResult[]): Row[] {
-  const out: Row[] = [];
+  return componentSections(rows).flatMap((s): Row[] => [
+    { group: s.title },
+    ...s.lines.map((l) => row(t(l.label, l.bold), ...l.cells.map((c) => c ?? t('—')))),
+  ]);
+}
+
+/**
+ * The components of result rows, section by section: the one list of labels and values that the
+ * appendix's components table and the results page's "components" fragment both render, so the two
+ * never differ in a label or a number. Lines no row has are left out.
+ */
+export function componentSections(rows: readonly RowResult[]): ComponentSection[] {
+  const out: ComponentSection[] = [];
   const section = (title: string, lines: readonly ComponentLine[]): void => {
     const used = lines.filter((l) => rows.some((r) => l.value(r) !== undefined));
     if (used.length === 0) return;
-    out.push({ group: title });
-    for (const l of used) out.push(row(t(l.label, l.bold ?? false), ...rows.map((r) => l.value(r) ?? t('—'))));
+    out.push({ title, lines: used.map((l) => ({ label: l.label, bold: l.bold ?? false, cells: rows.map((r) => l.value(r)) })) });
   };
   const ok = (r: RowResult): boolean => r.status === 'ok';
   const labels = (get: (r: RowResult) => readonly TraceItem[] | undefined): string[] => {
@@ -517,6 +535,7 @@ function componentRows(rows: readonly RowResult[]): Row[] {
     { label: 'VREF', value: (r) => (ok(r) && r.landing ? q(r.landing.vref_mps, 'speed') : undefined) },
     ...labels(landingTrace).map((label): ComponentLine => ({ label, value: trace(landingTrace, label) })),
     { label: 'Operating rule', value: (r) => (ok(r) && r.landing ? t(r.landing.rule) : undefined) },
+    { label: 'Source of the landing factor', value: (r) => (ok(r) && r.landing?.ruleSource ? t(r.landing.ruleSource) : undefined) },
     { label: 'Factor on the landing distance', value: (r) => (ok(r) && r.landing ? q(r.landing.factor, 'ratio') : undefined) },
     { label: 'Roskam landing field length (indicative)', value: (r) => (ok(r) && r.landing?.roskam_m !== undefined ? q(r.landing.roskam_m, 'length') : undefined) },
     { label: 'Landing requirement', value: (r) => (ok(r) && r.landing ? q(r.landing.required_m, 'length') : undefined), bold: true },

@@ -7,7 +7,8 @@ import type { StudyInput, UnitSystem } from '../../core/index.js';
 import type { StudyOutput } from '../study.js';
 import { renderAppendixPdf } from './render.js';
 
-export { renderAppendixPdf, appendixModel, cellText, issueDate, studyFileText, ATTACHMENT_NAME, LISTING_DIGITS } from './render.js';
+export { renderAppendixPdf, appendixModel, issueDate, studyFileText, ATTACHMENT_NAME, LISTING_DIGITS } from './render.js';
+export { cellText } from '../../templates/reportCells.js';
 export type { AppendixPdfArgs } from './render.js';
 export { pdfText, uncovered } from './text.js';
 

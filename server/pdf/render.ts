@@ -15,11 +15,12 @@
  */
 import PDFDocument from 'pdfkit';
 import type { StudyInput, UnitSystem } from '../../core/index.js';
-import { studyCharts, unitOf } from '../../core/index.js';
+import { studyCharts } from '../../core/index.js';
 import {
-  buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row, type ValueKind,
+  buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row,
 } from '../../core/index.js';
-import { fmt, fmtLengthBoth, fmtNumber, fmtPct, UNIT_SYSTEM_LABELS } from '../../templates/format.js';
+import { UNIT_SYSTEM_LABELS } from '../../templates/format.js';
+import { cellText, kindSymbol } from '../../templates/reportCells.js';
 import { canonicalJson, inputDigest, type StudyOutput } from '../study.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';
 import { FONT, registerFonts } from './fonts.js';
@@ -39,8 +40,7 @@ export interface AppendixPdfArgs {
   readonly units?: UnitSystem;
 }
 
-/** Significant digits of the input listing (the attached file holds the exact values). */
-export const LISTING_DIGITS = 6;
+export { LISTING_DIGITS } from '../../templates/reportCells.js';
 
 /** Name of the attached input file. */
 export const ATTACHMENT_NAME = 'study-input.json';
@@ -89,45 +89,6 @@ export function appendixModel(args: AppendixPdfArgs): AppendixModel {
 // ---------------------------------------------------------------------------------------------
 // Formatting of model cells (templates/format.ts does the rounding)
 // ---------------------------------------------------------------------------------------------
-
-function kindSymbol(kind: ValueKind, units: UnitSystem): string {
-  if (kind === 'lengthBoth' || kind === 'percent' || kind === 'passengers') return '';
-  return unitOf(kind, units).symbol;
-}
-
-function numberOf(si: number | null | undefined, kind: ValueKind, units: UnitSystem, withUnit: boolean, digits?: number, listing?: boolean): string {
-  if (kind === 'lengthBoth') return fmtLengthBoth(si, units);
-  if (kind === 'percent') return fmtPct(si, digits ?? 1);
-  if (kind === 'passengers') {
-    // The penalty in passengers is not rounded in the result; a view rounds it up to whole passengers.
-    if (si === null || si === undefined || !Number.isFinite(si)) return '—';
-    return Math.ceil(si - 1e-9).toLocaleString('en-US');
-  }
-  if (listing) {
-    if (si === null || si === undefined || !Number.isFinite(si)) return '—';
-    const v = String(Number(unitOf(kind, units).from(si).toPrecision(LISTING_DIGITS)));
-    const sym = unitOf(kind, units).symbol;
-    return withUnit && sym ? `${v} ${sym}` : v;
-  }
-  return withUnit ? fmt(si, kind, units, digits) : fmtNumber(si, kind, units, digits);
-}
-
-/** Text of a cell; in a column with a kind the unit is in the header and the cell shows the number only. */
-export function cellText(cell: Cell, column: Column | undefined, units: UnitSystem): string {
-  if ('text' in cell) return cell.text;
-  const inHeader = column?.kind !== undefined && kindSymbol(column.kind, units) !== '';
-  if ('pair' in cell) {
-    const [a, b] = cell.pair;
-    const s = `${numberOf(a, cell.kind, units, false)} / ${numberOf(b, cell.kind, units, false)}`;
-    const sym = unitOf(cell.kind, units).symbol;
-    return inHeader || !sym ? s : `${s} ${sym}`;
-  }
-  if ('unit' in cell) {
-    const v = Number(cell.si.toPrecision(4)).toLocaleString('en-US', { maximumFractionDigits: 6 });
-    return cell.unit ? `${v} ${cell.unit}` : v;
-  }
-  return numberOf(cell.si, cell.kind, units, !inHeader, cell.digits, cell.listing);
-}
 
 function headerText(col: Column, units: UnitSystem): string {
   if (!col.kind) return col.title;

@@ -4,21 +4,15 @@
  * existing-runway assessment, warnings, charts, and the downloads. Values come from the saved result;
  * nothing is recomputed here, only formatted.
  */
-import type { ChartModel, RowResult, ScenarioResult, StudyResult, TraceItem } from '../../core/index.js';
-import { SURFACE_LABELS, kindOfUnit } from '../../core/index.js';
+import type { ChartModel, RowResult, ScenarioResult, StudyResult } from '../../core/index.js';
+import { SURFACE_LABELS, componentSections } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { PostForm, Warnings } from '../components.js';
-import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtPct, fmtSlope } from '../format.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtSlope } from '../format.js';
 import { IDS } from '../ids.js';
+import { cellText } from '../reportCells.js';
 import { useView } from '../view.js';
 import { UnitsNote } from './studies.js';
-
-function traceValue(t: TraceItem, units: 'si' | 'us'): string {
-  if (t.unit === '%') return `${t.value.toFixed(2)} %`;
-  const kind = kindOfUnit(t.unit);
-  const k = kind === 'percent' ? undefined : kind;
-  return k ? fmt(t.value, k, units) : `${t.value.toPrecision(4)} ${t.unit}`;
-}
 
 const shortDigest = (d: string): string => `${d.slice(0, 12)}…`;
 
@@ -31,47 +25,29 @@ export interface ResultsMeta {
   readonly current: boolean;
 }
 
-/** Components of one row: takeoff, landing and route figures (the "on demand" fragment). */
+/**
+ * Components of one row (the "on demand" fragment): the sections, labels and values of the
+ * appendix's components table (core/report/model.ts `componentSections`), formatted by the same cell
+ * formatter as the PDF, so the page and the appendix never differ in a label or a number.
+ */
 export function RowComponents(p: { row: RowResult }) {
   const { units } = useView();
   const r = p.row;
   return (
     <div class="components">
-      {r.takeoff ? (
+      {componentSections([r]).map((sec) => (
         <table class="compact">
-          <caption>Takeoff: {r.takeoff.governing} ({fmt(r.takeoff.required_m, 'length', units)})</caption>
+          <caption>{sec.title}</caption>
           <tbody>
-            {r.takeoff.components.map((t) => <tr><th scope="row">{t.label}</th><td class="num">{traceValue(t, units)}</td></tr>)}
-            {r.takeoff.v1_mps !== undefined ? <tr><th scope="row">V1</th><td class="num">{fmt(r.takeoff.v1_mps, 'speed', units)}</td></tr> : null}
-            {r.takeoff.vr_mps !== undefined ? <tr><th scope="row">VR / V2</th><td class="num">{fmt(r.takeoff.vr_mps, 'speed', units)} / {fmt(r.takeoff.v2_mps, 'speed', units)}</td></tr> : null}
-            {r.takeoff.climbGradient !== undefined ? <tr><th scope="row">Climb gradient at V2 (minimum)</th><td class="num">{fmtPct(r.takeoff.climbGradient, 2)} ({fmtPct(r.takeoff.climbMinimum, 1)})</td></tr> : null}
-            {r.takeoff.reference_m !== undefined ? <tr><th scope="row">Reference length with corrections</th><td class="num">{fmt(r.takeoff.reference_m, 'length', units)}</td></tr> : null}
-            {r.takeoff.calibrationFactor !== undefined ? <tr><th scope="row">Calibration factor</th><td class="num">{r.takeoff.calibrationFactor.toFixed(3)}</td></tr> : null}
-            {r.takeoff.torenbeek_m !== undefined ? <tr><th scope="row">Torenbeek field length (indicative)</th><td class="num">{fmt(r.takeoff.torenbeek_m, 'length', units)}</td></tr> : null}
-            {r.takeoff.roskam_m !== undefined ? <tr><th scope="row">Roskam takeoff parameter estimate (indicative)</th><td class="num">{fmt(r.takeoff.roskam_m, 'length', units)}</td></tr> : null}
+            {sec.lines.map((l) => {
+              const c = l.cells[0];
+              if (c === undefined) return null;
+              const v = cellText(c, undefined, units);
+              return <tr><th scope="row">{l.bold ? <strong>{l.label}</strong> : l.label}</th><td class={'text' in c ? undefined : 'num'}>{l.bold ? <strong>{v}</strong> : v}</td></tr>;
+            })}
           </tbody>
         </table>
-      ) : null}
-      {r.landing ? (
-        <table class="compact">
-          <caption>Landing at {fmt(r.landing.mass_kg, 'mass', units)}: {r.landing.rule} ({fmt(r.landing.required_m, 'length', units)})</caption>
-          <tbody>
-            {r.landing.ruleSource ? <tr><th scope="row">Landing factor × {r.landing.factor.toFixed(3)}, from</th><td>{r.landing.ruleSource}</td></tr> : null}
-            {r.landing.components.map((t) => <tr><th scope="row">{t.label}</th><td class="num">{traceValue(t, units)}</td></tr>)}
-            <tr><th scope="row">VREF</th><td class="num">{fmt(r.landing.vref_mps, 'speed', units)}</td></tr>
-            {r.landing.roskam_m !== undefined ? <tr><th scope="row">Roskam landing field length (indicative)</th><td class="num">{fmt(r.landing.roskam_m, 'length', units)}</td></tr> : null}
-          </tbody>
-        </table>
-      ) : null}
-      <table class="compact">
-        <caption>Design route: {r.route.status}{r.route.reason ? ` (${r.route.reason})` : ''}</caption>
-        <tbody>
-          <tr><th scope="row">Stage length / payload</th><td class="num">{fmt(r.route.stageLength_km * 1000, 'distance', units)} / {fmt(r.route.payload_kg, 'mass', units)}</td></tr>
-          <tr><th scope="row">Takeoff mass / arrival mass</th><td class="num">{fmt(r.route.takeoffMass_kg, 'mass', units)} / {fmt(r.route.arrivalMass_kg, 'mass', units)}</td></tr>
-          <tr><th scope="row">Trip fuel / reserve fuel</th><td class="num">{fmt(r.route.tripFuel_kg, 'mass', units)} / {fmt(r.route.reserveFuel_kg, 'mass', units)}</td></tr>
-          {r.route.payloadLeftBehind_kg > 0 ? <tr><th scope="row">Payload left behind</th><td class="num">{fmt(r.route.payloadLeftBehind_kg, 'mass', units)}</td></tr> : null}
-        </tbody>
-      </table>
+      ))}
       <ExistingDetail row={r} />
       {r.warnings.length > 0 ? <ul class="warnings-inline">{r.warnings.map((w) => <li>{w}</li>)}</ul> : null}
     </div>

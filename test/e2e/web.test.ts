@@ -148,7 +148,7 @@ describe('the planner in a browser', () => {
 
   it('opens the components of a row on demand', async () => {
     await page.locator('table.results a:has-text("Components")').first().click();
-    await expect.poll(textOf('.components'), POLL).toContain('Design route');
+    await expect.poll(textOf('.components'), POLL).toContain('Design mass from the route');
   });
 
   it('changes the temperature in the what-if panel and sees the requirement change', async () => {

@@ -81,7 +81,7 @@ describe('building and computing a study', () => {
     const frag = await c.get(`/studies/${studyId}/results/rows/0/0`, { htmx: true });
     expect(frag.status).toBe(200);
     expect(frag.text).toMatch(/^<div class="components">/);
-    expect(frag.text).toContain('Design route');
+    expect(frag.text).toContain('Design mass from the route');
     const full = await c.get(`/studies/${studyId}/results/rows/0/0`);
     expect(full.text).toContain('<!doctype html>');
 

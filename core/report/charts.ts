@@ -5,16 +5,12 @@
  * - takeoff and landing requirements of each aircraft of a scenario against the existing runway;
  * - operations served against runway length, one step curve per scenario;
  * - payload-range of each critical aircraft, with the curve the existing runway allows.
- * The web page (SVG) and the PDF draw exactly these models.
+ * The web page (SVG) and the PDF draw exactly these models, built from the saved result alone (the
+ * payload-range series are computed with the study, core/study/run.ts).
  */
-import type { AircraftProfile } from '../aircraft.js';
-import { payloadForRange, payloadRangeDiagram } from '../route/index.js';
-import { isOperating, reservePolicyOf } from '../study/run.js';
-import type { StudyInput, StudyResult, ScenarioResult } from '../study/types.js';
+import { isOperating } from '../study/run.js';
+import type { PayloadRangeSeries, StudyResult, ScenarioResult } from '../study/types.js';
 import type { ChartModel, ChartPoint, ChartSeries } from './chart.js';
-
-/** Number of samples of the runway-limited payload-range curve. */
-export const RUNWAY_LIMITED_SAMPLES = 40;
 
 function longestTakeoffRun(result: StudyResult): { length_m: number; label: string } | undefined {
   let best: { length_m: number; label: string } | undefined;
@@ -107,58 +103,35 @@ export function operationsServedChart(result: StudyResult): ChartModel {
   };
 }
 
-export function payloadRangeChart(result: StudyResult, input: StudyInput, aircraft: AircraftProfile): ChartModel | undefined {
-  if (!aircraft.cruise) return undefined;
-  const reserves = reservePolicyOf(input.options.reserves);
-  const diagram = payloadRangeDiagram({ aircraft, reserves });
-  if (diagram.status !== 'ok') return undefined;
+/** The payload-range chart of one aircraft, from the series saved with the result (no route model runs here). */
+export function payloadRangeChart(pr: PayloadRangeSeries): ChartModel {
   const series: ChartSeries[] = [
-    { name: `${aircraft.name}: payload-range (MTOW)`, style: 'line', points: diagram.points.map((p) => ({ x: p.stageLength_m, y: p.payload_kg })) },
+    { name: `${pr.aircraftName}: payload-range (MTOW)`, style: 'line', points: pr.points.map((p) => ({ x: p.stageLength_m, y: p.payload_kg })) },
   ];
-  // The greatest takeoff mass any existing runway direction allows at design conditions.
-  let limit: number | undefined;
-  let stage: number | undefined;
-  for (const s of result.scenarios) {
-    for (const r of s.rows) {
-      if (r.aircraft !== aircraft.id) continue;
-      stage = Math.max(stage ?? 0, r.route.stageLength_km * 1000);
-      for (const e of r.existing) if (e.maxTakeoffMass_kg !== undefined) limit = Math.max(limit ?? 0, e.maxTakeoffMass_kg);
-    }
-  }
-  if (limit !== undefined && limit < aircraft.mtow_kg - 1) {
-    const pts: ChartPoint[] = [];
-    const far = diagram.ferryRange_m;
-    for (let k = 0; k <= RUNWAY_LIMITED_SAMPLES; k++) {
-      const x = Math.max(1000, (far * k) / RUNWAY_LIMITED_SAMPLES);
-      const p = payloadForRange({ aircraft, takeoffMass_kg: limit, stageLength_m: x, reserves });
-      if (p.status !== 'ok') break;
-      pts.push({ x, y: p.payload_kg });
-    }
-    series.push({ name: `Existing runway: takeoff mass limited to ${Math.floor(limit)} kg`, style: 'line', emphasis: true, points: pts });
+  if (pr.runwayLimited) {
+    series.push({
+      name: `Existing runway: takeoff mass limited to ${Math.floor(pr.runwayLimited.takeoffMass_kg)} kg`, style: 'line', emphasis: true,
+      points: pr.runwayLimited.points.map((p): ChartPoint => ({ x: p.stageLength_m, y: p.payload_kg })),
+    });
   }
   return {
-    id: `payload-range-${aircraft.id}`,
-    title: `${aircraft.name}: payload against range`,
+    id: `payload-range-${pr.aircraft}`,
+    title: `${pr.aircraftName}: payload against range`,
     xLabel: 'Stage length',
     yLabel: 'Payload',
     xKind: 'distance',
     yKind: 'mass',
     series,
-    rules: stage === undefined ? [] : [{ axis: 'x', value: stage, label: 'Design stage' }],
+    rules: pr.designStage_m === undefined ? [] : [{ axis: 'x', value: pr.designStage_m, label: 'Design stage' }],
     yFromZero: true,
   };
 }
 
-/** Every chart of a study, in report order. */
-export function studyCharts(result: StudyResult, input: StudyInput): ChartModel[] {
+/** Every chart of a study, in report order, from the result alone: views never run physics. */
+export function studyCharts(result: StudyResult): ChartModel[] {
   const charts: ChartModel[] = [temperatureChart(result)];
   result.scenarios.forEach((s, i) => charts.push(existingRunwayChart(result, s, i)));
   charts.push(operationsServedChart(result));
-  const critical = [...new Set(result.scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null))];
-  for (const id of critical) {
-    const a = input.aircraft.find((x) => x.id === id);
-    const c = a ? payloadRangeChart(result, input, a) : undefined;
-    if (c) charts.push(c);
-  }
+  for (const pr of result.payloadRange ?? []) charts.push(payloadRangeChart(pr));
   return charts;
 }

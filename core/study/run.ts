@@ -43,7 +43,7 @@ import {
   aeroplaneReferenceFieldLength, checkPlausibility, plausibilityBound, takeoffDistances,
   type CheckedDistance, type PlausibilityBound, type PlausibilityFinding,
 } from '../plausibility.js';
-import { designTakeoffMass, type ReservePolicy, type RouteResult } from '../route/index.js';
+import { designTakeoffMass, payloadForRange, payloadRangeDiagram, type ReservePolicy, type RouteResult } from '../route/index.js';
 import { analyseRunwayProfile, checkDeclaredDistances, checkProfileSlopes } from '../runway.js';
 import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, climbCappedTakeoff, climbLimitedPeak, type CappedTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
@@ -52,7 +52,7 @@ import { calibrateTakeoff, type TakeoffCalibrationResult } from '../calibrate.js
 import { DEFAULT_OPERATING_RULES } from '../operatingRules.js';
 import { assessExistingRunway, existingRunwayCheckOf, type MaxLandingMassResult, type MaxTakeoffMassResult } from '../runwayCheck.js';
 import type {
-  AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint,
+  AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint, PayloadRangeSeries,
   RouteSummary, RowResult, RunwaySummary, ScenarioResult, SensitivityCurve, SiteConditions, StudyInput,
   StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
 } from './types.js';
@@ -716,6 +716,7 @@ export function runStudy(input: StudyInput): StudyResult {
   });
 
   const sensitivity = sensitivityCurves(ev, input, scenarios);
+  const payloadRange = payloadRangeSeries(input, scenarios);
   return {
     methodVersion: STUDY_METHOD_VERSION,
     name: input.name,
@@ -733,8 +734,55 @@ export function runStudy(input: StudyInput): StudyResult {
       regularUseAircraft: s.rows.filter((r) => r.regularUse).length,
     })),
     sensitivity,
+    payloadRange,
     warnings: site.warnings,
   };
+}
+
+/** Samples of the runway-limited payload-range curve. */
+export const RUNWAY_LIMITED_SAMPLES = 40;
+
+/**
+ * Payload-range of each scenario's critical aircraft (with cruise data): the MTOW diagram and, when
+ * an existing runway direction limits the takeoff mass below MTOW, the curve at that mass.
+ */
+function payloadRangeSeries(input: StudyInput, scenarios: readonly ScenarioResult[]): PayloadRangeSeries[] {
+  const reserves = reservePolicyOf(input.options.reserves);
+  const ids = [...new Set(scenarios.map((s) => s.criticalAircraft).filter((x): x is string => x !== null))];
+  const out: PayloadRangeSeries[] = [];
+  for (const id of ids) {
+    const aircraft = input.aircraft.find((x) => x.id === id);
+    if (!aircraft?.cruise) continue;
+    const diagram = payloadRangeDiagram({ aircraft, reserves });
+    if (diagram.status !== 'ok') continue;
+    let limit: number | undefined;
+    let stage: number | undefined;
+    for (const s of scenarios) {
+      for (const r of s.rows) {
+        if (r.aircraft !== id) continue;
+        stage = Math.max(stage ?? 0, r.route.stageLength_km * 1000);
+        for (const e of r.existing) if (e.maxTakeoffMass_kg !== undefined) limit = Math.max(limit ?? 0, e.maxTakeoffMass_kg);
+      }
+    }
+    let runwayLimited: PayloadRangeSeries['runwayLimited'];
+    if (limit !== undefined && limit < aircraft.mtow_kg - 1) {
+      const points: { stageLength_m: number; payload_kg: number }[] = [];
+      for (let k = 0; k <= RUNWAY_LIMITED_SAMPLES; k++) {
+        const x = Math.max(1000, (diagram.ferryRange_m * k) / RUNWAY_LIMITED_SAMPLES);
+        const p = payloadForRange({ aircraft, takeoffMass_kg: limit, stageLength_m: x, reserves });
+        if (p.status !== 'ok') break;
+        points.push({ stageLength_m: x, payload_kg: p.payload_kg });
+      }
+      runwayLimited = { takeoffMass_kg: limit, points };
+    }
+    out.push({
+      aircraft: id, aircraftName: aircraft.name,
+      points: diagram.points.map((p) => ({ stageLength_m: p.stageLength_m, payload_kg: p.payload_kg })),
+      ...(runwayLimited ? { runwayLimited } : {}),
+      ...(stage !== undefined ? { designStage_m: stage } : {}),
+    });
+  }
+  return out;
 }
 
 function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly ScenarioResult[]): SensitivityCurve[] {

@@ -352,5 +352,19 @@ export interface StudyResult {
     readonly regularUseAircraft: number;
   }[];
   readonly sensitivity: readonly SensitivityCurve[];
+  /** Payload-range of each critical aircraft with cruise data, computed with the study (views never run the route model). */
+  readonly payloadRange: readonly PayloadRangeSeries[];
   readonly warnings: readonly string[];
+}
+
+/** A payload-range diagram of one aircraft as the charts draw it (SI: stage length m, payload kg). */
+export interface PayloadRangeSeries {
+  readonly aircraft: string;
+  readonly aircraftName: string;
+  /** At MTOW: the corner points of the diagram. */
+  readonly points: readonly { readonly stageLength_m: number; readonly payload_kg: number }[];
+  /** At the greatest takeoff mass an existing runway direction allows, when below MTOW. */
+  readonly runwayLimited?: { readonly takeoffMass_kg: number; readonly points: readonly { readonly stageLength_m: number; readonly payload_kg: number }[] };
+  /** The longest design stage of the aircraft's rows, m. */
+  readonly designStage_m?: number;
 }

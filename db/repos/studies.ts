@@ -405,7 +405,7 @@ export function allStudyResults(db: Db, studyId: number): SavedResult[] {
 export type InputsStatus =
   | { readonly state: 'never-saved' }
   | { readonly state: 'unchanged'; readonly saved: SavedResultSummary }
-  | { readonly state: 'changed'; readonly saved: SavedResultSummary };
+  | { readonly state: 'changed'; readonly saved: SavedResultSummary; readonly methodChanged?: true };
 
 /**
  * Whether the study's current input differs from the input of its latest saved result: the caller

@@ -78,7 +78,7 @@ export function appendixModel(args: AppendixPdfArgs): AppendixModel {
   return buildAppendixModel({
     input: args.input,
     result,
-    charts: studyCharts(args.output, args.input),
+    charts: studyCharts(args.output),
     inputDigest: args.output.inputDigest,
     date: issueDate(args.clock()),
     version: args.version,

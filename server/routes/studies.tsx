@@ -293,7 +293,7 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     if (!latest || !latest.current) {
       const stale = state.status.state === 'never-saved' ? 'never-saved' : 'changed';
       return page(c, { title: `Results: ${s.name}`, units: s.options.units }, () => (
-        <ComputePanel studyId={s.id} name={s.name} state={stale} problems={state.problems} auto={state.problems.length === 0 && c.req.query('auto') !== 'no'} />
+        <ComputePanel studyId={s.id} name={s.name} state={stale} methodChanged={state.status.state === 'changed' && state.status.methodChanged === true} problems={state.problems} auto={state.problems.length === 0 && c.req.query('auto') !== 'no'} />
       ));
     }
     const view = viewOf(c, s.options.units);

@@ -7,7 +7,7 @@
  */
 import { sql } from 'drizzle-orm';
 import type { ChartModel, StudyInput } from '../../core/index.js';
-import { InputDomainError, siteConditions, studyCharts, validateStudy } from '../../core/index.js';
+import { InputDomainError, STUDY_METHOD_VERSION, siteConditions, studyCharts, validateStudy } from '../../core/index.js';
 import { NotFoundError } from '../../db/errors.js';
 import {
   getStudy, getStudyResult, inputsChangedSinceSave, loadStudyInput, saveStudyResult, type InputsStatus, type SavedResultSummary,
@@ -45,6 +45,16 @@ function friendly(path: string, message: string, input: StudyInput): string {
   p = p.replace(/^aircraft$/, 'aircraft (fleet rows)');
   if (p === 'scenarios') p = 'scenarios';
   return `${p}: ${message}`;
+}
+
+/**
+ * A saved result computed by another version of the methods is out of date even when the input is
+ * the same: its numbers (and the series the views draw) may differ from what the engine gives now,
+ * so it is recomputed, never shown as current.
+ */
+function currentMethod(status: InputsStatus): InputsStatus {
+  if (status.state === 'unchanged' && status.saved.methodVersion !== STUDY_METHOD_VERSION) return { state: 'changed', saved: status.saved, methodChanged: true };
+  return status;
 }
 
 export class StudyService {
@@ -110,10 +120,10 @@ export class StudyService {
       return { studyId, input, problems: [friendly(e.field, `${e.message.slice(e.field.length + 2)}`, input)], status: inputsChangedSinceSave(this.db, studyId, '-') };
     }
     const digest = inputDigest(parsed.input);
-    return { studyId, input, ready: parsed.input, problems: [], digest, status: inputsChangedSinceSave(this.db, studyId, digest) };
+    return { studyId, input, ready: parsed.input, problems: [], digest, status: currentMethod(inputsChangedSinceSave(this.db, studyId, digest)) };
   }
 
-  /** The saved result with its parsed output and charts (cached; saved results never change). */
+  /** The saved result with its parsed output and charts (cached; saved results never change). A result of an older method version is never current (see currentMethod). */
   load(studyId: number, saved: SavedResultSummary): LoadedResult {
     const hit = this.results.get(saved.id);
     if (hit) return hit;
@@ -121,7 +131,7 @@ export class StudyService {
     if (!full) throw new NotFoundError('saved result', saved.id);
     const output = full.result as StudyOutput;
     const input = full.input as StudyInput;
-    const loaded: LoadedResult = { saved, output, input, charts: studyCharts(output, input) };
+    const loaded: LoadedResult = { saved, output, input, charts: studyCharts(output) };
     this.results.set(saved.id, loaded);
     return loaded;
   }

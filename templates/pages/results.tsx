@@ -268,7 +268,7 @@ export function ReportLink(p: { studyId: number }) {
 }
 
 /** Shown when there is no saved result for the current inputs: computes on load with htmx, or on click. */
-export function ComputePanel(p: { studyId: number; name: string; state: 'never-saved' | 'changed'; problems: readonly string[]; auto: boolean }) {
+export function ComputePanel(p: { studyId: number; name: string; state: 'never-saved' | 'changed'; methodChanged?: boolean; problems: readonly string[]; auto: boolean }) {
   return (
     <>
       <h1>Results: {p.name}</h1>
@@ -280,7 +280,7 @@ export function ComputePanel(p: { studyId: number; name: string; state: 'never-s
         </div>
       ) : (
         <PostForm action={`/studies/${p.studyId}/run`} label="Compute the study">
-          <p>{p.state === 'never-saved' ? 'This study has not been computed yet.' : 'The inputs have changed since the last computation.'}</p>
+          <p>{p.state === 'never-saved' ? 'This study has not been computed yet.' : p.methodChanged ? 'The last computation used an older version of the methods; the results are computed again.' : 'The inputs have changed since the last computation.'}</p>
           <p class="actions">
             <button type="submit" class="primary" id="compute-button">Compute results</button>
             <span class="computing htmx-indicator" role="status"><span class="spinner" aria-hidden="true"></span> Computing the study… large studies take a few seconds.</span>

@@ -19,7 +19,7 @@ function inputOf(doc: unknown): StudyInput {
 const input = inputOf(demo);
 const result = runStudy(input);
 const model: AppendixModel = buildAppendixModel({
-  input, result, charts: studyCharts(result, input), inputDigest: 'f'.repeat(64), date: '2026-12-02', version: '0.1.0-test',
+  input, result, charts: studyCharts(result), inputDigest: 'f'.repeat(64), date: '2026-12-02', version: '0.1.0-test',
 });
 
 const blocksOf = (id: string): readonly Block[] => model.sections.find((s) => s.id === id)?.blocks ?? [];
@@ -75,7 +75,7 @@ describe('appendix model of the demo study', () => {
 
   it('places every chart model in the charts section, in order', () => {
     const charts = blocksOf('charts').filter((b) => b.type === 'chart').map((b) => (b.type === 'chart' ? b.chart.id : ''));
-    expect(charts).toEqual(studyCharts(result, input).map((c) => c.id));
+    expect(charts).toEqual(studyCharts(result).map((c) => c.id));
     expect(charts.length).toBeGreaterThanOrEqual(4);
   });
 });

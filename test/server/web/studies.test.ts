@@ -204,3 +204,21 @@ describe('switching a study between SI and US units keeps its result current (is
     expect(csv.text.split('\n')[1]).toContain('required_ft');
   });
 });
+
+describe('a saved result of an older method version is not current (issue 14)', () => {
+  it('the results page recomputes it, the downloads wait for the new result, and the charts come from the saved result', async () => {
+    const { app, db, sqlite, studyId } = makeApp();
+    const c = await browser(app);
+    await c.post(`/studies/${studyId}/run`, {});
+    const first = latestStudyResult(db, studyId)!;
+    // The payload-range series are part of the saved result (views never run the route model).
+    expect((first.result as StudyOutput).payloadRange.length).toBeGreaterThan(0);
+    sqlite.prepare('update saved_results set method_version = ? where id = ?').run('runwright-methods-0', first.id);
+    const page = await c.get(`/studies/${studyId}/results`);
+    expect(page.text).toContain('The last computation used an older version of the methods');
+    expect((await c.get(`/studies/${studyId}/results.csv`)).status).toBe(303);
+    await c.post(`/studies/${studyId}/run`, {});
+    expect(latestStudyResult(db, studyId)!.id).not.toBe(first.id);
+    expect((await c.get(`/studies/${studyId}/results.csv`)).status).toBe(200);
+  });
+});

@@ -81,6 +81,42 @@ export function roundUpToIncrement(length_m: number, increment_m: number): numbe
   return Math.max(0, n) * increment_m;
 }
 
+/**
+ * The design temperature of a site, the one rule for the study and the site page: the given value,
+ * else the aerodrome reference temperature from the monthly climate (ICAO Annex 14 §2.4.1; the older
+ * formula beside it), checked against the design-temperature range. Throws InputDomainError when
+ * neither is there or the derived value is out of range.
+ */
+export function siteDesignTemperature(site: StudyInput['site']): {
+  designTemperature_c: number; source: 'given' | 'climate'; climate: SiteConditions['climate']; hottestMonthMean_c?: number; warnings: string[];
+} {
+  const warnings: string[] = [];
+  let climate: SiteConditions['climate'];
+  let hottestMonthMean_c: number | undefined;
+  if (site.climate) {
+    const d = designTemperatureFromMonthly({ months: site.climate.monthly, includeOlderFormula: true });
+    checkDerivedDesignTemperature(site.climate.monthly, d, 'site.climate.monthly');
+    climate = {
+      source: site.climate.source,
+      ...(site.climate.years === undefined ? {} : { years: site.climate.years }),
+      hottestMonth: d.hottestMonth,
+      art_c: d.art_c,
+      maxMeanMaxMonth: d.maxMeanMaxMonth,
+      maxMeanMax_c: d.maxMeanMax_c,
+      monthsDiffer: d.monthsDiffer,
+      ...(d.olderFormula ? { olderFormula_c: d.olderFormula.art_c } : {}),
+    };
+    hottestMonthMean_c = d.hottestMonthMean_c;
+    warnings.push(...d.warnings);
+  }
+  const extra = hottestMonthMean_c === undefined ? {} : { hottestMonthMean_c };
+  if (site.designTemperature_c !== undefined) {
+    return { designTemperature_c: inRange('site.designTemperature_c', site.designTemperature_c, DESIGN_TEMPERATURE_RANGE), source: 'given', climate, ...extra, warnings };
+  }
+  if (climate) return { designTemperature_c: climate.art_c, source: 'climate', climate, ...extra, warnings };
+  throw new InputDomainError('site.designTemperature_c', undefined, 'a design temperature or monthly climate data');
+}
+
 /** The route model's reserve policy for a study's reserve option. */
 export function reservePolicyOf(r: StudyReserves): ReservePolicy {
   const alt = r.alternate_km === undefined ? {} : { alternateDistance_m: r.alternate_km * 1000 };
@@ -105,33 +141,9 @@ export function siteConditions(input: StudyInput): SiteConditions {
   inRange('site.elevation_m', site.elevation_m, SITE_ELEVATION_RANGE);
   check(site.runways.length > 0, 'site.runways', site.runways.length, 'at least one runway');
   const warnings: string[] = [];
-  let designTemperature_c: number;
-  let source: 'given' | 'climate';
-  let climate: SiteConditions['climate'];
-  if (site.climate) {
-    const d = designTemperatureFromMonthly({ months: site.climate.monthly, includeOlderFormula: true });
-    checkDerivedDesignTemperature(site.climate.monthly, d, 'site.climate.monthly');
-    climate = {
-      source: site.climate.source,
-      ...(site.climate.years === undefined ? {} : { years: site.climate.years }),
-      hottestMonth: d.hottestMonth,
-      art_c: d.art_c,
-      maxMeanMaxMonth: d.maxMeanMaxMonth,
-      maxMeanMax_c: d.maxMeanMax_c,
-      monthsDiffer: d.monthsDiffer,
-      ...(d.olderFormula ? { olderFormula_c: d.olderFormula.art_c } : {}),
-    };
-    warnings.push(...d.warnings);
-  }
-  if (site.designTemperature_c !== undefined) {
-    designTemperature_c = inRange('site.designTemperature_c', site.designTemperature_c, DESIGN_TEMPERATURE_RANGE);
-    source = 'given';
-  } else if (climate) {
-    designTemperature_c = climate.art_c;
-    source = 'climate';
-  } else {
-    throw new InputDomainError('site.designTemperature_c', undefined, 'a design temperature or monthly climate data');
-  }
+  const temperature = siteDesignTemperature(site);
+  const { designTemperature_c, source, climate } = temperature;
+  warnings.push(...temperature.warnings);
   const air = airAt(site.elevation_m, designTemperature_c);
   const runways: RunwaySummary[] = site.runways.map((r, i) => {
     check(r.directions.length >= 1 && r.directions.length <= 2, `site.runways[${i}].directions`, r.directions.length, '1 or 2 directions');

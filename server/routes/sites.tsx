@@ -5,7 +5,7 @@
  */
 import { Hono, type Context } from 'hono';
 import {
-  InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances, climateChart, designTemperatureFromMonthly,
+  InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances, climateChart, siteDesignTemperature,
   runwayProfileChart, type DailyFileTemperatureUnit, type RunwayInput, type SiteInput,
 } from '../../core/index.js';
 import { NotFoundError, SiteInUseError } from '../../db/errors.js';
@@ -32,29 +32,26 @@ export interface SiteRouteDeps {
   readonly jobs: JobRunner;
 }
 
+/** The design temperature as the study derives it (core `siteDesignTemperature`), for the site page. */
 function designView(s: SiteInput): DesignTemperatureView {
-  const months = s.climate?.monthly ?? [];
-  if (months.length === 0) {
-    return s.designTemperature_c === undefined ? { source: 'none', warnings: [] } : { source: 'given', used_c: s.designTemperature_c, warnings: [] };
-  }
-  let d: ReturnType<typeof designTemperatureFromMonthly>;
+  if (s.designTemperature_c === undefined && !(s.climate?.monthly.length)) return { source: 'none', warnings: [] };
+  let d: ReturnType<typeof siteDesignTemperature>;
   try {
-    d = designTemperatureFromMonthly({ months, includeOlderFormula: months.every((m) => m.meanMin_c !== undefined || m.mean_c !== undefined) });
+    d = siteDesignTemperature(s);
   } catch (e) {
     if (!(e instanceof InputDomainError)) throw e;
     const warnings = [`The design temperature cannot be derived from the monthly values: ${e.message}`];
     return s.designTemperature_c === undefined ? { source: 'none', warnings } : { source: 'given', used_c: s.designTemperature_c, warnings };
   }
+  const c = d.climate;
   return {
-    source: s.designTemperature_c === undefined ? 'climate' : 'given',
-    used_c: s.designTemperature_c ?? d.art_c,
-    hottestMonth: d.hottestMonth,
-    hottestMonthMean_c: d.hottestMonthMean_c,
-    art_c: d.art_c,
-    maxMeanMaxMonth: d.maxMeanMaxMonth,
-    maxMeanMax_c: d.maxMeanMax_c,
-    monthsDiffer: d.monthsDiffer,
-    ...(d.olderFormula ? { olderFormula_c: d.olderFormula.art_c } : {}),
+    source: d.source,
+    used_c: d.designTemperature_c,
+    ...(c ? {
+      hottestMonth: c.hottestMonth, art_c: c.art_c, maxMeanMaxMonth: c.maxMeanMaxMonth, maxMeanMax_c: c.maxMeanMax_c, monthsDiffer: c.monthsDiffer,
+      ...(c.olderFormula_c !== undefined ? { olderFormula_c: c.olderFormula_c } : {}),
+    } : {}),
+    ...(d.hottestMonthMean_c !== undefined ? { hottestMonthMean_c: d.hottestMonthMean_c } : {}),
     warnings: d.warnings,
   };
 }

@@ -7,7 +7,7 @@
  */
 import { sql } from 'drizzle-orm';
 import type { ChartModel, StudyInput } from '../../core/index.js';
-import { InputDomainError, STUDY_METHOD_VERSION, siteConditions, studyCharts, validateStudy } from '../../core/index.js';
+import { STUDY_METHOD_VERSION, studyCharts } from '../../core/index.js';
 import { NotFoundError } from '../../db/errors.js';
 import {
   getStudy, getStudyResult, inputsChangedSinceSave, loadStudyInput, saveStudyResult, type InputsStatus, type SavedResultSummary,
@@ -111,14 +111,7 @@ export class StudyService {
         status: inputsChangedSinceSave(this.db, studyId, '-'),
       };
     }
-    // The core's own checks (the site's climate and runways, the study as a whole) before a run.
-    try {
-      validateStudy(parsed.input);
-      siteConditions(parsed.input);
-    } catch (e) {
-      if (!(e instanceof InputDomainError)) throw e;
-      return { studyId, input, problems: [friendly(e.field, `${e.message.slice(e.field.length + 2)}`, input)], status: inputsChangedSinceSave(this.db, studyId, '-') };
-    }
+    // parseStudyDocument has run core's own study and site checks already (server/study.ts).
     const digest = inputDigest(parsed.input);
     return { studyId, input, ready: parsed.input, problems: [], digest, status: currentMethod(inputsChangedSinceSave(this.db, studyId, digest)) };
   }

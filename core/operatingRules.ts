@@ -2,7 +2,7 @@
  * Operating rule sets: which regulatory factors turn a landing distance into a landing runway, and
  * the planning factors used for light (normal-category) aircraft, which no rule set factors.
  *
- * Sources (docs/methods.md, "Operating rules"; ../shared/domain-reference.md §4.5):
+ * Sources (docs/methods.md, "Operating rules"; 14 CFR 121.195 and 135.385):
  * - us-121: 14 CFR 121.195(b) land within 60 % of the runway (÷ 0.60); (c) turboprop alternate 70 %;
  *   (d) turbojet on a wet runway 115 % of (b).
  * - us-135-eod: 14 CFR 135.385(f) eligible on-demand operators land within 80 % (÷ 0.80); 135.385(d)

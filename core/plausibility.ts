@@ -15,7 +15,7 @@
  *   takeoff model at those conditions on a dry paved runway (the same value the classification uses).
  *   A per-aircraft constant, so the bound does not move with mass inside a mass search.
  * - PLAUSIBILITY_RATIO = 2.5: project convention. The percentage corrections of the ICAO method ask for
- *   a specific study once elevation and temperature add 35 % (domain reference §1.1); 2.5× is a 150 %
+ *   a specific study once elevation and temperature add 35 % (ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections); 2.5× is a 150 %
  *   increase, far beyond any correction an aircraft's planning data cover.
  * - PLAUSIBILITY_CAP_M = 5 500 m: the length class of the longest paved runways in service (common
  *   practice; from memory, not from a published table). A requirement above it cannot be met at any

@@ -5,7 +5,7 @@
  * - Mattingly, Heiser & Pratt, *Aircraft Engine Design* (2nd ed., 2002), high-bypass installed thrust
  *   lapse: θ0 = θ·(1 + 0.2·M²), δ0 = δ·(1 + 0.2·M²)^3.5,
  *   α = δ0·(1 − 0.49·√M) for θ0 ≤ TR, α = δ0·(1 − 0.49·√M − 3·(θ0 − TR)/(1.5 + M)) above
- *   (domain reference §8.1). Below TR, static thrust depends on pressure alone (flat rating).
+ *   (Mattingly, Heiser and Pratt, Aircraft Engine Design (2002)). Below TR, static thrust depends on pressure alone (flat rating).
  * - Flat-rating corner (the throttle ratio follows the rating, evaluated at the field's pressure
  *   altitude Hp): TR = (T_c(Hp) + 273.15)/288.15 with
  *     ISA + ΔT form (default):  T_c(Hp) = T_ISA(Hp) + ΔT,  ΔT = flatRatingDeltaIsa_k, or when only
@@ -17,17 +17,17 @@
  *   the ISA + ΔT form exactly (the ISA tropospheric lapse).
  * - Bartel & Young (2008), "Simplified thrust and fuel consumption models for modern two-shaft turbofan
  *   engines", J. Aircraft, takeoff form: T/T0 = 1 − 0.377·(1 + λ)/√((1 + 0.82·λ)·G0)·M
- *   + (0.23 + 0.19·√λ)·M², G0 = 0.0606·λ + 0.6337 (domain reference §8.2), multiplied here by the
+ *   + (0.23 + 0.19·√λ)·M², G0 = 0.0606·λ + 0.6337 (Bartel and Young, J. Aircraft (2008)), multiplied here by the
  *   static altitude/temperature model (Mattingly at M = 0, with the same corner) for T0 at the ambient
  *   condition, so both lapse models respect the flat-rating corner.
  *
  * Piston: Gagg–Ferrar normally aspirated power lapse P/P0 = σ − (1 − σ)/7.55 (≈ 1.132·σ − 0.132;
- * domain reference §8.3).
+ * Gudmundsson ch. 14–15; Gagg and Ferrar).
  *
  * Turboprop shaft power: P/P0 = min(1, (σ/σ_flat)^0.7), σ_flat = 288.15/(T_c0 + 273.15) the density
  * ratio at sea-level pressure and the sea-level corner temperature: power held at its rating while the
  * air is denser than at the flat-rating point, falling with density below it. The σ^0.7 form is from
- * memory (domain reference §8.3 gives σ^0.7…σ^0.8).
+ * memory (Gudmundsson ch. 14–15; Gagg and Ferrar gives σ^0.7…σ^0.8).
  *
  * Propeller thrust (momentum theory with a figure of merit, blended to η·P/V):
  * - static thrust T_s = (FM·P)^(2/3)·(2ρA)^(1/3), A = πD²/4 — the actuator disk whose ideal induced

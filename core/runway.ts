@@ -5,9 +5,9 @@
  * runway ends):
  * - effective gradient G = (z_max − z_min) / L, L = length between the end points (Horonjeff et al.,
  *   *Planning and Design of Airports*, 5th ed., p. 81; the same high-minus-low definition as ICAO's
- *   "maximum effective" gradient, Horonjeff Table 6-11 footnote; domain-reference §3.1);
+ *   "maximum effective" gradient, Horonjeff Table 6-11 footnote; ICAO Annex 14 Vol I §3.1 and FAA AC 150/5325-4B (effective gradient));
  * - the high and low points and their difference ΔH = z_max − z_min (the elevation difference used by
- *   the authority's 10-ft-per-ft takeoff-length adjustment, domain-reference §3.2);
+ *   the authority's 10-ft-per-ft takeoff-length adjustment, FAA AC 150/5325-4B);
  * - the steepest slope between consecutive points, and the average slope for a takeoff in each direction
  *   (end to end, signed + uphill in the direction of takeoff);
  * - the largest deviation of an intermediate point from the straight line joining the ends (Horonjeff

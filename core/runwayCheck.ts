@@ -3,7 +3,7 @@
  * landing masses the declared distances allow, and the payload and range that costs on a route.
  *
  * 1. Field-length components (Horonjeff, McKelvey, Sproule, Young, *Planning and Design of Airports*,
- *    5th ed., 2010, eqs 2-4 … 2-14, pp. 85-88; domain reference §4.2), from the distances of the
+ *    5th ed., 2010, eqs 2-4 … 2-14, pp. 85-88; 14 CFR 25.113), from the distances of the
  *    takeoff and landing models:
  *      TOD1 = 1.15·D35_AEO     CL1max = ½(TOD1 − 1.15·LOD_AEO)    TOR1 = TOD1 − CL1max
  *      TOD2 = D35_OEI          CL2max = ½(TOD2 − LOD_OEI)         TOR2 = TOD2 − CL2max
@@ -30,7 +30,7 @@
  *    a decision speed and the search starts there. Greatest landing mass for an LDA: the same
  *    bisection on the landing model.
  * 3. Route penalty at a limited mass: the greatest payload for the design stage (route payloadForRange)
- *    and the greatest stage for the design payload (route rangeForPayload), domain reference §9.3–9.4.
+ *    and the greatest stage for the design payload (route rangeForPayload), Breguet range equation, Aeronautical Engineer's Data Book ch. 9.
  *
  * 4. Plausibility: the aircraft's plausibility bound (core/plausibility.ts) guards every need. A
  *    takeoff whose requirement or physics distances exceed it is refused in the mass searches (limit
@@ -96,7 +96,7 @@ export interface ExistingRunwayCheck {
 
 export const RUNWAY_CHECK_METHOD_VERSION = 'runway-check/1';
 
-/** Greatest clearway counted in the field-length decomposition, m (1000 ft; Horonjeff §2, domain reference §4.2). */
+/** Greatest clearway counted in the field-length decomposition, m (1000 ft; Horonjeff §2, 14 CFR 25.113). */
 export const MAX_CLEARWAY_M = 1000 * FT;
 /** Mass tolerance of the greatest-mass searches, kg. */
 export const TAKEOFF_MASS_TOL_KG = 10;

@@ -1,12 +1,12 @@
 /**
  * Monthly climate statistics and the design temperature from daily station records spanning years.
  *
- * Steps (domain-reference §10.4):
+ * Steps (NOAA NCEI Global Summary of the Month completeness rule):
  * 1. Per (year, month) and element (TMAX, TMIN, TAVG): the mean of the days that have a value, the
  *    number of missing days and the longest run of consecutive missing days. An element's monthly
  *    value is used only when no more than 5 days are missing and no more than 3 consecutive days are
  *    missing (NOAA Global Summary of the Month field description, completeness rule for monthly
- *    TMAX/TMIN, as cited in domain-reference §10.1). The thresholds can be changed by the caller.
+ *    TMAX/TMIN, as cited in NOAA NCEI GHCN-Daily documentation). The thresholds can be changed by the caller.
  * 2. A (year, month) is used when its TMAX is complete and its mean temperature can be formed: the
  *    TAVG mean when TAVG is complete (unless the caller asks for max-min only), else
  *    (mean TMAX + mean TMIN)/2 when TMIN is complete.
@@ -67,7 +67,7 @@ export interface DailyClimateInput {
   readonly toYear?: number;
   /** Default NOAA_GSOM_COMPLETENESS. */
   readonly completeness?: CompletenessRule;
-  /** Default 'tavg-then-max-min' (domain-reference §10.4 step 2). */
+  /** Default 'tavg-then-max-min' (NOAA NCEI Global Summary of the Month completeness rule step 2). */
   readonly meanSource?: MeanTemperatureSource;
   /** Also compute the older formula Ta + (Tm − Ta)/3. */
   readonly includeOlderFormula?: boolean;

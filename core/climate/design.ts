@@ -4,7 +4,7 @@
  * Computes:
  * - the aerodrome reference temperature (ART): the monthly mean of the daily maximum temperatures of
  *   the hottest month, the hottest month being the one with the highest monthly mean temperature
- *   (ICAO Annex 14 Vol. I, 2.4.1 standard and 2.4.2 recommendation, as quoted in domain-reference §1.2);
+ *   (ICAO Annex 14 Vol. I, 2.4.1 standard and 2.4.2 recommendation, as quoted in ICAO Annex 14 Vol I §2.4.1–2.4.2);
  * - the month with the highest mean daily maximum and its value (the "mean daily maximum temperature
  *   of the hottest month" read by the authority's runway-length curves; whether that hottest month is
  *   chosen by mean or by mean maximum is from memory, so both are reported and a flag is raised when

@@ -2,7 +2,7 @@
  * Readers for open climate files (text in, records out; no I/O): GHCN-Daily station CSV, the
  * per-station daily CSV with a header row, and the monthly normals CSV.
  *
- * Formats (domain-reference §10.2, §10.3; NOAA NCEI GHCN-Daily readme and normals documentation):
+ * Formats (NOAA NCEI GHCN-Daily format description (readme), §10.3; NOAA NCEI GHCN-Daily readme and normals documentation):
  * - GHCN-Daily by-station CSV: no header; ID, DATE (YYYYMMDD), ELEMENT, VALUE, M-FLAG, Q-FLAG,
  *   S-FLAG, OBS-TIME; TMAX/TMIN/TAVG in tenths of °C; a non-blank Q-flag marks a value that failed
  *   quality control; −9999 = missing.

@@ -6,7 +6,7 @@
  * (atmosphere-climate-runway.md, route.md, takeoff.md, landing-corrections-classification.md) so that
  * an appendix reader can check the numbers without the code. Each entry names the doc it condenses and
  * a few phrases of that doc (`docAnchors`) that a test looks for, so the two cannot silently drift.
- * Sources are those listed in /work/shared/domain-reference.md §13 (titles as found); items marked
+ * Sources are the references listed in METHOD_REFERENCES below (titles as found); items marked
  * "from memory" there are marked the same way here.
  *
  * Formulas use Unicode (ρ, σ, ≥, ·); renderers that cannot draw a glyph substitute it in one place.

@@ -2,7 +2,7 @@
  * Breguet range and endurance, and their inverses (the weight ratio for a distance or a time).
  *
  * Source: the Breguet range equation in its usual textbook forms, as collected in
- * domain-reference.md §9.1 (*Aeronautical Engineer's Data Book*, ch. 9, for the jet form):
+ * Aeronautical Engineer's Data Book ch. 9 (*Aeronautical Engineer's Data Book*, ch. 9, for the jet form):
  *   jet range           R = (V / c_T) · (L/D) · ln(W_i / W_f)      c_T = TSFC in 1/s
  *   propeller range     R = (η_p / c_P) · (L/D) · ln(W_i / W_f)    c_P = BSFC · g in 1/m, BSFC in kg/(W·s)
  *   jet endurance       E = (1 / c_T) · (L/D) · ln(W_i / W_f)

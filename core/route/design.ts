@@ -3,7 +3,7 @@
  * (greatest payload for a stage at a given takeoff mass; greatest stage for a payload at a given
  * takeoff mass).
  *
- * Source: domain-reference.md §9.3 (closed form, weights multiplicative; design TOW = min(MTOW, W_TO);
+ * Source: Breguet range equation, Aeronautical Engineer's Data Book ch. 9 (closed form, weights multiplicative; design TOW = min(MTOW, W_TO);
  * check the landing mass against MLW and the fuel against capacity) with the reserve rules of §9.2
  * (reserves.ts) and the Breguet forms of §9.1 (breguet.ts). All solves are closed form (model.ts).
  *

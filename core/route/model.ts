@@ -2,7 +2,7 @@
  * Route fuel model: trip, contingency, reserve and taxi fuel for a stage length, in closed form, and
  * the closed-form inverses (greatest stage for a mass budget, greatest zero-fuel mass for a stage).
  *
- * Source: domain-reference.md §9.3 (design TOW for a stage length; weights multiplicative) built on
+ * Source: Breguet range equation, Aeronautical Engineer's Data Book ch. 9 (design TOW for a stage length; weights multiplicative) built on
  * the Breguet forms of §9.1 (see breguet.ts). With κ = ln(W_i/W_f) per metre of cruise
  * (jet κ = c_T/(V·L/D), propeller κ = c_P/(η·L/D)), x = e^{κ·s} for a stage s, and a climb/descent
  * allowance δ (fuel beyond the cruise estimate, a fraction of the takeoff mass, burnt as if at the

@@ -1,7 +1,7 @@
 /**
  * Payload-range diagram: corners A–D and the sampled curve of greatest payload against stage length.
  *
- * Source: domain-reference.md §9.4 (corners: A maximum payload at zero range; B maximum payload at
+ * Source: payload-range corners from the Breguet equation (Aeronautical Engineer's Data Book ch. 9) (corners: A maximum payload at zero range; B maximum payload at
  * MTOW; C MTOW with maximum fuel; D ferry, zero payload with maximum fuel) on the fuel model of §9.3
  * (model.ts). Every point is the greatest payload that flies that stage under MTOW, fuel capacity,
  * MLW and the structural payload, with the same reserves, contingency and taxi rules as

@@ -1,7 +1,7 @@
 /**
  * Reserve-fuel policies for the design takeoff mass (planning, not dispatch).
  *
- * Sources (domain-reference.md §9.2):
+ * Sources (14 CFR 121.639, 121.645, 91.167):
  * - 'cruise-45min': fuel to the destination, then to the most distant alternate, then 45 minutes at
  *   normal cruise — the shape of 14 CFR 121.639 (domestic) and 91.167 (IFR, Part 91). Both rules carry
  *   an alternate whenever one is required, so the policy carries one by default: 200 NM = 370.4 km when

@@ -449,7 +449,7 @@ function evaluateRow(
       const referenceMethod = opts.method === 'reference-icao' || opts.method === 'reference-authority';
       const overridden = referenceMethod && ref.specificStudyRequired && opts.referenceOverrideReason !== undefined;
       if (referenceMethod && ref.specificStudyRequired && !overridden) {
-        // Beyond the 35 % limit of the percentage corrections (domain reference §1.1) the corrected
+        // Beyond the 35 % limit of the percentage corrections (ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections) the corrected
         // length is indicative only and never governs without a recorded override: the physics model sizes the row.
         warnings.push(...ref.warnings);
         warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${Math.round(ref.length_m)} m) is shown as indicative only and does not govern; the physics model (${Math.round(t.required_m)} m) sizes this aircraft.`);

@@ -2,13 +2,13 @@
  * Rotation and airborne distance from lift-off to the screen height.
  *
  * Rotation (rotation-time model; Anderson, *Aircraft Performance and Design*, Ex. 6.6, N = 3 s for
- * transports, ≈1 s small aircraft; domain reference §6.1): the speed rises from VR to VLOF during the
+ * transports, ≈1 s small aircraft; Raymer §17.8; Anderson §6.7): the speed rises from VR to VLOF during the
  * profile's rotation time t_R, covering t_R·(V_R + V_LOF)/2 of ground (groundspeeds). When the equation
  * of motion needs longer than t_R to gain VLOF − VR, its own distance ∫V dV/a is used instead: the
  * longer of the two.
  *
- * Transition and climb (Raymer, *Aircraft Design: A Conceptual Approach*, §17.8.3; domain reference
- * §6.2): the aircraft flies a circular arc at the mean speed V_TR = (V_LOF + V2)/2 (Raymer's 1.15·VS
+ * Transition and climb (Raymer, *Aircraft Design: A Conceptual Approach*, §17.8.3):
+ * the aircraft flies a circular arc at the mean speed V_TR = (V_LOF + V2)/2 (Raymer's 1.15·VS
  * for 1.1 and 1.2) with load factor n = 1.2, radius R = V_TR²/(g·(n − 1)); climb angle
  * sin γ = (T − D)/W at V_TR with the 1-g lift coefficient C_L = C_Lmax/(V_TR/VS)², drag out of ground
  * effect, takeoff configuration (gear down); h_TR = R·(1 − cos γ). If h_TR ≥ h_screen:

@@ -1,7 +1,7 @@
 /**
  * Engine failure on the takeoff run: continued takeoff, accelerate-stop and the balanced V1.
  *
- * For a decision speed V1 (groundspeed inside; domain reference §6.3, 14 CFR 25.107, 25.109):
+ * For a decision speed V1 (groundspeed inside; Torenbeek (1982) §5.4 and 14 CFR 25.109/25.113, 14 CFR 25.107, 25.109):
  *   VEF: the engine-failure speed from which the engine-out acceleration reaches V1 in the
  *        recognition time (t_OEI(V1) − t_OEI(VEF) = t_rec);
  *   go:   s_AEO(VEF) + [s_OEI(VR) − s_OEI(VEF)] + engine-out rotation + engine-out airborne distance;

@@ -5,7 +5,7 @@
  * The gear-up value (second segment) is the profile's `cd0TakeoffGearUp` when given (it must be less
  * than the gear-down value; validateAircraft checks it), otherwise derived: C_D0,takeoff less the
  * landing-gear increment ΔC_D0 = (W/S)·K_uc·m^(−0.215), K_uc = 4.5·10⁻⁵ (W/S in N/m², m in kg;
- * Anderson, *Aircraft Performance and Design*, §6.7; domain reference §7.2), never below 40 % of the
+ * Anderson, *Aircraft Performance and Design*, §6.7; Raymer §12.5 and Torenbeek (1982) App. F, landing-gear drag), never below 40 % of the
  * takeoff C_D0 (this project's guard against an increment larger than the profile's drag allows; the
  * result says when that floor binds). The derived value is a statistical estimate and marked so.
  */

@@ -1,5 +1,5 @@
 /**
- * Statistical takeoff cross-checks (indicative only; domain reference §6.3, §6.4).
+ * Statistical takeoff cross-checks (indicative only; Torenbeek (1982) §5.4 and 14 CFR 25.109/25.113, §6.4).
  *
  * Torenbeek, *Synthesis of Subsonic Airplane Design* (1982), ch. 5, eq. 5-91, balanced field length:
  *   BFL = 0.863/(1 + 2.3·Δγ2) · ((W/S)/(ρ·g·C_L2) + h_TO) · (1/(T̄/W − μ') + 2.7) + 655 ft/√σ

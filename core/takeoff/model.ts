@@ -3,7 +3,7 @@
  * acceleration along the runway for each ground configuration.
  *
  * Equation of motion on the ground (Raymer, *Aircraft Design: A Conceptual Approach*, §17.8;
- * Gudmundsson, *General Aviation Aircraft Design*, ch. 17, eqs 17.4–17.5; domain reference §6.1):
+ * Gudmundsson, *General Aviation Aircraft Design*, ch. 17, eqs 17.4–17.5; Raymer §17.8; Anderson §6.7):
  *   m·dV/dt = T − D − μ·(W·cosθ − L) − W·sinθ        (θ = runway slope angle, + uphill)
  *   L = ½ρV_a²·S·C_L,   D = ½ρV_a|V_a|·S·(C_D0 + ΔC_D0 + φ·K·C_L²),   K = 1/(π·AR·e)
  *   φ = (16h/b)²/(1 + (16h/b)²) (ground effect; Anderson, *Aircraft Performance and Design*, Ex. 6.6)
@@ -11,7 +11,7 @@
  * never taken below zero. Tailwheel aircraft run in the three-point attitude (threePointCl) until the
  * tail-up airspeed, then at clGround. Stop phases: braking friction on the wheel load, idle thrust on
  * the operating engines, none on the failed one; transport-category aircraft dump lift
- * (C_L = min(clGround, 0.1), ΔC_D0 = +0.02; domain reference §6.3, ΔC_D0 from memory).
+ * (C_L = min(clGround, 0.1), ΔC_D0 = +0.02; Torenbeek (1982) §5.4 and 14 CFR 25.109/25.113, ΔC_D0 from memory).
  *
  * Speeds (14 CFR 25.107; speedSchedule): VS1 = √(2W/(ρ·S·CLmax)) (true airspeed at the site density);
  * VR = max(vrFactor·VS1, 1.05·VMCA, V1) — V1 enters when the VMCG-based V1 minimum exceeds the

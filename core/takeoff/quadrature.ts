@@ -4,7 +4,7 @@
  *
  * On the ground every force depends on speed alone, so the equation of motion m·dV/dt = F(V) gives
  * t(V) = ∫ dV / a(V) and s(V) = ∫ V dV / a(V) (Raymer, *Aircraft Design: A Conceptual Approach*, §17.8;
- * Anderson, *Aircraft Performance and Design*, §6.7; domain reference §6.1). The speed range is cut at
+ * Anderson, *Aircraft Performance and Design*, §6.7; Raymer §17.8; Anderson §6.7). The speed range is cut at
  * every kink of a(V) (flat-rating corner, propeller static cap, tail-up speed, zero airspeed) and into
  * a few equal intervals; on each interval the integrands are sampled at the n Gauss–Legendre nodes
  * (Abramowitz & Stegun 25.4.29) and replaced by their interpolating polynomial, whose antiderivative

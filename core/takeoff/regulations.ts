@@ -5,7 +5,7 @@
  *   (14 CFR 23.59 legacy commuter; 23.2115(c)); 50 ft (15.24 m) for normal category (23.2115(b)).
  * - Takeoff distance, dry runway (14 CFR 25.113(a)): TOD = max(D35_OEI, 1.15·D35_AEO).
  *   Takeoff run with clearway (25.113(c)): TOR = max(Dmid_OEI, 1.15·Dmid_AEO), Dmid = distance to the
- *   point midway between VLOF and the 35-ft point (domain reference §4.2). Commuter: same 115 % rule
+ *   point midway between VLOF and the 35-ft point (14 CFR 25.113). Commuter: same 115 % rule
  *   (§23.59).
  * - Accelerate-stop (14 CFR 25.109(a)): a distance equivalent to 2 s at V1 is added.
  * - Climb minima by certification basis: second segment (climbMinimum) and first segment

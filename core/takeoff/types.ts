@@ -145,7 +145,7 @@ export interface EngineOutResult {
   readonly activation_s: number;
 }
 
-/** Pieces for declared distances (14 CFR 25.113; domain reference §4.2). */
+/** Pieces for declared distances (14 CFR 25.113; 14 CFR 25.113). */
 export interface DeclaredPieces {
   /** Takeoff run with clearway, m. */
   readonly takeoffRun_m: number;

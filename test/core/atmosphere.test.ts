@@ -11,7 +11,7 @@ import { expectClose } from '../helpers/close.js';
 
 const REL_TABLE = 5e-4; // ±0.05 % (check case 1)
 
-describe('USSA 1976 constants (domain-reference §5.1: crnslab constants page, scipp.ucsc USSA 1976 page)', () => {
+describe('USSA 1976 constants (U.S. Standard Atmosphere 1976 (= ICAO Doc 7488), constants: crnslab constants page, scipp.ucsc USSA 1976 page)', () => {
   it('R = R*/M0 = 287.0531 J/(kg·K), ρ0 = 1.2250 kg/m³, T11 = 216.65 K', () => {
     expectClose(R_AIR, 287.0531, { abs: 1e-4 });
     expectClose(RHO0, 1.225, { rel: 1e-5 });
@@ -22,7 +22,7 @@ describe('USSA 1976 constants (domain-reference §5.1: crnslab constants page, s
 });
 
 // Check case 1. Rows [D] from the USSA 1976 formulas, confirmed [C] by the Engineering ToolBox ISA
-// table and Mechanical Engineers' Handbook Vol. 4, Table 6 (domain-reference §5.3).
+// table and Mechanical Engineers' Handbook Vol. 4, Table 6 (U.S. Standard Atmosphere 1976 tables).
 const TABLE_5_3: readonly (readonly [number, number, number, number, number])[] = [
   // H (m), T (K), p (Pa), ρ (kg/m³), σ
   [0, 288.15, 101325.0, 1.225, 1.0],
@@ -34,7 +34,7 @@ const TABLE_5_3: readonly (readonly [number, number, number, number, number])[] 
   [4000, 262.15, 61640.2, 0.81913, 0.66868],
 ];
 
-describe('ISA table, check case 1 (domain-reference §5.3; USSA 1976 formulas [D]; Engineering ToolBox ISA table and Mech. Eng. Handbook Vol 4 Table 6 [C]; ±0.05 %)', () => {
+describe('ISA table, check case 1 (U.S. Standard Atmosphere 1976 tables; USSA 1976 formulas [D]; Engineering ToolBox ISA table and Mech. Eng. Handbook Vol 4 Table 6 [C]; ±0.05 %)', () => {
   for (const [h, t, p, rho, sigma] of TABLE_5_3) {
     it(`H = ${h} m: T ${t} K, p ${p} Pa, ρ ${rho} kg/m³, σ ${sigma}`, () => {
       const a = isa(h);
@@ -72,7 +72,7 @@ describe('ISA table, check case 1 (domain-reference §5.3; USSA 1976 formulas [D
   });
 });
 
-describe('off-standard day, check case 2 (domain-reference §5.4 [D])', () => {
+describe('off-standard day, check case 2 (U.S. Standard Atmosphere 1976 (pressure and density altitude) [D])', () => {
   it('1000 m, ISA+20 (OAT 28.5 °C): ρ 1.03794, σ 0.84730, density altitude 1692.9 m (5554 ft)', () => {
     const a = airAt(1000, 28.5);
     expectClose(a.density_kgm3, 1.03794, { rel: 5e-5 }, 'rho');
@@ -84,7 +84,7 @@ describe('off-standard day, check case 2 (domain-reference §5.4 [D])', () => {
     expectClose(a.pressure_pa, isa(1000).pressure_pa, { rel: 1e-12 });
     expect(densityAltitude(1000, 28.5)).toBe(a.densityAltitude_m);
   });
-  it('5000 ft, OAT 30 °C: ρ 0.96883 kg/m³, density altitude 7801 ft (domain-reference §5.4 [D])', () => {
+  it('5000 ft, OAT 30 °C: ρ 0.96883 kg/m³, density altitude 7801 ft (U.S. Standard Atmosphere 1976 (pressure and density altitude) [D])', () => {
     const a = airAt(ftToM(5000), 30);
     expectClose(a.density_kgm3, 0.96883, { rel: 5e-5 });
     expectClose(a.densityAltitude_m / 0.3048, 7801, { abs: 1 });
@@ -106,7 +106,7 @@ describe('off-standard day, check case 2 (domain-reference §5.4 [D])', () => {
   });
 });
 
-describe('pressure altitude, check case 3 (domain-reference §5.4 [D])', () => {
+describe('pressure altitude, check case 3 (U.S. Standard Atmosphere 1976 (pressure and density altitude) [D])', () => {
   it('p = 90 000 Pa → H_p = 988.5 m (3243 ft)', () => {
     expectClose(pressureAltitude(90000), 988.5, { abs: 0.05 });
     expectClose(pressureAltitude(90000) / 0.3048, 3243, { abs: 0.5 });
@@ -126,7 +126,7 @@ describe('pressure altitude, check case 3 (domain-reference §5.4 [D])', () => {
   });
 });
 
-describe('geometric and geopotential altitude (USSA 1976, r0 = 6 356 766 m; domain-reference §5.3 [D])', () => {
+describe('geometric and geopotential altitude (USSA 1976, r0 = 6 356 766 m; U.S. Standard Atmosphere 1976 tables [D])', () => {
   it('geometric 1000 m ↔ geopotential 999.843 m; p 89 876.3 Pa, ρ 1.11166 kg/m³ there', () => {
     const h = geopotentialFromGeometric(1000);
     expectClose(h, 999.843, { abs: 5e-4 });
@@ -146,7 +146,7 @@ describe('geometric and geopotential altitude (USSA 1976, r0 = 6 356 766 m; doma
   });
 });
 
-describe('isothermal layer above 11 km (USSA 1976; p at 11 km 22 632 Pa, domain-reference §5.1)', () => {
+describe('isothermal layer above 11 km (USSA 1976; p at 11 km 22 632 Pa, U.S. Standard Atmosphere 1976 (= ICAO Doc 7488), constants)', () => {
   it('p(11 000 m) = 22 632 Pa, T = 216.65 K', () => {
     expectClose(isa(11000).pressure_pa, 22632, { abs: 0.5 });
     expectClose(P11, 22632, { abs: 0.5 });
@@ -213,7 +213,7 @@ describe('standardTemperatureC (USSA 1976: T = 15 °C − 6.5 °C/km · H)', () 
     expectClose(standardTemperatureC(11000), -56.5, { abs: 1e-9 });
     expectClose(standardTemperatureC(18000), -56.5, { abs: 1e-9 });
   });
-  it('1000 ft: 13.02 °C (domain-reference §5.3 feet rows [D])', () => {
+  it('1000 ft: 13.02 °C (U.S. Standard Atmosphere 1976 tables feet rows [D])', () => {
     expectClose(standardTemperatureC(ftToM(1000)), 13.02, { abs: 0.005 });
   });
 });

@@ -54,12 +54,12 @@ describe('older ART formula Ta + (Tm − Ta)/3 (Ashford & Wright p. 234; check c
   });
 });
 
-// Check case 34 (domain-reference §10.4 worked example [D]): July TMAX 34.5, 35.1; TMIN 22.1, 22.9, 23.0;
+// Check case 34 (NOAA NCEI Global Summary of the Month completeness rule worked example [D]): July TMAX 34.5, 35.1; TMIN 22.1, 22.9, 23.0;
 // August TMAX 36.2, 35.8; TMIN 20.1, 20.5.
 const JULY: MonthlyNormal = { month: 7, meanMax_c: (34.5 + 35.1) / 2, meanMin_c: (22.1 + 22.9 + 23.0) / 3 };
 const AUGUST: MonthlyNormal = { month: 8, meanMax_c: (36.2 + 35.8) / 2, meanMin_c: (20.1 + 20.5) / 2 };
 
-describe('design temperature from monthly values (ICAO Annex 14 Vol I 2.4.1/2.4.2 via domain-reference §1.2)', () => {
+describe('design temperature from monthly values (ICAO Annex 14 Vol I §2.4.1–2.4.2)', () => {
   it('check case 34 (§10.4 [D]): hottest month by mean = July, ART 34.80 °C; highest mean maximum August 36.00 °C', () => {
     const r = designTemperatureFromMonthly({ months: [AUGUST, JULY], includeOlderFormula: true });
     expect(r.hottestMonth).toBe(7);
@@ -345,7 +345,7 @@ const CASE_34_GHCN = ghcn([
   `${STATION},20230803,TMAX,-9999,,,S,0700`,
 ]);
 
-describe('GHCN-Daily by-station CSV (GHCN-D readme field list and units, domain-reference §10.2; check cases 34 and 35)', () => {
+describe('GHCN-Daily by-station CSV (GHCN-D readme field list and units, NOAA NCEI GHCN-Daily format description (readme); check cases 34 and 35)', () => {
   it('check case 35: "345" TMAX → 34.5 °C; the Q-flag "X" row is excluded', () => {
     const r = readGhcnDailyCsv({ text: CASE_34_GHCN });
     expect(r.station).toBe(STATION);
@@ -421,7 +421,7 @@ const access = (rows: readonly string[]): string => [ACCESS_HEADER, ...rows].joi
 const accessRow = (date: string, tmax: string, tmin: string, tmaxAttr = ',,W,2400', tminAttr = ',,W,2400'): string =>
   `"${STATION}","${date}","10.5","-20.25","512.0","INVENTED FIELD","0.0",",,W,","${tmax}","${tmaxAttr}","${tmin}","${tminAttr}"`;
 
-describe('per-station daily CSV with header (access CSV layout, domain-reference §10.2 d)', () => {
+describe('per-station daily CSV with header (access CSV layout, NOAA NCEI GHCN-Daily format description (readme) d)', () => {
   it('converts the stated unit: °F, °C and tenths of °C (exact conversions §5.5)', () => {
     const f = readStationDailyCsv({ text: access([accessRow('2022-07-01', '95', '68')]), unit: 'f' });
     expectClose(f.days[0]?.tmax_c ?? Number.NaN, 35, { abs: 1e-12 });
@@ -492,7 +492,7 @@ const NORMALS_HEADER =
 const normalsRow = (mm: string, tavg: string, tmax: string, tmin: string): string =>
   `"${STATION}","${mm}","10.5","-20.25","512.0","INVENTED FIELD","${tavg}","${tmax}","${tmin}","S"`;
 
-describe('monthly normals CSV (normals 1991-2020 access layout, °F, domain-reference §10.3)', () => {
+describe('monthly normals CSV (normals 1991-2020 access layout, °F, NOAA NCEI U.S. Climate Normals 1991–2020 documentation)', () => {
   // Invented normals in °F; July mean 86 °F (30 °C), August max 96.8 °F (36 °C).
   const tmaxF = [68, 71.6, 77, 82.4, 87.8, 91.4, 95, 96.8, 89.6, 82.4, 75.2, 69.8];
   const tavgF = [57.2, 60.8, 64.4, 69.8, 75.2, 80.6, 86, 84.2, 78.8, 71.6, 64.4, 59];

@@ -49,7 +49,7 @@ describe('ICAO percentage corrections — Example C (Made Easy Ex. 3.3 data [C2]
   });
 });
 
-describe('ICAO rule details (domain reference §1.1)', () => {
+describe('ICAO rule details (ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections)', () => {
   it('35 % check: a high, hot site is flagged "indicative — specific study required"', () => {
     // 2000 m elevation: +46.67 % alone (derived)
     const r = icaoCorrections({ basicLength_m: 2000, elevation_m: 2000, referenceTemperature_c: 30, effectiveGradient: 0 });
@@ -90,7 +90,7 @@ describe('ICAO rule details (domain reference §1.1)', () => {
   });
 });
 
-describe('Authority adjustments (AC 150/5325-4B via secondary sources, domain reference §3.2)', () => {
+describe('Authority adjustments (AC 150/5325-4B via secondary sources, FAA AC 150/5325-4B)', () => {
   it('check case 15: 7000 ft takeoff, ΔH 25 ft → 7250 ft [C2]', () => {
     const r = authorityAdjustments({ length_m: ftToM(7000), operation: 'takeoff', centrelineDifference_m: ftToM(25) });
     expectClose(mToFt(r.corrected_m), 7250, { abs: 1e-9 });

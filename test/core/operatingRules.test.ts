@@ -1,7 +1,7 @@
 /**
  * Operating rule sets (issue 13, item 12): the landing factor of each set, the light-aircraft
  * planning factors, and the study and runway check using the chosen set.
- * Sources, per check: 14 CFR 121.195(b)–(d) and the domain reference §4.5 example (LD 1 500 m → 2 500 m
+ * Sources, per check: 14 CFR 121.195(b)–(d) and the 14 CFR 121.195 and 135.385 example (LD 1 500 m → 2 500 m
  * dry, 2 875 m wet); 14 CFR 135.385(f) (80 %) and (d) (115 %; on the 80 % length from memory); Part 91
  * (no factor); EU Air Operations CAT.POL.A.230 / .235 / .305 / .325 / .330 (from memory).
  */
@@ -22,7 +22,7 @@ const turboprop = (ruleSet: OperatingRuleSet, wet = false) =>
   landingRequirement({ distance_m: 1500, rule: 'transport', ruleSet, wet, engineType: 'turboprop' });
 
 describe('landing factor by rule set (LD 1 500 m, dry equivalent = distance)', () => {
-  it('us-121: ÷ 0.60 dry, × 1.15 wet for turbojets (14 CFR 121.195(b), (d); domain reference §4.5 example 2 500 / 2 875 m)', () => {
+  it('us-121: ÷ 0.60 dry, × 1.15 wet for turbojets (14 CFR 121.195(b), (d); 14 CFR 121.195 and 135.385 example 2 500 / 2 875 m)', () => {
     expectClose(jet('us-121').required_m, 2500, { rel: 1e-12 });
     expectClose(jet('us-121', true).required_m, 2875, { rel: 1e-12 });
     // 121.195(d) names turbojets: no wet increase for a turboprop.
@@ -146,7 +146,7 @@ describe('the study and the runway check use the chosen rule set', () => {
 
 describe('a recorded override lets a corrected reference length beyond 35 % govern (item 14)', () => {
   it('with a reason the corrected length governs, and the row says so with the reason and the physics length', () => {
-    // Domain reference §1.1, step 3: beyond 35 % a specific study is required; the override is a
+    // ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections, step 3: beyond 35 % a specific study is required; the override is a
     // recorded planning decision, never silent.
     const doc = demoDoc();
     doc.options.method = 'reference-icao';

@@ -20,7 +20,7 @@ const byId = (id: string): AircraftProfile => {
   return a;
 };
 
-describe('Mattingly, Aircraft Engine Design (2002), high-bypass lapse — domain reference §8.1 / check case 28 (C2, derived)', () => {
+describe('Mattingly, Aircraft Engine Design (2002), high-bypass lapse — Mattingly, Heiser and Pratt, Aircraft Engine Design (2002) / check case 28 (C2, derived)', () => {
   const TR = 1.05;
   const sl = isa(0);
   it('SL ISA static: α = 1.0000', () => {
@@ -53,7 +53,7 @@ describe('Mattingly, Aircraft Engine Design (2002), high-bypass lapse — domain
   });
 });
 
-describe('Bartel & Young (2008), takeoff thrust lapse — domain reference §8.2 / check case 29 (C2, derived)', () => {
+describe('Bartel & Young (2008), takeoff thrust lapse — Bartel and Young, J. Aircraft (2008) / check case 29 (C2, derived)', () => {
   it.each([
     [0, 1.0], [0.1, 0.9031], [0.2, 0.8192], [0.25, 0.7822],
   ])('λ = 5, M %s → %s', (mach, expected) => {
@@ -61,7 +61,7 @@ describe('Bartel & Young (2008), takeoff thrust lapse — domain reference §8.2
   });
 });
 
-describe('Gagg–Ferrar piston power lapse — domain reference §8.3 / check case 30 (C2, derived)', () => {
+describe('Gagg–Ferrar piston power lapse — Gudmundsson ch. 14–15; Gagg and Ferrar / check case 30 (C2, derived)', () => {
   it('σ = 0.9075 → 0.8952 (check case 30); σ = 0.8216 → 0.7981 (§8.3)', () => {
     expectClose(gaggFerrarPowerRatio(0.9075), 0.8952, { abs: 6e-5 });
     // §8.3 gives this one from the rounded form 1.132σ − 0.132 (0.79805); σ − (1 − σ)/7.55 gives 0.79797.
@@ -70,7 +70,7 @@ describe('Gagg–Ferrar piston power lapse — domain reference §8.3 / check ca
   });
 });
 
-describe('Propeller static thrust, momentum theory — domain reference §8.3 / check case 31 (C2, derived)', () => {
+describe('Propeller static thrust, momentum theory — Gudmundsson ch. 14–15; Gagg and Ferrar / check case 31 (C2, derived)', () => {
   it('P 1 MW, D 3.6 m, ρ 1.225: ideal (FM = 1) 29 216 N (check case 31)', () => {
     expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225 }), 29216, { abs: 1 });
     expectClose(propStaticThrust({ power_W: 1e6, diameter_m: 3.6, density_kgm3: 1.225, figureOfMerit: 1 }), 29216, { abs: 1 });

@@ -26,7 +26,7 @@ const TABLE: ReferenceTable = {
 
 const site: ReferenceSite = { elevation_m: 250, referenceTemperature_c: 32.9, effectiveGradient: 0.002, centrelineDifference_m: 5 };
 
-describe('reference length corrected by the ICAO set (domain reference §1.1; derived)', () => {
+describe('reference length corrected by the ICAO set (ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections; derived)', () => {
   it('takeoff 1700 m at E 250 m, ART 32.9 °C, G 0.2 %: 1700 × 1.058333 × 1.19525 × 1.02', () => {
     const r = referenceLengthAtSite({ aircraft: tern, operation: 'takeoff', site, set: 'icao' });
     if (r.status !== 'ok') throw new Error('expected ok');

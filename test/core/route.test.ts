@@ -2,7 +2,7 @@
  * Design weight from the route (core/route): Breguet forms, reserve policies, design takeoff mass,
  * payload-range corners and the inverse helpers.
  *
- * Check values: domain-reference.md §9.1 prop example and §11 case 32 (both derived, [D]); the design
+ * Check values: Aeronautical Engineer’s Data Book ch. 9 prop example and §11 case 32 (both derived, [D]); the design
  * masses and corner stage lengths were derived by an independent forward evaluation of §9.3 in Python
  * (reserve legs integrated backwards from W_ZF by RK4, fixed-point iteration for the contingency,
  * bisection for the corners — no closed-form inverses), quoted below with the inputs; the aircraft are
@@ -80,7 +80,7 @@ function allFinite(x: unknown, path = 'result'): string[] {
   return [];
 }
 
-describe('Breguet forms — domain-reference §9.1, §11 case 32 (derived)', () => {
+describe('Breguet forms — Aeronautical Engineer’s Data Book ch. 9, §11 case 32 (derived)', () => {
   const ct = breguetCtFromTsfcPerHour(0.6);
 
   it('case 32: 2000 km, V 230 m/s, L/D 16, TSFC 0.6/h → ln(Wi/Wf) = 0.09058 (§11 case 32, derived)', () => {

@@ -24,7 +24,7 @@ function domainError(fn: () => unknown): InputDomainError {
 
 const ft = (chainage: number, elevation: number): ProfilePoint => ({ chainage_m: ftToM(chainage), elevation_m: ftToM(elevation) });
 
-describe('effective gradient and ΔH (Horonjeff p. 81 / ICAO high-minus-low definition, domain-reference §3.1)', () => {
+describe('effective gradient and ΔH (Horonjeff p. 81 / ICAO high-minus-low definition, ICAO Annex 14 Vol I §3.1 and FAA AC 150/5325-4B (effective gradient))', () => {
   // Check case 15 profile (invented points): a 7000-ft runway whose high point is 1245 ft and low point 1220 ft.
   const profile = [ft(0, 1220), ft(2000, 1232), ft(4500, 1245), ft(7000, 1240)];
   const r = analyseRunwayProfile({ points: profile, codeNumber: 4, designators: { increasingChainage: '09', decreasingChainage: '27' } });
@@ -102,7 +102,7 @@ describe('effective gradient and ΔH (Horonjeff p. 81 / ICAO high-minus-low defi
   });
 });
 
-describe('plausibility warnings against ICAO limits (Annex 14 via Horonjeff Table 6-11, domain-reference §3.1)', () => {
+describe('plausibility warnings against ICAO limits (Annex 14 via Horonjeff Table 6-11, ICAO Annex 14 Vol I §3.1 and FAA AC 150/5325-4B (effective gradient))', () => {
   it('limits: effective 1 % code 3-4, 2 % code 1-2; longitudinal 2/2/1.5/1.25 %; 0.8 % end quarters code 4', () => {
     expect([1, 2, 3, 4].map((c) => profileLimits(c as 1 | 2 | 3 | 4).maxEffectiveGradient)).toEqual([0.02, 0.02, 0.01, 0.01]);
     expect([1, 2, 3, 4].map((c) => profileLimits(c as 1 | 2 | 3 | 4).maxLongitudinalSlope)).toEqual([0.02, 0.02, 0.015, 0.0125]);

@@ -3,7 +3,7 @@
  * masses for declared distances, route penalties, and the assembled check.
  *
  * Sources: the field-length equations are Horonjeff et al., *Planning and Design of Airports*, 5th
- * ed., eqs 2-4 … 2-14 (domain-reference.md §4.2). The book's own Example 2-1 is not reproduced here
+ * ed., eqs 2-4 … 2-14 (14 CFR 25.113). The book's own Example 2-1 is not reproduced here
  * (its numbers were not available); the cases below are hand-worked with invented round numbers, the
  * arithmetic shown beside each — "hand-worked". The 25.113 identity TOR = midpoint distance is derived
  * from the equations ("derived"). Inverse-consistency and monotonicity checks are properties of the
@@ -285,7 +285,7 @@ describe('maxLandingMassForLda — inverse consistency (derived)', () => {
     expect(none.status).toBe('none-feasible');
     expect(none.maxLandingMass_kg).toBeUndefined();
   });
-  it('a wet runway allows less than a dry one (121.195(d) ×1.15 for turbojets, domain reference §4.5)', () => {
+  it('a wet runway allows less than a dry one (121.195(d) ×1.15 for turbojets, 14 CFR 121.195 and 135.385)', () => {
     const dry = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'dry', lda_m: 1900 }).maxLandingMass_kg!;
     const wet = maxLandingMassForLda({ aircraft: TERN, pressureAltitude_m: 1346, surface: 'wet', lda_m: 1900 }).maxLandingMass_kg!;
     expect(wet).toBeLessThan(dry);

@@ -10,7 +10,7 @@ import { expectClose } from '../helpers/close.js';
 
 const REL = 1e-12;
 
-describe('exact definitions (domain-reference §5.5, check case 4)', () => {
+describe('exact definitions (exact conversion definitions (1959 international foot and pound; 1 NM = 1852 m), check case 4)', () => {
   it('1 kt = 1852/3600 m/s = 0.5144444 m/s (NM = 1852 m, exact)', () => {
     expect(ktToMps(1)).toBe(1852 / 3600);
     expectClose(ktToMps(1), 0.5144444, { abs: 5e-8 }, 'kt');
@@ -36,7 +36,7 @@ describe('exact definitions (domain-reference §5.5, check case 4)', () => {
     expectClose(fpmToMps(1), 0.00508, { rel: REL });
     expectClose(fpmToMps(1000), 5.08, { rel: REL });
   });
-  it('1 hp (550 ft·lbf/s) = 745.69987 W (derived, domain-reference §5.5 [D])', () => {
+  it('1 hp (550 ft·lbf/s) = 745.69987 W (derived, exact conversion definitions (1959 international foot and pound; 1 NM = 1852 m) [D])', () => {
     expectClose(hpToW(1), 745.69987, { abs: 5e-6 });
     expectClose(HP, 550 * 0.3048 * 4.4482216152605, { rel: REL });
   });

@@ -1,6 +1,6 @@
 /**
  * Takeoff model revision, item 7 (climb-limit logic in the study engine). Sources: 14 CFR 25.121 and
- * 23.2120 set the climb minima (domain reference §6); the study's handling of a climb limit (size at
+ * 23.2120 set the climb minima (Raymer §17.8, Anderson §6.7 and Torenbeek (1982) ch. 5); the study's handling of a climb limit (size at
  * the climb-limited mass, or a reasoned "cannot operate") is project logic, checked here by derived
  * consistency. The aircraft are invented (examples/demo-study.json; the single-engine variant of
  * test/core/study/impractical.fixture.ts).
@@ -67,7 +67,7 @@ describe('the climb-limited mass is itself checked for feasibility (item 7)', ()
 
 describe('beyond 35 % the corrected reference length is indicative and never governs (item 14)', () => {
   it('under the reference method at the demo site the physics model sizes each row whose corrections exceed 35 %, and says so', () => {
-    // Domain reference §1.1, step 3 (ICAO Doc 9157 Part 1 percentage rule, as restated in its C2
+    // ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections, step 3 (ICAO Doc 9157 Part 1 percentage rule, as restated in its C2
     // sources): when elevation and temperature corrections together exceed 35 % a specific study is
     // required.
     const doc = JSON.parse(readFileSync(new URL('../../../examples/demo-study.json', import.meta.url), 'utf8'));

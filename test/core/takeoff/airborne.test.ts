@@ -10,7 +10,7 @@ const base = {
 };
 const speeds = { vlof_mps: 1.1 * base.vs1_mps, v2_mps: 1.2 * base.vs1_mps };
 
-describe('Raymer transition and climb to the screen (Aircraft Design §17.8.3; domain reference §6.2; derived values)', () => {
+describe('Raymer transition and climb to the screen (Aircraft Design §17.8.3; Raymer §17.8.3; derived values)', () => {
   it('R = V_TR²/(0.2·g) with n = 1.2; arc reaches 35 ft: s = √(R² − (R − h)²)', () => {
     const r = airborneDistance({ ...base, ...speeds });
     expect(TRANSITION_LOAD_FACTOR).toBe(1.2);
@@ -40,7 +40,7 @@ describe('Raymer transition and climb to the screen (Aircraft Design §17.8.3; d
   });
 });
 
-describe('Landing-gear drag increment, Anderson APD §6.7 (domain reference §7.2; derived)', () => {
+describe('Landing-gear drag increment, Anderson APD §6.7 (Raymer §12.5 and Torenbeek (1982) App. F, landing-gear drag; derived)', () => {
   it('ΔCD0 = (W/S)·4.5e-5·m^−0.215', () => {
     const m = 40000;
     expectClose(gearDragIncrement({ mass_kg: m, wingArea_m2: 72 }), ((m * 9.80665) / 72) * 4.5e-5 * Math.pow(m, -0.215), { rel: 1e-12 });

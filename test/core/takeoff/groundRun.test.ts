@@ -23,7 +23,7 @@ function constantThrust(over: Partial<TakeoffInput>, thrustPerEngine_N: number):
   return { ...s, engine: { ...s.engine, thrust: () => thrustPerEngine_N, kinks_mps: [] } };
 }
 
-/** Closed-form constants of Raymer/Gudmundsson (domain reference §6.1): a = g·(K_T + K_A·V²). */
+/** Closed-form constants of Raymer/Gudmundsson (Raymer §17.8; Anderson §6.7): a = g·(K_T + K_A·V²). */
 function kConstants(s: TakeoffSetup, thrustTotal_N: number): { kt: number; ka: number } {
   const a = s.aircraft;
   const cl = a.clGround;
@@ -33,7 +33,7 @@ function kConstants(s: TakeoffSetup, thrustTotal_N: number): { kt: number; ka: n
   return { kt, ka };
 }
 
-describe('Ground run against the exact closed form, constant thrust and quadratic aerodynamics (Raymer §17.8 / Gudmundsson ch. 17 / Anderson Ex. 6.6; domain reference §6.1 ln form)', () => {
+describe('Ground run against the exact closed form, constant thrust and quadratic aerodynamics (Raymer §17.8 / Gudmundsson ch. 17 / Anderson Ex. 6.6; Raymer §17.8; Anderson §6.7 ln form)', () => {
   it('calm, level: s = ln[(K_T + K_A·V²)/K_T]/(2g·K_A) within 0.1 % (achieved ≪ 0.001 %)', () => {
     const s = constantThrust({}, 30000);
     const { kt, ka } = kConstants(s, 60000);
@@ -134,7 +134,7 @@ describe('Cumulative tables (quadrature over speed): inversion, square-root mapp
   });
 });
 
-describe('Rotation-time model (Anderson APD Ex. 6.6: N = 3 s; domain reference §6.1)', () => {
+describe('Rotation-time model (Anderson APD Ex. 6.6: N = 3 s; Raymer §17.8; Anderson §6.7)', () => {
   it('is t_R × mean groundspeed, or the equation-of-motion distance when that is longer', () => {
     expectClose(rotationDistance({ vrG_mps: 70, vlofG_mps: 74, rotationTime_s: 3, physics_m: 100 }), 216, { abs: 1e-12 });
     expect(rotationDistance({ vrG_mps: 70, vlofG_mps: 74, rotationTime_s: 3, physics_m: 300 })).toBe(300);

@@ -98,7 +98,7 @@ describe('Takeoff distances: monotone properties over random valid profiles (fas
   monotone('shrink with headwind', ({ input }) => [{ ...input, headwind_mps: input.headwind_mps + 3 }, input]);
 });
 
-describe('Engine failure: properties over random valid multi-engine profiles (domain reference §6.3)', () => {
+describe('Engine failure: properties over random valid multi-engine profiles (Torenbeek (1982) §5.4 and 14 CFR 25.109/25.113)', () => {
   it('accelerate-stop grows and the continued distance shrinks with V1', () => {
     let compared = 0;
     fc.assert(fc.property(arbCase, fc.double({ min: 0.05, max: 0.95, noNaN: true }), ({ input }, f) => {

@@ -14,7 +14,7 @@ describe('14 CFR 25.113(a) takeoff distance — check case 18 (C; derived)', () 
   });
 });
 
-describe('14 CFR 25.113(c) takeoff run with clearway (domain reference §4.2; derived)', () => {
+describe('14 CFR 25.113(c) takeoff run with clearway (14 CFR 25.113; derived)', () => {
   it('TOR = max(Dmid_OEI, 1.15·Dmid_AEO)', () => {
     expectClose(takeoffRun25113({ engineOutMid_m: 1800, allEnginesMid_m: 1700 }), 1955, { abs: 1e-9 });
     expect(takeoffRun25113({ engineOutMid_m: 2000, allEnginesMid_m: 1700 })).toBe(2000);

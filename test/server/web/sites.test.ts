@@ -1,7 +1,7 @@
 /**
  * Site routes: the twelve monthly values and the design temperature by both hottest-month criteria
  * (ICAO Annex 14 Vol. I 2.4.1: mean daily maximum of the month with the highest monthly mean; and the
- * month with the highest mean daily maximum — both reported, domain-reference §1.2 as cited in
+ * month with the highest mean daily maximum — both reported, ICAO Annex 14 Vol I §2.4.1–2.4.2 as cited in
  * core/climate/design.ts), runways with profile and declared distances, the station-file import
  * (run through the worker pool here), and the 422s. Expected values are derived from the invented
  * inputs; °F → °C by (F − 32)·5/9 (core/units.ts).

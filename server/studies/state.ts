@@ -34,6 +34,8 @@ export interface LoadedResult {
   readonly output: StudyOutput;
   readonly input: StudyInput;
   readonly charts: readonly ChartModel[];
+  /** The snapshot is what was saved (savedResultIntact); a damaged one is never served as current. */
+  readonly intact: boolean;
 }
 
 const GENERATION_SQL = 'select total_changes() as t, (select data_version from pragma_data_version) as v';
@@ -55,6 +57,21 @@ function friendly(path: string, message: string, input: StudyInput): string {
 function currentMethod(status: InputsStatus): InputsStatus {
   if (status.state === 'unchanged' && status.saved.methodVersion !== STUDY_METHOD_VERSION) return { state: 'changed', saved: status.saved, methodChanged: true };
   return status;
+}
+
+/**
+ * Whether a saved snapshot is what was saved: the result carries the digest and method version of
+ * its row, and the stored input has that digest. The JSON is read back without a cast being trusted.
+ */
+function savedResultIntact(full: { input: unknown; result: unknown; inputDigest: string; methodVersion: string }, saved: SavedResultSummary): boolean {
+  const r = full.result as Partial<StudyOutput> | null;
+  if (r === null || typeof r !== 'object' || !Array.isArray(r.scenarios) || !Array.isArray(r.sensitivity)) return false;
+  if (r.inputDigest !== saved.inputDigest || r.methodVersion !== saved.methodVersion) return false;
+  try {
+    return inputDigest(full.input as StudyInput) === saved.inputDigest;
+  } catch {
+    return false;
+  }
 }
 
 export class StudyService {
@@ -124,7 +141,7 @@ export class StudyService {
     if (!full) throw new NotFoundError('saved result', saved.id);
     const output = full.result as StudyOutput;
     const input = full.input as StudyInput;
-    const loaded: LoadedResult = { saved, output, input, charts: studyCharts(output) };
+    const loaded: LoadedResult = { saved, output, input, charts: studyCharts(output), intact: savedResultIntact(full, saved) };
     this.results.set(saved.id, loaded);
     return loaded;
   }
@@ -132,7 +149,9 @@ export class StudyService {
   /** The latest saved result, if any, and whether it matches the current input. */
   latest(state: StudyState): { loaded: LoadedResult; current: boolean } | undefined {
     if (state.status.state === 'never-saved') return undefined;
-    return { loaded: this.load(state.studyId, state.status.saved), current: state.status.state === 'unchanged' };
+    const loaded = this.load(state.studyId, state.status.saved);
+    // A damaged snapshot (its digest or method version not those it was saved with) is never current.
+    return { loaded, current: state.status.state === 'unchanged' && loaded.intact };
   }
 
   /**

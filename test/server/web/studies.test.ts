@@ -222,3 +222,19 @@ describe('a saved result of an older method version is not current (issue 14)', 
     expect((await c.get(`/studies/${studyId}/results.csv`)).status).toBe(200);
   });
 });
+
+describe('a damaged saved result is never served as current (issue 14)', () => {
+  it('a snapshot whose digest no longer matches its row is recomputed instead of shown', async () => {
+    const { app, db, sqlite, studyId } = makeApp();
+    const c = await browser(app);
+    await c.post(`/studies/${studyId}/run`, {});
+    const first = latestStudyResult(db, studyId)!;
+    const json = sqlite.prepare('select result_json as j from saved_results where id = ?').get(first.id) as { j: string };
+    const damaged = JSON.parse(json.j) as Record<string, unknown>;
+    damaged.inputDigest = '0'.repeat(64);
+    sqlite.prepare('update saved_results set result_json = ? where id = ?').run(JSON.stringify(damaged), first.id);
+    const page = await c.get(`/studies/${studyId}/results?auto=no`);
+    expect(page.text).toContain('Compute results');
+    expect((await c.get(`/studies/${studyId}/results.json`)).status).toBe(303);
+  });
+});

@@ -1,5 +1,6 @@
 /**
- * The one definition of each study option: its path in the study file, the name of its form field,
+ * The one definition of each study option (and, below, of each numeric site, climate, runway and
+ * fleet field): its path in the study file, the name of its form field,
  * label, help, kind (display unit, choice or text), range or choices, and default. The study file's
  * zod schema (server/schemas/study.ts), the study form's labels and hints (templates/pages/studies.tsx)
  * and the appendix's input listing (core/report/model.ts) are derived from this table, and a test
@@ -10,12 +11,14 @@
  * column (db/schema.ts, `npm run db:generate`) and, when the form needs it, its control.
  */
 import {
-  ALTERNATE_DISTANCE_RANGE_KM, CONTINGENCY_FRACTION_RANGE, PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE,
-  RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, type FieldRange,
+  ALTERNATE_DISTANCE_RANGE_KM, ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, CONTINGENCY_FRACTION_RANGE, DECLARED_LENGTH_RANGE,
+  DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE, MONTHLY_MEAN_RANGE,
+  PASSENGER_MASS_RANGE, REGULAR_USE_THRESHOLD_RANGE, RESERVE_TIME_RANGE_MIN, ROUNDING_INCREMENT_RANGE, RUNWAY_CHAINAGE_RANGE,
+  RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, type FieldRange,
 } from './fields.js';
 import { OPERATING_RULE_SETS } from './operatingRules.js';
 import { SURFACES } from './surface.js';
-import type { DisplayKind } from './units.js';
+import type { DisplayKind, QuantityKind } from './units.js';
 
 export interface OptionFieldSpec {
   /** Path inside `options` of the study file, e.g. "reserves.alternate_km". */
@@ -82,5 +85,62 @@ export function optionValue(options: unknown, path: string): unknown {
 export function optionFieldByForm(form: string): OptionFieldSpec {
   const f = STUDY_OPTION_FIELDS.find((x) => x.form === form);
   if (!f) throw new Error(`no study option with form field ${form}`);
+  return f;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Site, climate, runway and fleet fields: the numbers a study file holds outside the options.
+// ---------------------------------------------------------------------------------------------
+
+/** One numeric field of a site, a monthly climate value, a runway or a fleet row. */
+export interface InputFieldSpec {
+  /** Member name in its object (study file and core input alike). */
+  readonly key: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  readonly range: FieldRange;
+  readonly integer?: boolean;
+  readonly optional?: boolean;
+  readonly help: string;
+}
+
+export const SITE_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'elevation_m', label: 'Elevation', kind: 'altitude', range: SITE_ELEVATION_RANGE, help: 'Aerodrome elevation, taken as the design pressure altitude.' },
+  { key: 'designTemperature_c', label: 'Design temperature (given)', kind: 'temperature', range: DESIGN_TEMPERATURE_RANGE, optional: true,
+    help: 'Given design temperature; when absent it is derived from the monthly climate (ICAO Annex 14 §2.4.1).' },
+];
+
+export const CLIMATE_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'years', label: 'Climate years', kind: 'count', range: CLIMATE_YEARS_RANGE, integer: true, optional: true, help: 'Years of record behind the monthly values.' },
+];
+
+export const MONTHLY_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'meanMax_c', label: 'Mean daily max', kind: 'temperature', range: MONTHLY_MEAN_MAX_RANGE, help: 'Monthly mean of the daily maximum temperature.' },
+  { key: 'meanMin_c', label: 'Mean daily min', kind: 'temperature', range: MONTHLY_MEAN_MIN_RANGE, optional: true, help: 'Monthly mean of the daily minimum temperature.' },
+  { key: 'mean_c', label: 'Mean', kind: 'temperature', range: MONTHLY_MEAN_RANGE, optional: true, help: 'Monthly mean temperature (ranks the months).' },
+];
+
+export const PROFILE_POINT_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'chainage_m', label: 'Chainage', kind: 'length', range: RUNWAY_CHAINAGE_RANGE, help: 'Distance along the centreline from the first threshold.' },
+  { key: 'elevation_m', label: 'Elevation', kind: 'altitude', range: RUNWAY_POINT_ELEVATION_RANGE, help: 'Centreline elevation at the chainage.' },
+];
+
+export const DIRECTION_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'tora_m', label: 'TORA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff run available.' },
+  { key: 'toda_m', label: 'TODA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff distance available (TORA plus clearway).' },
+  { key: 'asda_m', label: 'ASDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Accelerate-stop distance available (TORA plus stopway).' },
+  { key: 'lda_m', label: 'LDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Landing distance available.' },
+];
+
+export const FLEET_FIELDS: readonly InputFieldSpec[] = [
+  { key: 'annualOperations', label: 'Annual operations', kind: 'count', range: ANNUAL_OPERATIONS_RANGE, integer: true, help: 'Takeoffs and landings a year of this aircraft in the scenario.' },
+  { key: 'stageLength_km', label: 'Stage length', kind: 'distance', range: STAGE_LENGTH_RANGE_KM, help: 'Longest regular stage, km (great-circle trip distance).' },
+  { key: 'payload_kg', label: 'Payload', kind: 'mass', range: FLEET_PAYLOAD_RANGE, help: "Payload on that stage (at most the aircraft's maximum payload)." },
+];
+
+/** A field by key in a table. */
+export function inputField(table: readonly InputFieldSpec[], key: string): InputFieldSpec {
+  const f = table.find((x) => x.key === key);
+  if (!f) throw new Error(`no input field ${key}`);
   return f;
 }

@@ -16,7 +16,7 @@
 import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type AircraftProfile, type QuantityKind } from '../aircraft.js';
 import { CAUTION_TEXT, CAUTION_TITLE } from '../caution.js';
 import { SURFACE_LABELS } from '../surface.js';
-import { STUDY_OPTION_FIELDS, optionValue } from '../studyFields.js';
+import { CLIMATE_FIELDS, DIRECTION_FIELDS, FLEET_FIELDS, MONTHLY_FIELDS, PROFILE_POINT_FIELDS, SITE_FIELDS, STUDY_OPTION_FIELDS, optionValue } from '../studyFields.js';
 import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SET_INFO } from '../operatingRules.js';
 import { monthName } from '../climate/index.js';
 import type {
@@ -722,31 +722,38 @@ function listingBlocks(args: AppendixModelInput): Block[] {
     { type: 'facts', items: [
       { label: 'Study name', value: t(input.name) },
       { label: 'Site name', value: t(site.name) },
-      { label: 'Elevation', value: exact(site.elevation_m, 'altitude') },
-      { label: 'Design temperature (given)', value: site.designTemperature_c !== undefined ? exact(site.designTemperature_c, 'temperature') : t('not given: derived from the climate data') },
+      // Every numeric site field from its table (core/studyFields.ts); an absent optional one says so.
+      ...SITE_FIELDS.map((f) => {
+        const v = (site as unknown as Record<string, number | undefined>)[f.key];
+        return { label: f.label, value: v !== undefined ? exact(v, f.kind) : t(f.key === 'designTemperature_c' ? 'not given: derived from the climate data' : 'not given') };
+      }),
       ...(site.climate ? [
         { label: 'Climate source', value: t(site.climate.source) },
-        { label: 'Climate years', value: t(site.climate.years !== undefined ? String(site.climate.years) : 'not stated') },
+        ...CLIMATE_FIELDS.map((f) => {
+          const v = (site.climate as unknown as Record<string, number | undefined>)[f.key];
+          return { label: f.label, value: t(v !== undefined ? String(v) : 'not stated') };
+        }),
       ] : []),
     ] },
   ];
   if (site.climate) {
     blocks.push({
       type: 'table', caption: 'Climate: monthly values',
-      columns: [{ title: 'Month' }, { title: 'Mean daily max', kind: 'temperature' }, { title: 'Mean daily min', kind: 'temperature' }, { title: 'Mean', kind: 'temperature' }],
-      rows: [...site.climate.monthly].sort((a, b) => a.month - b.month).map((m) => row(t(String(m.month)), exact(m.meanMax_c, 'temperature'), exact(m.meanMin_c, 'temperature'), exact(m.mean_c, 'temperature'))),
+      columns: [{ title: 'Month' }, ...MONTHLY_FIELDS.map((f): Column => ({ title: f.label, kind: f.kind }))],
+      rows: [...site.climate.monthly].sort((a, b) => a.month - b.month)
+        .map((m) => row(t(String(m.month)), ...MONTHLY_FIELDS.map((f) => exact((m as unknown as Record<string, number | undefined>)[f.key], f.kind)))),
     });
   }
   for (const r of site.runways) {
     blocks.push({
       type: 'table', caption: `Runway ${r.name} (${r.pavement}): centreline profile`,
-      columns: [{ title: 'Point' }, { title: 'Chainage', kind: 'length' }, { title: 'Elevation', kind: 'altitude' }],
-      rows: r.profile.map((p, i) => row(t(String(i + 1)), exact(p.chainage_m, 'length'), exact(p.elevation_m, 'altitude'))),
+      columns: [{ title: 'Point' }, ...PROFILE_POINT_FIELDS.map((f): Column => ({ title: f.label, kind: f.kind }))],
+      rows: r.profile.map((p, i) => row(t(String(i + 1)), ...PROFILE_POINT_FIELDS.map((f) => exact((p as unknown as Record<string, number>)[f.key], f.kind)))),
     });
     blocks.push({
       type: 'table', caption: `Runway ${r.name}: declared distances`,
-      columns: [{ title: 'Direction' }, { title: 'TORA', kind: 'length' }, { title: 'TODA', kind: 'length' }, { title: 'ASDA', kind: 'length' }, { title: 'LDA', kind: 'length' }],
-      rows: r.directions.map((d) => row(t(d.designator), exact(d.tora_m, 'length'), exact(d.toda_m, 'length'), exact(d.asda_m, 'length'), exact(d.lda_m, 'length'))),
+      columns: [{ title: 'Direction' }, ...DIRECTION_FIELDS.map((f): Column => ({ title: f.label, kind: f.kind }))],
+      rows: r.directions.map((d) => row(t(d.designator), ...DIRECTION_FIELDS.map((f) => exact((d as unknown as Record<string, number>)[f.key], f.kind)))),
     });
   }
   blocks.push({ type: 'subheading', text: 'Aircraft profiles' });
@@ -771,8 +778,13 @@ function listingBlocks(args: AppendixModelInput): Block[] {
   blocks.push({ type: 'subheading', text: 'Fleet rows' });
   blocks.push({
     type: 'table', caption: 'Scenarios and fleet rows',
-    columns: [{ title: 'Scenario', width: 1.5 }, { title: 'Aircraft id', width: 1.3 }, { title: 'Annual operations', kind: 'count' }, { title: 'Stage length (km)', align: 'right' }, { title: 'Payload', kind: 'mass' }],
-    rows: input.scenarios.flatMap((s) => s.fleet.map((f) => row(t(s.name), t(f.aircraft), exact(f.annualOperations, 'count'), t(exactNumber(f.stageLength_km)), exact(f.payload_kg, 'mass')))),
+    // Columns from FLEET_FIELDS; values the file holds in km are listed as stored.
+    columns: [{ title: 'Scenario', width: 1.5 }, { title: 'Aircraft id', width: 1.3 },
+      ...FLEET_FIELDS.map((f): Column => (f.key.endsWith('_km') ? { title: `${f.label} (km)`, align: 'right' } : { title: f.label, kind: f.kind }))],
+    rows: input.scenarios.flatMap((s) => s.fleet.map((fr) => row(t(s.name), t(fr.aircraft), ...FLEET_FIELDS.map((f) => {
+      const v = (fr as unknown as Record<string, number>)[f.key]!;
+      return f.key.endsWith('_km') ? t(exactNumber(v)) : exact(v, f.kind);
+    })))),
     note: 'Stage lengths are listed in km, as stored in the study file.',
   });
   blocks.push({ type: 'subheading', text: 'Options' });

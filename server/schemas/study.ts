@@ -8,30 +8,35 @@
  */
 import { z } from 'zod';
 import {
-  ANNUAL_OPERATIONS_RANGE, CLIMATE_YEARS_RANGE, DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, FLEET_PAYLOAD_RANGE,
-  MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE, MONTHLY_MEAN_RANGE, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE,
-  SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM, STUDY_OPTION_FIELDS, analyseRunwayProfile, checkDerivedDesignTemperature,
-  checkProfileSlopes, checkRunwayDeclaredDistances, designTemperatureFromMonthly, type OptionFieldSpec, type StudyInput,
-  type StudyOptions,
+  CLIMATE_FIELDS, DIRECTION_FIELDS, FLEET_FIELDS, inputField, MONTHLY_FIELDS, PROFILE_POINT_FIELDS, SITE_FIELDS, STUDY_OPTION_FIELDS,
+  analyseRunwayProfile, checkDerivedDesignTemperature, checkProfileSlopes, checkRunwayDeclaredDistances,
+  designTemperatureFromMonthly, type FleetRowInput, type InputFieldSpec, type MonthlyClimate, type OptionFieldSpec,
+  type ProfilePoint, type RunwayDirectionInput, type StudyInput, type StudyOptions,
 } from '../../core/index.js';
 import { aircraftSchema } from './aircraft.js';
 import { coreCheck, ident, int, numIn, oneOf, text } from './common.js';
 
 const intIn = (r: { readonly min: number; readonly max: number; readonly unit: string }) => int(r.min, r.max, r.unit);
 
+/** The zod members of a table of numeric input fields (core/studyFields.ts): range, whole number, optional, help. */
+function fieldMembers(table: readonly InputFieldSpec[]): Record<string, z.ZodType> {
+  return Object.fromEntries(table.map((f) => {
+    const t = (f.integer ? intIn(f.range) : numIn(f.range)).meta({ description: `${f.help} Allowed ${f.range.min} to ${f.range.max}${f.range.unit ? ` ${f.range.unit}` : ''}.` });
+    return [f.key, f.optional ? t.optional() : t];
+  }));
+}
+
 export const monthlyClimateSchema = z.strictObject({
   month: int(1, 12, ''),
-  meanMax_c: numIn(MONTHLY_MEAN_MAX_RANGE),
-  meanMin_c: numIn(MONTHLY_MEAN_MIN_RANGE).optional(),
-  mean_c: numIn(MONTHLY_MEAN_RANGE).optional(),
-});
+  ...fieldMembers(MONTHLY_FIELDS),
+}) as unknown as z.ZodType<MonthlyClimate>;
 
 /** Core's climate keys ("months[3].mean_c") as the file's ("monthly[3].mean_c"). */
 const monthsAsMonthly = (k: (string | number)[]) => (k[0] === 'months' ? ['monthly', ...k.slice(1)] : k);
 
 export const climateSchema = z.strictObject({
   source: text(300),
-  years: intIn(CLIMATE_YEARS_RANGE).optional(),
+  ...fieldMembers(CLIMATE_FIELDS),
   monthly: z.array(monthlyClimateSchema).length(12, { error: 'exactly 12 monthly values, one per month' })
     .refine((ms) => new Set(ms.map((m) => m.month)).size === 12, { error: 'each month 1 to 12 exactly once' }),
 }).superRefine((c, ctx) => {
@@ -40,18 +45,12 @@ export const climateSchema = z.strictObject({
   coreCheck(ctx, () => checkDerivedDesignTemperature(c.monthly, designTemperatureFromMonthly({ months: c.monthly }), 'months'), monthsAsMonthly);
 });
 
-export const profilePointSchema = z.strictObject({
-  chainage_m: numIn(RUNWAY_CHAINAGE_RANGE),
-  elevation_m: numIn(RUNWAY_POINT_ELEVATION_RANGE),
-});
+export const profilePointSchema = z.strictObject(fieldMembers(PROFILE_POINT_FIELDS)) as unknown as z.ZodType<ProfilePoint>;
 
 export const runwayDirectionSchema = z.strictObject({
   designator: z.string().regex(/^(0[1-9]|[12][0-9]|3[0-6])[LCR]?$/, { error: 'a runway designator 01 to 36, optionally L, C or R' }),
-  tora_m: numIn(DECLARED_LENGTH_RANGE),
-  toda_m: numIn(DECLARED_LENGTH_RANGE),
-  asda_m: numIn(DECLARED_LENGTH_RANGE),
-  lda_m: numIn(DECLARED_LENGTH_RANGE),
-});
+  ...fieldMembers(DIRECTION_FIELDS),
+}) as unknown as z.ZodType<RunwayDirectionInput>;
 
 /** Core's profile keys ("points[2].chainage_m") as the file's ("profile[2].chainage_m"). */
 const pointsAsProfile = (k: (string | number)[]) => (k[0] === 'points' ? ['profile', ...k.slice(1)] : k);
@@ -70,21 +69,18 @@ export const runwaySchema = z.strictObject({
 
 export const siteSchema = z.strictObject({
   name: text(120),
-  elevation_m: numIn(SITE_ELEVATION_RANGE),
-  designTemperature_c: numIn(DESIGN_TEMPERATURE_RANGE).optional(),
+  ...fieldMembers(SITE_FIELDS),
   climate: climateSchema.optional(),
   runways: z.array(runwaySchema).min(1, { error: 'at least one runway' }).max(8),
-}).refine((s) => s.designTemperature_c !== undefined || s.climate !== undefined, {
+}).refine((s) => (s as { designTemperature_c?: number }).designTemperature_c !== undefined || s.climate !== undefined, {
   error: 'either designTemperature_c or climate is required',
   path: ['designTemperature_c'],
 });
 
 export const fleetRowSchema = z.strictObject({
   aircraft: ident,
-  annualOperations: intIn(ANNUAL_OPERATIONS_RANGE),
-  stageLength_km: numIn(STAGE_LENGTH_RANGE_KM),
-  payload_kg: numIn(FLEET_PAYLOAD_RANGE),
-});
+  ...fieldMembers(FLEET_FIELDS),
+}) as unknown as z.ZodType<FleetRowInput>;
 
 export const scenarioSchema = z.strictObject({
   name: text(120),
@@ -175,7 +171,7 @@ export function studyCrossProblems(raw: unknown): { path: (string | number)[]; v
         // The engine's rule: a row's payload is at most its aircraft's maximum payload.
         const payload = (row as { payload_kg?: unknown } | null)?.payload_kg;
         const max = typeof ref === 'string' ? maxPayload.get(ref) : undefined;
-        if (typeof payload === 'number' && typeof max === 'number' && payload > max && payload <= FLEET_PAYLOAD_RANGE.max) {
+        if (typeof payload === 'number' && typeof max === 'number' && payload > max && payload <= inputField(FLEET_FIELDS, 'payload_kg').range.max) {
           out.push({ path: ['scenarios', i, 'fleet', j, 'payload_kg'], value: payload, message: `${payload} is not allowed; expected at most the maximum payload of "${ref}" (${max} kg)` });
         }
       });

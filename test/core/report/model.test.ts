@@ -186,3 +186,20 @@ describe('appendix listing: every study option, from the one option table (issue
     for (const k of keys(inp.options as unknown as Record<string, unknown>)) expect(STUDY_OPTION_FIELDS.map((f) => f.path), k).toContain(k);
   });
 });
+
+describe('appendix listing: every numeric site, climate, runway and fleet field, from the field tables (issue 14)', () => {
+  it('each key of the demo input objects has its row in a table, and the listing carries its label', async () => {
+    const { SITE_FIELDS, CLIMATE_FIELDS, MONTHLY_FIELDS, PROFILE_POINT_FIELDS, DIRECTION_FIELDS, FLEET_FIELDS } = await import('../../../core/index.js');
+    const numericKeys = (o: object) => Object.entries(o).filter(([, v]) => typeof v === 'number').map(([k]) => k);
+    const site = input.site;
+    const check = (obj: object, table: readonly { key: string }[], ignore: readonly string[] = []) => {
+      for (const k of numericKeys(obj)) if (!ignore.includes(k)) expect(table.map((f) => f.key), k).toContain(k);
+    };
+    check(site, SITE_FIELDS);
+    if (site.climate) { check(site.climate, CLIMATE_FIELDS); for (const m of site.climate.monthly) check(m, MONTHLY_FIELDS, ['month']); }
+    for (const r of site.runways) { for (const p of r.profile) check(p, PROFILE_POINT_FIELDS); for (const d of r.directions) check(d, DIRECTION_FIELDS); }
+    for (const s of input.scenarios) for (const f of s.fleet) check(f, FLEET_FIELDS);
+    const listing = JSON.stringify(model.sections.find((s) => s.id === 'inputs')!.blocks);
+    for (const f of [...SITE_FIELDS, ...MONTHLY_FIELDS, ...PROFILE_POINT_FIELDS, ...DIRECTION_FIELDS, ...FLEET_FIELDS]) expect(listing, f.key).toContain(`"${f.label}`);
+  });
+});

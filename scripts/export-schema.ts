@@ -4,7 +4,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { studyJsonSchema } from '../server/schemas/jsonSchema.js';
+import { studyJsonSchema } from '../server/common/jsonSchema.js';
 
 const target = fileURLToPath(new URL('../docs/study.schema.json', import.meta.url));
 writeFileSync(target, JSON.stringify(studyJsonSchema(), null, 2) + '\n');

@@ -25,8 +25,8 @@ import { NotFoundError } from '../../db/errors.js';
 import { getSite, setSiteClimate } from '../../db/repos/sites.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
-import { formatPath } from '../schemas/common.js';
-import { climateSchema } from '../schemas/study.js';
+import { formatPath } from '../common/schema.js';
+import { climateSchema } from '../studies/schema.js';
 import { ImportError } from './errors.js';
 import { decodeUtf8 } from './text.js';
 

@@ -11,7 +11,7 @@
  * file; ids must be unique in the file. Any problem rejects the file (ImportError, listing line, column
  * and reason) before anything is written; otherwise everything is written in one transaction.
  * `parseAircraftCsv` does the checking without a database (a worker thread runs it); the commit is
- * shared with the JSON import (server/catalogue.ts).
+ * shared with the JSON import (server/aircraft/catalogue.ts).
  * A blank cell is "missing", never zero. The reference table (a 3-D grid) is not carried by the CSV.
  */
 import { parse } from 'csv-parse/sync';
@@ -23,9 +23,9 @@ import { getScenario, setScenarioFleet } from '../../db/repos/studies.js';
 import { NotFoundError } from '../../db/errors.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
-import { commitCatalogue, packValidated, type ParsedCatalogue } from '../catalogue.js';
-import { aircraftSchema } from '../schemas/aircraft.js';
-import { fleetRowSchema } from '../schemas/study.js';
+import { commitCatalogue, packValidated, type ParsedCatalogue } from '../aircraft/catalogue.js';
+import { aircraftSchema } from '../aircraft/schema.js';
+import { fleetRowSchema } from '../studies/schema.js';
 import { ImportError, MAX_PROBLEMS, type ImportProblem } from './errors.js';
 import { PLAIN_NUMBER, csvSafeRecords, restoreCsvCell } from './csvSafe.js';
 import { decodeUtf8 } from './text.js';

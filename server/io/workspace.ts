@@ -27,9 +27,9 @@ import { allStudyResults, createStudy, getStudy, listStudyIds, saveStudyResult }
 import { savedResults, scenarios, sites, studies, aircraft as aircraftTable } from '../../db/schema.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
-import { aircraftSchema } from '../schemas/aircraft.js';
-import { formatPath, int, text } from '../schemas/common.js';
-import { climateSchema, fleetRowSchema, optionsSchema, runwaySchema, scenarioSchema, siteSchema } from '../schemas/study.js';
+import { aircraftSchema } from '../aircraft/schema.js';
+import { formatPath, int, text } from '../common/schema.js';
+import { climateSchema, fleetRowSchema, optionsSchema, runwaySchema, scenarioSchema, siteSchema } from '../studies/schema.js';
 import { ImportError, MAX_PROBLEMS, type ImportProblem } from './errors.js';
 import { decodeUtf8, locateJsonPath, parseJsonText } from './text.js';
 

@@ -9,7 +9,7 @@
  */
 import type { StudyInput, UnitSystem } from '../../core/index.js';
 import { renderAppendixPdf } from '../pdf/render.js';
-import type { StudyOutput } from '../study.js';
+import type { StudyOutput } from '../studies/document.js';
 
 export interface PdfTaskInput {
   readonly input: StudyInput;

@@ -14,7 +14,7 @@ import {
 } from '../../db/repos/studies.js';
 import type { Db } from '../../db/types.js';
 import type { JobRunner } from '../jobs/index.js';
-import { inputDigest, parseStudyDocument, type StudyOutput } from '../study.js';
+import { inputDigest, parseStudyDocument, type StudyOutput } from './document.js';
 import { Lru } from '../web/lru.js';
 
 export interface StudyState {
@@ -128,7 +128,7 @@ export class StudyService {
         status: inputsChangedSinceSave(this.db, studyId, '-'),
       };
     }
-    // parseStudyDocument has run core's own study and site checks already (server/study.ts).
+    // parseStudyDocument has run core's own study and site checks already (server/studies/document.ts).
     const digest = inputDigest(parsed.input);
     return { studyId, input, ready: parsed.input, problems: [], digest, status: currentMethod(inputsChangedSinceSave(this.db, studyId, digest)) };
   }

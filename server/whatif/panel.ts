@@ -6,8 +6,8 @@
  */
 import { InputDomainError, whatIf, type AircraftProfile, type UnitSystem, type WhatIfConditions, type WhatIfInput, type WhatIfOutcome } from '../../core/index.js';
 import type { WhatIfProps } from '../../templates/whatif.js';
-import type { FormValues } from '../forms/fields.js';
-import { hasWhatIfFields, readWhatIfForm, startingConditions } from '../forms/whatif.js';
+import type { FormValues } from '../common/formFields.js';
+import { hasWhatIfFields, readWhatIfForm, startingConditions } from './form.js';
 import { Lru } from '../web/lru.js';
 
 export interface WhatIfPanelSpec {

@@ -260,7 +260,7 @@ export function ResultsContent(p: ResultsPageProps) {
 }
 
 /**
- * The appendix link. The PDF appendix is served by /studies/:id/appendix.pdf (server/routes/report.tsx),
+ * The appendix link. The PDF appendix is served by /studies/:id/appendix.pdf (server/studies/report.tsx),
  * which the report module fills in.
  */
 export function ReportLink(p: { studyId: number }) {

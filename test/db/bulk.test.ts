@@ -17,7 +17,7 @@ import { countAircraft, getAircraft, packAircraft } from '../../db/repos/aircraf
 import { seedDemoIfEmpty } from '../../db/seed.js';
 import { WriteGate } from '../../db/writeGate.js';
 import { createApp } from '../../server/app.js';
-import { commitCatalogue, commitCatalogueBulk, parseAircraftJson, type ParsedCatalogue } from '../../server/catalogue.js';
+import { commitCatalogue, commitCatalogueBulk, parseAircraftJson, type ParsedCatalogue } from '../../server/aircraft/catalogue.js';
 import { aircraftToCsv, parseAircraftCsv } from '../../server/io/csv.js';
 import { ImportError } from '../../server/io/errors.js';
 import { demoDocument, generatedAircraft } from './fixtures/demo.js';

@@ -1,6 +1,6 @@
 /**
  * Bounded fuzz run of the JSON API bodies (issue 12, "Tests"): every POST/PUT endpoint of
- * server/routes/api.ts with (a) random JSON values and random text, (b) valid documents with one to
+ * server/api.ts with (a) random JSON values and random text, (b) valid documents with one to
  * three members replaced by a random value (including the raw tokens 1e999, -0 and 1e-400, which
  * JSON.parse turns into ±Infinity, −0 and 0) or removed, and (c) deeply nested JSON. Checks: harness.ts.
  */

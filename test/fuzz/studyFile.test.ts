@@ -11,7 +11,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputDomainError } from '../../core/index.js';
 import { runCli } from '../../server/cli.js';
-import { parseStudyDocument, studyOutput } from '../../server/study.js';
+import { parseStudyDocument, studyOutput } from '../../server/studies/document.js';
 import { FUZZ_TIMEOUT_MS, Tally, applyJsonEdits, assertClean, jsonEchoes, jsonEdits, fuzzParams, nonFinitePath, short } from './harness.js';
 
 const DEMO = JSON.parse(readFileSync(new URL('../../examples/demo-study.json', import.meta.url), 'utf8')) as unknown;

@@ -10,7 +10,7 @@ import {
   ALTERNATE_DISTANCE_RANGE_KM, InputDomainError, MONTHLY_MEAN_MAX_RANGE, RESERVE_ALTERNATE_DISTANCE_RANGE,
   approachCategory, designTemperatureFromMonthly, resolveReserves, siteConditions, type StudyInput,
 } from '../../core/index.js';
-import { parseStudyDocument, studyOutput } from '../../server/study.js';
+import { parseStudyDocument, studyOutput } from '../../server/studies/document.js';
 
 const minimal = readFileSync(new URL('../../examples/minimal-study.json', import.meta.url), 'utf8');
 const demo = JSON.parse(readFileSync(new URL('../../examples/demo-study.json', import.meta.url), 'utf8')) as { aircraft: Record<string, unknown>[] };

@@ -6,9 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { InputDomainError, inRange, readMonthlyNormalsCsv } from '../../core/index.js';
-import { readNumber, type FieldErrors } from '../../server/forms/fields.js';
+import { readNumber, type FieldErrors } from '../../server/common/formFields.js';
 import { aircraftToCsv, parseAircraftCsv } from '../../server/io/csv.js';
-import { num, oneOf, parseAll } from '../../server/schemas/common.js';
+import { num, oneOf, parseAll } from '../../server/common/schema.js';
 import { demoAircraft } from '../db/fixtures/demo.js';
 import { importError } from './io/helpers.js';
 

@@ -8,8 +8,8 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
-import { resultsCsv } from '../../server/export/resultsCsv.js';
-import { parseStudyDocument, studyOutput } from '../../server/study.js';
+import { resultsCsv } from '../../server/studies/resultsCsv.js';
+import { parseStudyDocument, studyOutput } from '../../server/studies/document.js';
 
 function demo(options: Record<string, unknown> = {}) {
   const doc = JSON.parse(readFileSync(new URL('../../examples/demo-study.json', import.meta.url), 'utf8'));

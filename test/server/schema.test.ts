@@ -1,10 +1,10 @@
 /** The committed JSON Schema of the study file matches the zod schema (run `npm run schema` to refresh). */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { studyJsonSchema } from '../../server/schemas/jsonSchema.js';
+import { studyJsonSchema } from '../../server/common/jsonSchema.js';
 
 describe('docs/study.schema.json', () => {
-  it('is up to date with server/schemas/study.ts', () => {
+  it('is up to date with server/studies/schema.ts', () => {
     const committed = readFileSync(new URL('../../docs/study.schema.json', import.meta.url), 'utf8');
     expect(committed).toBe(JSON.stringify(studyJsonSchema(), null, 2) + '\n');
   });

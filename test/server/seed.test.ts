@@ -3,7 +3,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { inputsChangedSinceSave, listStudyResults, loadStudyInput, openDatabase } from '../../db/index.js';
 import { seedDemoWithResults } from '../../server/seed.js';
-import { inputDigest, parseStudyDocument } from '../../server/study.js';
+import { inputDigest, parseStudyDocument } from '../../server/studies/document.js';
 
 describe('seedDemoWithResults', () => {
   it('saves results matching the seeded input once', () => {

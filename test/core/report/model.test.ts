@@ -8,7 +8,7 @@ import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import { runStudy, type StudyInput } from '../../../core/index.js';
 import { studyCharts } from '../../../core/report/charts.js';
 import { buildAppendixModel, climbLimitedRow, type AppendixModel, type Block, type Cell, type Row } from '../../../core/report/model.js';
-import { parseStudyDocument } from '../../../server/study.js';
+import { parseStudyDocument } from '../../../server/studies/document.js';
 
 function inputOf(doc: unknown): StudyInput {
   const p = parseStudyDocument(doc);

@@ -11,7 +11,7 @@ import {
 } from '../../../core/index.js';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import minimal from '../../../examples/minimal-study.json' with { type: 'json' };
-import { parseStudyDocument } from '../../../server/study.js';
+import { parseStudyDocument } from '../../../server/studies/document.js';
 
 function input(doc: unknown): StudyInput {
   const p = parseStudyDocument(doc);

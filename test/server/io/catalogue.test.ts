@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../../../db/client.js';
 import { getAircraft, updateAircraft } from '../../../db/repos/aircraft.js';
 import { seedDemoIfEmpty } from '../../../db/seed.js';
-import { importAircraftJson, parseAircraftJson } from '../../../server/catalogue.js';
+import { importAircraftJson, parseAircraftJson } from '../../../server/aircraft/catalogue.js';
 import { generatedAircraft, demoDocument } from '../../db/fixtures/demo.js';
 import { dump, importError, lineOf } from './helpers.js';
 

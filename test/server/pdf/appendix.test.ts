@@ -12,7 +12,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION_TEXT } from '../../../core/index.js';
 import { climbLimitedRow } from '../../../core/report/model.js';
 import { appendixModel, ATTACHMENT_NAME, studyFileText } from '../../../server/pdf/index.js';
-import { canonicalJson, inputDigest, sha256Hex } from '../../../server/study.js';
+import { canonicalJson, inputDigest, sha256Hex } from '../../../server/studies/document.js';
 import { fmtLengthBoth } from '../../../templates/format.js';
 import {
   climbLimitedDoc, clock, demoDoc, pagesText, pdfInfo, renderTo, root, runTool, studyOf, workDir,

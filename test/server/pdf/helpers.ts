@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import type { StudyInput, UnitSystem } from '../../../core/index.js';
 import { renderAppendixPdf } from '../../../server/pdf/index.js';
-import { parseStudyDocument, studyOutput, type StudyOutput } from '../../../server/study.js';
+import { parseStudyDocument, studyOutput, type StudyOutput } from '../../../server/studies/document.js';
 
 export const root = resolve(import.meta.dirname, '..', '..', '..');
 export const demoDoc = (): any => JSON.parse(readFileSync(join(root, 'examples/demo-study.json'), 'utf8'));

@@ -4,7 +4,7 @@
  * 1852/3600 m/s (core/units.ts, exact by definition).
  */
 import { describe, expect, it } from 'vitest';
-import { localiseMessage, parseTyped, readNumber, type FieldErrors } from '../../../server/forms/fields.js';
+import { localiseMessage, parseTyped, readNumber, type FieldErrors } from '../../../server/common/formFields.js';
 import { expectClose } from '../../helpers/close.js';
 
 describe('readNumber (form edge)', () => {

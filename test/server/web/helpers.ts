@@ -8,8 +8,8 @@ import type Database from 'better-sqlite3';
 import { openDatabase, seedDemoIfEmpty, type Db } from '../../../db/index.js';
 import { createApp, type AppDeps } from '../../../server/app.js';
 import { inlineJobs } from '../../../server/jobs/index.js';
-import { parseAll } from '../../../server/schemas/common.js';
-import { studyFileSchema, studyInputOf } from '../../../server/schemas/study.js';
+import { parseAll } from '../../../server/common/schema.js';
+import { studyFileSchema, studyInputOf } from '../../../server/studies/schema.js';
 import type { AppEnv } from '../../../server/web/env.js';
 
 export const DEMO_TEXT = readFileSync(new URL('../../../examples/demo-study.json', import.meta.url), 'utf8');

@@ -5,8 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { createAircraft, getAircraft } from '../../../db/repos/aircraft.js';
-import { copyIdFor } from '../../../server/routes/aircraft.js';
-import { ident } from '../../../server/schemas/common.js';
+import { copyIdFor } from '../../../server/aircraft/routes.js';
+import { ident } from '../../../server/common/schema.js';
 import { browser, makeApp } from './helpers.js';
 
 const BAD: readonly [string, string][] = [['CR', '/studies\r\nSet-Cookie: x=1'], ['LF', '/aircraft\nx'], ['NUL', '/sites\u0000']];

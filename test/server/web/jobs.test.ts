@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { getAircraft, openDatabase, seedDemoIfEmpty } from '../../../db/index.js';
-import { commitCatalogue } from '../../../server/catalogue.js';
+import { commitCatalogue } from '../../../server/aircraft/catalogue.js';
 import { aircraftToCsv } from '../../../server/io/csv.js';
 import { ImportError } from '../../../server/io/errors.js';
 import { inlineJobs, workerJobs } from '../../../server/jobs/index.js';

@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildAppendixModel, componentSections, type Row } from '../../../core/index.js';
 import { latestStudyResult } from '../../../db/index.js';
-import type { StudyOutput } from '../../../server/study.js';
+import type { StudyOutput } from '../../../server/studies/document.js';
 import { cellText } from '../../../templates/reportCells.js';
 import { browser, demoInput, makeApp } from './helpers.js';
 

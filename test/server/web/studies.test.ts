@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import { getStudy, latestStudyResult } from '../../../db/index.js';
-import { studyOutput, type StudyOutput } from '../../../server/study.js';
+import { studyOutput, type StudyOutput } from '../../../server/studies/document.js';
 import { fmtLengthBoth } from '../../../templates/format.js';
 import { browser, demoInput, makeApp } from './helpers.js';
 
@@ -187,10 +187,10 @@ describe('switching a study between SI and US units keeps its result current (is
     await c.post(`/studies/${studyId}/run`, {});
     const before = latestStudyResult(db, studyId)!;
     const s = getStudy(db, studyId)!;
-    const { inputDigest } = await import('../../../server/study.js');
+    const { inputDigest } = await import('../../../server/studies/document.js');
     const si = demoInput();
     expect(inputDigest({ ...si, options: { ...si.options, units: 'us' } })).toBe(inputDigest(si));
-    const { studyFormValues } = await import('../../../server/forms/study.js');
+    const { studyFormValues } = await import('../../../server/studies/form.js');
     // The form's numbers are in SI (its `_units`); only the study's display units change.
     const values = { ...studyFormValues({ name: s.name, siteId: s.siteId, options: s.options }, 'si'), _units: 'si', units: 'us' };
     expect((await c.post(`/studies/${studyId}`, values)).status).toBe(303);

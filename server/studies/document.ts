@@ -3,9 +3,9 @@
  * the canonical input so a report or a file can be traced back to exactly what produced it.
  */
 import { createHash } from 'node:crypto';
-import { InputDomainError, domainProblemText, runStudy, siteConditions, validateStudy, type StudyInput, type StudyResult } from '../core/index.js';
-import { echoValue, fieldPath, formatPath, parseAll, type Problem } from './schemas/common.js';
-import { studyCrossProblems, studyFileSchema, studyInputOf } from './schemas/study.js';
+import { InputDomainError, domainProblemText, runStudy, siteConditions, validateStudy, type StudyInput, type StudyResult } from '../../core/index.js';
+import { echoValue, fieldPath, formatPath, parseAll, type Problem } from '../common/schema.js';
+import { studyCrossProblems, studyFileSchema, studyInputOf } from './schema.js';
 
 export interface StudyOutput extends StudyResult {
   /** SHA-256 (hex) of the canonical JSON of the study input. */

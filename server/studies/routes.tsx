@@ -21,20 +21,20 @@ import {
 } from '../../templates/pages/studies.js';
 import { ViewContext } from '../../templates/view.js';
 import { WhatIfPanel, WhatIfResult } from '../../templates/whatif.js';
-import { resultsCsv } from '../export/resultsCsv.js';
-import { formValues, type FormValues } from '../forms/fields.js';
+import { resultsCsv } from './resultsCsv.js';
+import { formValues, type FormValues } from '../common/formFields.js';
 import { FLEET_SELECT_MAX, FLEET_SUGGESTIONS, pageOfList } from '../web/paging.js';
-import { newStudyValues, readScenarioForm, readStudyForm, scenarioFormValues, studyFormValues } from '../forms/study.js';
-import type { WhatIfConditions } from '../forms/whatif.js';
+import { newStudyValues, readScenarioForm, readStudyForm, scenarioFormValues, studyFormValues } from './form.js';
+import type { WhatIfConditions } from '../whatif/form.js';
 import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportFleetCsv, importFleetCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
-import { StudyService, type LoadedResult } from '../studies/state.js';
+import { StudyService, type LoadedResult } from './state.js';
 import type { AppEnv } from '../web/env.js';
 import { Lru } from '../web/lru.js';
 import { fragment, isHtmx, page, pageWithContent, seeOther, viewOf } from '../web/page.js';
-import { download, formUnits, idParam, notFound } from './common.js';
+import { download, formUnits, idParam, notFound } from '../web/routeHelpers.js';
 
 export interface StudyRouteDeps {
   readonly db: Db;

@@ -13,16 +13,16 @@
  * replace them. Worker threads never open the database (docs/storage.md).
  */
 import { z } from 'zod';
-import { validateAircraft, type AircraftProfile } from '../core/index.js';
-import type { BulkWriter } from '../db/bulk.js';
-import { connectionOf } from '../db/client.js';
-import { bulkImportAircraft, ExistingAircraftError, listAircraft, packAircraft, runSteps, type PackedAircraft } from '../db/repos/aircraft.js';
-import { transaction } from '../db/transaction.js';
-import type { Db } from '../db/types.js';
-import { ImportError, MAX_PROBLEMS, type ImportProblem } from './io/errors.js';
-import { decodeUtf8, locateArrayItemKeys, locateJsonPath, parseJsonText } from './io/text.js';
-import { aircraftSchema } from './schemas/aircraft.js';
-import { formatPath } from './schemas/common.js';
+import { validateAircraft, type AircraftProfile } from '../../core/index.js';
+import type { BulkWriter } from '../../db/bulk.js';
+import { connectionOf } from '../../db/client.js';
+import { bulkImportAircraft, ExistingAircraftError, listAircraft, packAircraft, runSteps, type PackedAircraft } from '../../db/repos/aircraft.js';
+import { transaction } from '../../db/transaction.js';
+import type { Db } from '../../db/types.js';
+import { ImportError, MAX_PROBLEMS, type ImportProblem } from '../io/errors.js';
+import { decodeUtf8, locateArrayItemKeys, locateJsonPath, parseJsonText } from '../io/text.js';
+import { aircraftSchema } from './schema.js';
+import { formatPath } from '../common/schema.js';
 
 export interface CatalogueImportResult {
   readonly created: readonly string[];

@@ -17,15 +17,15 @@ import {
   RunwayFormPage, SiteDetailPage, SiteFormPage, SitesListPage, runwayFormValues, siteFormValues,
   type DesignTemperatureView, type RunwayView,
 } from '../../templates/pages/sites.js';
-import { formValues, type FormValues } from '../forms/fields.js';
-import { readRunwayForm, readSiteForm } from '../forms/site.js';
+import { formValues, type FormValues } from '../common/formFields.js';
+import { readRunwayForm, readSiteForm } from './form.js';
 import { CLIMATE_FILE_FORMATS, type ClimateFileFormat } from '../io/climate.js';
 import { ImportError, formatProblem } from '../io/errors.js';
 import type { JobRunner } from '../jobs/index.js';
 import { pageOfList } from '../web/paging.js';
 import type { AppEnv } from '../web/env.js';
 import { page, seeOther, viewOf } from '../web/page.js';
-import { formUnits, idParam, notFound } from './common.js';
+import { formUnits, idParam, notFound } from '../web/routeHelpers.js';
 
 export interface SiteRouteDeps {
   readonly db: Db;

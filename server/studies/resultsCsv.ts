@@ -5,7 +5,7 @@
  */
 import { stringify } from 'csv-stringify/sync';
 import { CAUTION_TEXT, unitOf, type UnitSystem } from '../../core/index.js';
-import type { StudyOutput } from '../study.js';
+import type { StudyOutput } from './document.js';
 import { csvSafeRecords } from '../io/csvSafe.js';
 
 const round = (v: number, digits: number): string => (Number.isFinite(v) ? v.toFixed(digits) : '');

@@ -7,10 +7,10 @@ import {
   STAGE_LENGTH_RANGE_KM, STUDY_METHODS, SURFACES, optionFieldByForm,
   displayInputValue as fmtInput, type FleetRowInput, type StudyOptions, type UnitSystem,
 } from '../../core/index.js';
-import { optionsSchema } from '../schemas/study.js';
-import { ident } from '../schemas/common.js';
-import type { FormResult } from './aircraft.js';
-import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from './fields.js';
+import { optionsSchema } from './schema.js';
+import { ident } from '../common/schema.js';
+import type { FormResult } from '../aircraft/form.js';
+import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export interface StudyFields {
   readonly name: string;

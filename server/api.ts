@@ -6,24 +6,24 @@
  */
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import { InputDomainError, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../../core/index.js';
-import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
+import { InputDomainError, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../core/index.js';
+import { AircraftInUseError, DuplicateIdError } from '../db/errors.js';
 import {
   AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
-} from '../../db/repos/aircraft.js';
-import { createSite, getSite, listSites } from '../../db/repos/sites.js';
-import { createStudy, deleteStudy, getStudy, listStudies } from '../../db/repos/studies.js';
-import { transaction } from '../../db/transaction.js';
-import type { Db } from '../../db/types.js';
-import { jsonDepthExcess, jsonDepthMessage } from '../io/text.js';
-import type { JobRunner } from '../jobs/index.js';
-import { aircraftSchema } from '../schemas/aircraft.js';
-import { num, oneOf, parseAll, type Problem } from '../schemas/common.js';
-import { canonicalJson, parseStudyDocument, problemFromDomainError } from '../study.js';
-import { StudyService } from '../studies/state.js';
-import type { AppEnv } from '../web/env.js';
-import { API_LIST_DEFAULT, API_LIST_MAX, chooseOffset } from '../web/paging.js';
-import { idParam } from './common.js';
+} from '../db/repos/aircraft.js';
+import { createSite, getSite, listSites } from '../db/repos/sites.js';
+import { createStudy, deleteStudy, getStudy, listStudies } from '../db/repos/studies.js';
+import { transaction } from '../db/transaction.js';
+import type { Db } from '../db/types.js';
+import { jsonDepthExcess, jsonDepthMessage } from './io/text.js';
+import type { JobRunner } from './jobs/index.js';
+import { aircraftSchema } from './aircraft/schema.js';
+import { num, oneOf, parseAll, type Problem } from './common/schema.js';
+import { canonicalJson, parseStudyDocument, problemFromDomainError } from './studies/document.js';
+import { StudyService } from './studies/state.js';
+import type { AppEnv } from './web/env.js';
+import { API_LIST_DEFAULT, API_LIST_MAX, chooseOffset } from './web/paging.js';
+import { idParam } from './web/routeHelpers.js';
 
 export interface ApiRouteDeps {
   readonly db: Db;

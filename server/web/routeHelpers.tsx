@@ -3,9 +3,9 @@ import type { Context } from 'hono';
 import type { UnitSystem } from '../../core/index.js';
 import { UNITS_FIELD } from '../../templates/components.js';
 import { NotFoundPage } from '../../templates/pages/errors.js';
-import type { FormValues } from '../forms/fields.js';
-import type { AppEnv } from '../web/env.js';
-import { page, viewOf } from '../web/page.js';
+import type { FormValues } from '../common/formFields.js';
+import type { AppEnv } from './env.js';
+import { page, viewOf } from './page.js';
 
 /** A file download (attachment) with its content type. */
 export function download(c: Context, body: string | Uint8Array, type: string, filename: string): Response {

@@ -9,9 +9,9 @@ import {
   type AircraftProfile, type EngineType, type UnitSystem,
 } from '../../core/index.js';
 import { AIRCRAFT_FORM_FIELDS, type AircraftFormField } from '../../templates/aircraftFields.js';
-import { aircraftSchema } from '../schemas/aircraft.js';
-import { ident } from '../schemas/common.js';
-import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from './fields.js';
+import { aircraftSchema } from './schema.js';
+import { ident } from '../common/schema.js';
+import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export type FormResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly errors: FieldErrors };
 

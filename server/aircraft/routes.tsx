@@ -19,11 +19,11 @@ import { IDS } from '../../templates/ids.js';
 import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
 import { AircraftChoices } from '../../templates/pages/studies.js';
 import { WhatIfResult } from '../../templates/whatif.js';
-import { aircraftFigures } from '../aircraftFigures.js';
-import { commitCatalogue, commitCatalogueBulk, exportAircraftJson } from '../catalogue.js';
-import { readAircraftForm } from '../forms/aircraft.js';
-import { formValues, type FormValues } from '../forms/fields.js';
-import type { WhatIfConditions } from '../forms/whatif.js';
+import { aircraftFigures } from './figures.js';
+import { commitCatalogue, commitCatalogueBulk, exportAircraftJson } from './catalogue.js';
+import { readAircraftForm } from './form.js';
+import { formValues, type FormValues } from '../common/formFields.js';
+import type { WhatIfConditions } from '../whatif/form.js';
 import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportAircraftCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';
@@ -32,7 +32,7 @@ import type { AppEnv } from '../web/env.js';
 import { FLEET_SUGGESTIONS, LIST_PAGE_SIZE, choosePage } from '../web/paging.js';
 import { fragment, isHtmx, page, seeOther, viewOf } from '../web/page.js';
 import { InputDomainError } from '../../core/index.js';
-import { download, notFound, formUnits } from './common.js';
+import { download, notFound, formUnits } from '../web/routeHelpers.js';
 
 export interface AircraftRouteDeps {
   readonly db: Db;
@@ -43,7 +43,7 @@ export interface AircraftRouteDeps {
 
 const path = (id: string): string => `/aircraft/${encodeURIComponent(id)}`;
 
-/** Longest aircraft id (the id rule, server/schemas/common.ts `ident`). */
+/** Longest aircraft id (the id rule, server/common/schema.ts `ident`). */
 const MAX_ID_LENGTH = 64;
 
 /**

@@ -5,10 +5,10 @@
  * reference code, approach category, design group). A profile the models cannot classify gets a note
  * instead of figures.
  */
-import type { AircraftFiguresView } from '../templates/pages/aircraft.js';
+import type { AircraftFiguresView } from '../../templates/pages/aircraft.js';
 import {
   InputDomainError, analyseTakeoff, classifyAircraft, referenceLandingSpeed, type AircraftProfile,
-} from '../core/index.js';
+} from '../../core/index.js';
 
 /** Key figures of a catalogue aircraft; the view type lives with the template that shows it. */
 export type AircraftFigures = AircraftFiguresView;

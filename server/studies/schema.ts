@@ -13,8 +13,8 @@ import {
   designTemperatureFromMonthly, type FleetRowInput, type InputFieldSpec, type MonthlyClimate, type OptionFieldSpec,
   type ProfilePoint, type RunwayDirectionInput, type StudyInput, type StudyOptions,
 } from '../../core/index.js';
-import { aircraftSchema } from './aircraft.js';
-import { coreCheck, ident, int, numIn, oneOf, text } from './common.js';
+import { aircraftSchema } from '../aircraft/schema.js';
+import { coreCheck, ident, int, numIn, oneOf, text } from '../common/schema.js';
 
 const intIn = (r: { readonly min: number; readonly max: number; readonly unit: string }) => int(r.min, r.max, r.unit);
 

@@ -15,11 +15,11 @@ import { getStudy } from '../../db/repos/studies.js';
 import type { Db } from '../../db/types.js';
 import type { JobRunner } from '../jobs/index.js';
 import { appendixFileName, issueDate, runwrightVersion } from '../pdf/index.js';
-import type { StudyService } from '../studies/state.js';
+import type { StudyService } from './state.js';
 import type { AppEnv } from '../web/env.js';
 import { Lru } from '../web/lru.js';
 import { seeOther, viewOf } from '../web/page.js';
-import { download, idParam, notFound } from './common.js';
+import { download, idParam, notFound } from '../web/routeHelpers.js';
 
 export interface ReportRouteDeps {
   readonly db: Db;

@@ -10,7 +10,7 @@ import {
   REFERENCE_TABLE_MASS_RANGE, REFERENCE_TABLE_TEMPERATURE_RANGE, domainProblemText, validateAircraft,
   type AircraftProfile, type FieldSpec,
 } from '../../core/index.js';
-import { fieldPath, ident, num, numIn, oneOf, text } from './common.js';
+import { fieldPath, ident, num, numIn, oneOf, text } from '../common/schema.js';
 
 function shapeOf(fields: readonly FieldSpec[]): Record<string, z.ZodType> {
   const shape: Record<string, z.ZodType> = {};

@@ -12,10 +12,10 @@ import {
   type MonthlyClimate, type ProfilePoint, type RunwayDirectionInput, type RunwayInput, type SiteClimate, type UnitSystem,
   unitOf,
 } from '../../core/index.js';
-import { climateSchema, runwaySchema } from '../schemas/study.js';
-import { numIn, text } from '../schemas/common.js';
-import type { FormResult } from './aircraft.js';
-import { localiseMessage, parseTyped, rangeText, readChoice, readNumber, readText, type FieldErrors, type FormValues } from './fields.js';
+import { climateSchema, runwaySchema } from '../studies/schema.js';
+import { numIn, text } from '../common/schema.js';
+import type { FormResult } from '../aircraft/form.js';
+import { localiseMessage, parseTyped, rangeText, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export interface SiteFields {
   readonly name: string;

@@ -10,34 +10,18 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { AircraftProfile } from '../../../core/aircraft.js';
 import {
   MAX_ALL_ENGINES_AIR_M, MAX_ENGINE_OUT_AIR_M, analyseTakeoff, climbCappedTakeoff,
 } from '../../../core/takeoff/index.js';
 import type { TakeoffInput, TakeoffResult } from '../../../core/takeoff/types.js';
 import { runStudy, type StudyInput } from '../../../core/index.js';
 import demoStudy from '../../../examples/demo-study.json' with { type: 'json' };
-import { fleet, numbers } from './fixtures.js';
+import { fleet, numbers, scaledProfile } from './fixtures.js';
 
 const RUNS = 50;
 const REL = 1e-6;
 
-const arbProfile: fc.Arbitrary<AircraftProfile> = fc.record({
-  base: fc.constantFrom(...fleet),
-  power: fc.double({ min: 0.9, max: 1.2, noNaN: true }),
-  wing: fc.double({ min: 0.93, max: 1.1, noNaN: true }),
-  cd0: fc.double({ min: 0.9, max: 1.15, noNaN: true }),
-  cl: fc.double({ min: 0.95, max: 1.05, noNaN: true }),
-}).map(({ base, power, wing, cd0, cl }) => ({
-  ...base,
-  id: `${base.id}-scaled`,
-  staticThrust_N: base.staticThrust_N === undefined ? undefined : base.staticThrust_N * power,
-  shaftPower_W: base.shaftPower_W === undefined ? undefined : base.shaftPower_W * power,
-  wingArea_m2: base.wingArea_m2 * wing,
-  cd0Takeoff: base.cd0Takeoff * cd0,
-  clMaxTakeoff: base.clMaxTakeoff * cl,
-  clMaxLanding: base.clMaxLanding * cl,
-}));
+const arbProfile = scaledProfile({ power: [0.9, 1.2], cd0: [0.9, 1.15] });
 
 /** Hot and high enough that climb limits bind for part of the cases. */
 const arbInput: fc.Arbitrary<TakeoffInput> = fc.record({

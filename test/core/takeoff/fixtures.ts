@@ -2,6 +2,7 @@
  * Shared fixtures of the takeoff tests: the demo fleet (invented aircraft) and an invented hand-check
  * twin jet with round numbers (AR = 8, 16h/b = 1, so φ = 0.5 and K = 1/(π·8·0.8)).
  */
+import fc from 'fast-check';
 import type { AircraftProfile } from '../../../core/aircraft.js';
 import type { TakeoffFeasible, TakeoffInput, TakeoffResult } from '../../../core/takeoff/types.js';
 import demoStudy from '../../../examples/demo-study.json' with { type: 'json' };
@@ -44,4 +45,27 @@ export function numbers(v: unknown, path = '$', out: [string, number][] = []): [
   else if (Array.isArray(v)) v.forEach((x, i) => numbers(x, `${path}[${i}]`, out));
   else if (v !== null && typeof v === 'object') for (const [k, x] of Object.entries(v)) numbers(x, `${path}.${k}`, out);
   return out;
+}
+
+/**
+ * Random valid profiles for property tests: a demo aircraft scaled in thrust or power, wing area,
+ * zero-lift drag and CLmax within the given factor ranges.
+ */
+export function scaledProfile(r: { power: [number, number]; cd0: [number, number] }): fc.Arbitrary<AircraftProfile> {
+  return fc.record({
+    base: fc.constantFrom(...fleet),
+    power: fc.double({ min: r.power[0], max: r.power[1], noNaN: true }),
+    wing: fc.double({ min: 0.93, max: 1.1, noNaN: true }),
+    cd0: fc.double({ min: r.cd0[0], max: r.cd0[1], noNaN: true }),
+    cl: fc.double({ min: 0.95, max: 1.05, noNaN: true }),
+  }).map(({ base, power, wing, cd0, cl }) => ({
+    ...base,
+    id: `${base.id}-scaled`,
+    staticThrust_N: base.staticThrust_N === undefined ? undefined : base.staticThrust_N * power,
+    shaftPower_W: base.shaftPower_W === undefined ? undefined : base.shaftPower_W * power,
+    wingArea_m2: base.wingArea_m2 * wing,
+    cd0Takeoff: base.cd0Takeoff * cd0,
+    clMaxTakeoff: base.clMaxTakeoff * cl,
+    clMaxLanding: base.clMaxLanding * cl,
+  }));
 }

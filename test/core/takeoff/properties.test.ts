@@ -6,29 +6,13 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { AircraftProfile } from '../../../core/aircraft.js';
 import { analyseTakeoff, engineFailureAt } from '../../../core/takeoff/index.js';
 import type { TakeoffInput, TakeoffResult } from '../../../core/takeoff/types.js';
-import { fleet, numbers } from './fixtures.js';
+import { numbers, scaledProfile } from './fixtures.js';
 
 const RUNS = 60;
 
-const arbProfile: fc.Arbitrary<AircraftProfile> = fc.record({
-  base: fc.constantFrom(...fleet),
-  power: fc.double({ min: 0.95, max: 1.25, noNaN: true }),
-  wing: fc.double({ min: 0.93, max: 1.1, noNaN: true }),
-  cd0: fc.double({ min: 0.9, max: 1.1, noNaN: true }),
-  cl: fc.double({ min: 0.95, max: 1.05, noNaN: true }),
-}).map(({ base, power, wing, cd0, cl }) => ({
-  ...base,
-  id: `${base.id}-scaled`,
-  staticThrust_N: base.staticThrust_N === undefined ? undefined : base.staticThrust_N * power,
-  shaftPower_W: base.shaftPower_W === undefined ? undefined : base.shaftPower_W * power,
-  wingArea_m2: base.wingArea_m2 * wing,
-  cd0Takeoff: base.cd0Takeoff * cd0,
-  clMaxTakeoff: base.clMaxTakeoff * cl,
-  clMaxLanding: base.clMaxLanding * cl,
-}));
+const arbProfile = scaledProfile({ power: [0.95, 1.25], cd0: [0.9, 1.1] });
 
 interface Case { readonly input: TakeoffInput }
 

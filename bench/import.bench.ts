@@ -20,7 +20,7 @@ import { openBulkWriter } from '../db/bulk.js';
 import { openDatabase } from '../db/client.js';
 import { countAircraft } from '../db/repos/aircraft.js';
 import { seedDemoIfEmpty } from '../db/seed.js';
-import { commitCatalogue, commitCatalogueBulk, type ParsedCatalogue } from '../server/aircraft/catalogue.js';
+import { commitCatalogue, commitCatalogueBulk, type ParsedCatalogue } from '../server/aircraft/index.js';
 import { aircraftToCsv } from '../server/io/csv.js';
 import { workerJobs } from '../server/jobs/index.js';
 import { DEFAULT_BODY_LIMITS } from '../server/web/security.js';

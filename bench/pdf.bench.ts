@@ -11,7 +11,7 @@ import { fileURLToPath } from 'node:url';
 import type { BenchModule } from './harness.js';
 import { medianMs } from './harness.js';
 import { renderAppendixPdf } from '../server/pdf/index.js';
-import { parseStudyDocument, studyOutput } from '../server/studies/document.js';
+import { parseStudyDocument, studyOutput } from '../server/studies/index.js';
 
 const mod: BenchModule = {
   name: 'pdf',

@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { runStudy, type AircraftProfile, type StudyInput } from '../core/index.js';
-import { parseStudyDocument } from '../server/studies/document.js';
+import { parseStudyDocument } from '../server/studies/index.js';
 import { medianMs, type BenchModule } from './harness.js';
 
 function load(): StudyInput {

@@ -19,7 +19,7 @@ import { openDatabase, seedDemoIfEmpty } from '../db/index.js';
 import { createApp } from '../server/app.js';
 import { inlineJobs } from '../server/jobs/index.js';
 import { parseAll } from '../server/common/schema.js';
-import { studyFileSchema, studyInputOf } from '../server/studies/schema.js';
+import { studyFileSchema, studyInputOf } from '../server/studies/index.js';
 import type { BenchModule } from './harness.js';
 
 const DEMO = new URL('../examples/demo-study.json', import.meta.url);

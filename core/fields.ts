@@ -1,6 +1,6 @@
 /**
- * One range per input field of a study: the study-file and API schemas (server/schemas), the forms
- * (server/forms) and core's own checks all read these constants, so a value the edge accepts is never
+ * One range per input field of a study: the study-file and API schemas (the features' schema.ts files), the forms
+ * (the features' form.ts files) and core's own checks all read these constants, so a value the edge accepts is never
  * refused by the engine, and both say the same thing when it is out of range. Aircraft profile fields
  * have their ranges in `AIRCRAFT_FIELDS` and `CRUISE_FIELDS` (core/aircraft.ts).
  *

@@ -2,7 +2,7 @@
  * The one definition of each study option (and, below, of each numeric site, climate, runway and
  * fleet field): its path in the study file, the name of its form field,
  * label, help, kind (display unit, choice or text), range or choices, and default. The study file's
- * zod schema (server/studies/schema.ts), the study form's labels and hints (templates/pages/studies.tsx)
+ * zod schema (server/studies/schema.ts), the study form's labels and hints (templates/studies/pages.tsx)
  * and the appendix's input listing (core/report/model.ts) are derived from this table, and a test
  * checks that every option of a study appears in the listing. Ranges come from core/fields.ts; the
  * aircraft's own table is AIRCRAFT_FIELDS (core/aircraft.ts).

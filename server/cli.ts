@@ -9,10 +9,10 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { InputDomainError, type UnitSystem } from '../core/index.js';
-import { resultsCsv } from './studies/resultsCsv.js';
+import { resultsCsv } from './studies/index.js';
 import { jsonDepthExcess, jsonDepthMessage } from './io/text.js';
 import { formatProblem } from './common/schema.js';
-import { parseStudyDocument, problemFromDomainError, studyOutput, type StudyOutput } from './studies/document.js';
+import { parseStudyDocument, problemFromDomainError, studyOutput, type StudyOutput } from './studies/index.js';
 
 export const USAGE = 'usage: npm run study -- <study.json> [--format json|csv|pdf] [--out FILE] [--units si|us] [--date YYYY-MM-DD]';
 

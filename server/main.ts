@@ -12,7 +12,7 @@ import { createApp } from './app.js';
 import { readServerConfig, ConfigError } from './config.js';
 import { workerJobs } from './jobs/index.js';
 import { LoopMonitor } from './web/loop.js';
-import { parseStudyDocument } from './studies/document.js';
+import { parseStudyDocument } from './studies/index.js';
 
 function fail(message: string): never {
   console.error(message);

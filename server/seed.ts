@@ -4,7 +4,7 @@
  */
 import { loadStudyInput, saveStudyResult, seedDemoIfEmpty, type Db } from '../db/index.js';
 import type { StudyInput } from '../core/index.js';
-import { studyOutput } from './studies/document.js';
+import { studyOutput } from './studies/index.js';
 
 export function seedDemoWithResults(db: Db, demo: StudyInput, now: Date): ReturnType<typeof seedDemoIfEmpty> {
   const seeded = seedDemoIfEmpty(db, demo);

@@ -3,7 +3,7 @@
  * directions (declared distances). A site is read and written whole (`SiteInput` of core), in one
  * transaction; lists keep their order. Deleting a site that a study uses is refused (SiteInUseError).
  *
- * Values are SI and are expected to have been validated at the edge (server/schemas); the database's
+ * Values are SI and are expected to have been validated at the edge (the features' schema.ts files); the database's
  * own constraints (months 1–12, foreign keys) are the last guard.
  */
 import { asc, eq, inArray, sql } from 'drizzle-orm';

@@ -5,7 +5,7 @@
  * reference code, approach category, design group). A profile the models cannot classify gets a note
  * instead of figures.
  */
-import type { AircraftFiguresView } from '../../templates/pages/aircraft.js';
+import type { AircraftFiguresView } from '../../templates/aircraft/index.js';
 import {
   InputDomainError, analyseTakeoff, classifyAircraft, referenceLandingSpeed, type AircraftProfile,
 } from '../../core/index.js';

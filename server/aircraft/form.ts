@@ -8,12 +8,11 @@ import {
   CERTIFICATION_BASES, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
   type AircraftProfile, type EngineType, type UnitSystem,
 } from '../../core/index.js';
-import { AIRCRAFT_FORM_FIELDS, type AircraftFormField } from '../../templates/aircraftFields.js';
+import { AIRCRAFT_FORM_FIELDS, type AircraftFormField } from '../../templates/aircraft/index.js';
 import { aircraftSchema } from './schema.js';
 import { ident } from '../common/schema.js';
-import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
+import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormResult, type FormValues } from '../common/formFields.js';
 
-export type FormResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly errors: FieldErrors };
 
 function requiredFor(f: AircraftFormField, ctx: { engineType?: EngineType; gear?: string; engineCount?: number; hasCruise: boolean }): boolean {
   if (f.section === 'route') {

@@ -14,16 +14,16 @@ import { AircraftInUseError, DuplicateIdError } from '../../db/errors.js';
 import type { Db } from '../../db/types.js';
 import {
   AircraftDetailPage, AircraftFormPage, AircraftListPage, AircraftResults, aircraftFormValues,
-} from '../../templates/pages/aircraft.js';
+} from '../../templates/aircraft/index.js';
 import { IDS } from '../../templates/ids.js';
-import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
-import { AircraftChoices } from '../../templates/pages/studies.js';
-import { WhatIfResult } from '../../templates/whatif.js';
+import { ConfirmDeletePage } from '../../templates/confirm.js';
+import { AircraftChoices } from '../../templates/studies/index.js';
+import { WhatIfResult } from '../../templates/whatif/index.js';
 import { aircraftFigures } from './figures.js';
 import { commitCatalogue, commitCatalogueBulk, exportAircraftJson } from './catalogue.js';
 import { readAircraftForm } from './form.js';
 import { formValues, type FormValues } from '../common/formFields.js';
-import type { WhatIfConditions } from '../whatif/form.js';
+import type { WhatIfConditions } from '../whatif/index.js';
 import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportAircraftCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';

@@ -1,7 +1,7 @@
 /**
  * Form edge: raw strings in the user's unit system in, SI numbers out, with field errors that name the
  * value and the allowed range in the unit the user typed. A blank field is missing, never zero.
- * The zod schemas (server/schemas) then check the converted object; their messages, written in SI,
+ * The zod schemas (the features' schema.ts files) then check the converted object; their messages, written in SI,
  * are restated in the user's units by `localiseMessage`.
  */
 import { displayLimit as fmtLimit, unitOf, type DisplayKind, type UnitSystem } from '../../core/index.js';
@@ -10,6 +10,9 @@ import { displayLimit as fmtLimit, unitOf, type DisplayKind, type UnitSystem } f
 export type FormValues = Readonly<Record<string, string>>;
 /** Field name → message. */
 export type FieldErrors = Record<string, string>;
+
+/** What a form reader gives: the parsed value, or the problems by field name (nothing is saved from a failed form). */
+export type FormResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly errors: FieldErrors };
 
 /** Reads a parsed form body (hono `parseBody`) into plain strings; files are left out. */
 export function formValues(body: Record<string, unknown>): Record<string, string> {

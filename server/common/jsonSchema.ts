@@ -1,6 +1,6 @@
 /** JSON Schema (draft 2020-12) of the study file, generated from the zod schema (input side). */
 import { z } from 'zod';
-import { studyFileSchema } from '../studies/schema.js';
+import { studyFileSchema } from '../studies/index.js';
 
 export function studyJsonSchema(): Record<string, unknown> {
   const schema = z.toJSONSchema(studyFileSchema, { io: 'input', unrepresentable: 'any' }) as Record<string, unknown>;

@@ -3,7 +3,7 @@
  * zod is the edge converter: raw values in, SI core input out. A blank is "missing", never zero.
  */
 import { z } from 'zod';
-import { IDENTIFIER_PATTERN, IDENTIFIER_RULE, InputDomainError, domainProblemText, formatValue } from '../../core/index.js';
+import { IDENTIFIER_PATTERN, IDENTIFIER_RULE, InputDomainError, domainProblemText, formatValue, type InputFieldSpec } from '../../core/index.js';
 
 /**
  * A short, safe rendering of a received value for messages: strings cut to 60 characters, lists and
@@ -169,4 +169,14 @@ export function parseAll<S extends z.ZodType>(schema: S, data: unknown):
   { ok: true; value: z.output<S> } | { ok: false; problems: Problem[] } {
   const r = schema.safeParse(data, { reportInput: true });
   return r.success ? { ok: true, value: r.data } : { ok: false, problems: problemsFrom(r.error) };
+}
+
+export const intIn = (r: { readonly min: number; readonly max: number; readonly unit: string }) => int(r.min, r.max, r.unit);
+
+/** The zod members of a table of numeric input fields (core/studyFields.ts): range, whole number, optional, help. */
+export function fieldMembers(table: readonly InputFieldSpec[]): Record<string, z.ZodType> {
+  return Object.fromEntries(table.map((f) => {
+    const t = (f.integer ? intIn(f.range) : numIn(f.range)).meta({ description: `${f.help} Allowed ${f.range.min} to ${f.range.max}${f.range.unit ? ` ${f.range.unit}` : ''}.` });
+    return [f.key, f.optional ? t.optional() : t];
+  }));
 }

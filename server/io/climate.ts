@@ -26,7 +26,7 @@ import { getSite, setSiteClimate } from '../../db/repos/sites.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
 import { formatPath } from '../common/schema.js';
-import { climateSchema } from '../studies/schema.js';
+import { climateSchema } from '../sites/index.js';
 import { ImportError } from './errors.js';
 import { decodeUtf8 } from './text.js';
 

@@ -27,9 +27,10 @@ import { allStudyResults, createStudy, getStudy, listStudyIds, saveStudyResult }
 import { savedResults, scenarios, sites, studies, aircraft as aircraftTable } from '../../db/schema.js';
 import { transaction } from '../../db/transaction.js';
 import type { Db } from '../../db/types.js';
-import { aircraftSchema } from '../aircraft/schema.js';
+import { aircraftSchema } from '../aircraft/index.js';
 import { formatPath, int, text } from '../common/schema.js';
-import { climateSchema, fleetRowSchema, optionsSchema, runwaySchema, scenarioSchema, siteSchema } from '../studies/schema.js';
+import { climateSchema, runwaySchema, siteSchema } from '../sites/index.js';
+import { fleetRowSchema, optionsSchema, scenarioSchema } from '../studies/index.js';
 import { ImportError, MAX_PROBLEMS, type ImportProblem } from './errors.js';
 import { decodeUtf8, locateJsonPath, parseJsonText } from './text.js';
 

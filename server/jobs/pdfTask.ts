@@ -9,7 +9,7 @@
  */
 import type { StudyInput, UnitSystem } from '../../core/index.js';
 import { renderAppendixPdf } from '../pdf/render.js';
-import type { StudyOutput } from '../studies/document.js';
+import type { StudyOutput } from '../studies/index.js';
 
 export interface PdfTaskInput {
   readonly input: StudyInput;

@@ -9,12 +9,12 @@
  */
 import { ConvergenceError, InputDomainError, type DomainRange, type StudyInput } from '../../core/index.js';
 import { DuplicateIdError } from '../../db/errors.js';
-import { catalogueTransferList, parseAircraftJson, type ParsedCatalogue } from '../aircraft/catalogue.js';
+import { catalogueTransferList, parseAircraftJson, type ParsedCatalogue } from '../aircraft/index.js';
 import { parseAircraftCsv } from '../io/csv.js';
 import { readClimateFile, type ClimateFileInput, type ClimateFileResult } from '../io/climate.js';
 import { ImportError, type ImportProblem } from '../io/errors.js';
 import { pdfTransferList, renderPdfTask, type PdfTaskInput } from './pdfTask.js';
-import { studyOutput, type StudyOutput } from '../studies/document.js';
+import { studyOutput, type StudyOutput } from '../studies/index.js';
 
 export interface CatalogueParseTask {
   readonly format: 'csv' | 'json';

@@ -4,7 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { StudyInput, UnitSystem } from '../../core/index.js';
-import type { StudyOutput } from '../studies/document.js';
+import type { StudyOutput } from '../studies/index.js';
 import { renderAppendixPdf } from './render.js';
 
 export { renderAppendixPdf, appendixModel, issueDate, studyFileText, ATTACHMENT_NAME, LISTING_DIGITS } from './render.js';

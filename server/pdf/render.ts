@@ -21,7 +21,7 @@ import {
 } from '../../core/index.js';
 import { UNIT_SYSTEM_LABELS } from '../../templates/format.js';
 import { cellText, kindSymbol } from '../../templates/reportCells.js';
-import { canonicalJson, inputDigest, type StudyOutput } from '../studies/document.js';
+import { canonicalJson, inputDigest, type StudyOutput } from '../studies/index.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';
 import { FONT, registerFonts } from './fonts.js';
 import { drawText, pdfText, textHeight, textWidth } from './text.js';

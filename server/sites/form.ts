@@ -12,9 +12,9 @@ import {
   type MonthlyClimate, type ProfilePoint, type RunwayDirectionInput, type RunwayInput, type SiteClimate, type UnitSystem,
   unitOf,
 } from '../../core/index.js';
-import { climateSchema, runwaySchema } from '../studies/schema.js';
+import { climateSchema, runwaySchema } from './schema.js';
 import { numIn, text } from '../common/schema.js';
-import type { FormResult } from '../aircraft/form.js';
+import type { FormResult } from '../common/formFields.js';
 import { localiseMessage, parseTyped, rangeText, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export interface SiteFields {

@@ -12,11 +12,11 @@ import { NotFoundError, SiteInUseError } from '../../db/errors.js';
 import { createSite, deleteSite, getSite, listSites, setSiteClimate, siteInput, updateSite } from '../../db/repos/sites.js';
 import { listStudies } from '../../db/repos/studies.js';
 import type { Db } from '../../db/types.js';
-import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
+import { ConfirmDeletePage } from '../../templates/confirm.js';
 import {
   RunwayFormPage, SiteDetailPage, SiteFormPage, SitesListPage, runwayFormValues, siteFormValues,
   type DesignTemperatureView, type RunwayView,
-} from '../../templates/pages/sites.js';
+} from '../../templates/sites/index.js';
 import { formValues, type FormValues } from '../common/formFields.js';
 import { readRunwayForm, readSiteForm } from './form.js';
 import { CLIMATE_FILE_FORMATS, type ClimateFileFormat } from '../io/climate.js';

@@ -9,7 +9,7 @@ import {
 } from '../../core/index.js';
 import { optionsSchema } from './schema.js';
 import { ident } from '../common/schema.js';
-import type { FormResult } from '../aircraft/form.js';
+import type { FormResult } from '../common/formFields.js';
 import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export interface StudyFields {

@@ -13,19 +13,19 @@ import {
   addScenario, createStudy, deleteScenario, deleteStudy, getScenario, getStudy, listStudies, updateScenario, updateStudy,
 } from '../../db/repos/studies.js';
 import type { Db } from '../../db/types.js';
-import { ConfirmDeletePage } from '../../templates/pages/confirm.js';
-import { ProblemPage } from '../../templates/pages/errors.js';
-import { ComputePanel, ResultsContent, RowComponents } from '../../templates/pages/results.js';
+import { ConfirmDeletePage } from '../../templates/confirm.js';
+import { ProblemPage } from '../../templates/errors.js';
+import { ComputePanel, ResultsContent, RowComponents } from '../../templates/studies/index.js';
 import {
   ScenarioFormPage, StudiesListPage, StudyFormPage, StudyOverviewPage,
-} from '../../templates/pages/studies.js';
+} from '../../templates/studies/index.js';
 import { ViewContext } from '../../templates/view.js';
-import { WhatIfPanel, WhatIfResult } from '../../templates/whatif.js';
+import { WhatIfPanel, WhatIfResult } from '../../templates/whatif/index.js';
 import { resultsCsv } from './resultsCsv.js';
 import { formValues, type FormValues } from '../common/formFields.js';
 import { FLEET_SELECT_MAX, FLEET_SUGGESTIONS, pageOfList } from '../web/paging.js';
 import { newStudyValues, readScenarioForm, readStudyForm, scenarioFormValues, studyFormValues } from './form.js';
-import type { WhatIfConditions } from '../whatif/form.js';
+import type { WhatIfConditions } from '../whatif/index.js';
 import { whatIfPanel, type WhatIfPanelState } from '../whatif/index.js';
 import { exportFleetCsv, importFleetCsv } from '../io/csv.js';
 import { ImportError, formatProblem } from '../io/errors.js';

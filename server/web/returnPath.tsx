@@ -5,7 +5,7 @@
  * schemes) are normalised to a safe fallback by `safeBack` (server/web/page.tsx).
  */
 import type { Context } from 'hono';
-import { ProblemPage } from '../../templates/pages/errors.js';
+import { ProblemPage } from '../../templates/errors.js';
 import type { AppEnv } from './env.js';
 import { page } from './page.js';
 

@@ -2,7 +2,7 @@
 import type { Context } from 'hono';
 import type { UnitSystem } from '../../core/index.js';
 import { UNITS_FIELD } from '../../templates/components.js';
-import { NotFoundPage } from '../../templates/pages/errors.js';
+import { NotFoundPage } from '../../templates/errors.js';
 import type { FormValues } from '../common/formFields.js';
 import type { AppEnv } from './env.js';
 import { page, viewOf } from './page.js';

@@ -1,7 +1,7 @@
 /** What-if panel form: conditions typed in the user's units → SI what-if conditions. */
 import { SURFACES, TAKEOFF_INPUT_RANGES, unitOf, type AircraftProfile, type DisplayKind, type UnitSystem, type WhatIfConditions } from '../../core/index.js';
 import { readChoice, readNumber, type FieldErrors, type FormValues } from '../common/formFields.js';
-import type { FormResult } from '../aircraft/form.js';
+import type { FormResult } from '../common/formFields.js';
 
 export type { WhatIfConditions } from '../../core/index.js';
 

@@ -5,7 +5,7 @@
  * baseline, the same for every keystroke of a panel, is kept in a small cache (core's what-if is pure).
  */
 import { InputDomainError, whatIf, type AircraftProfile, type UnitSystem, type WhatIfConditions, type WhatIfInput, type WhatIfOutcome } from '../../core/index.js';
-import type { WhatIfProps } from '../../templates/whatif.js';
+import type { WhatIfProps } from '../../templates/whatif/index.js';
 import type { FormValues } from '../common/formFields.js';
 import { hasWhatIfFields, readWhatIfForm, startingConditions } from './form.js';
 import { Lru } from '../web/lru.js';

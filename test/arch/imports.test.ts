@@ -1,7 +1,8 @@
 /**
  * Dependency direction (DEVELOPERS.md, "Architecture"): core imports nothing outside core (and no
  * node: or package imports); templates never import db or server; db never imports server or
- * templates; nothing imports server except server itself, tests and bench.
+ * templates; nothing imports server except server itself, tests and bench; a feature folder (aircraft/,
+ * sites/, studies/, whatif/ in server and templates) is imported from outside only through its index.ts.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve, dirname, sep } from 'node:path';
@@ -84,6 +85,16 @@ describe('dependency direction (DEVELOPERS.md)', () => {
     const fmt = readFileSync(join(root, 'templates/format.ts'), 'utf8');
     expect(fmt).not.toMatch(/\bfrom:\s*\(|\bto:\s*\(|lin\(/);
     expect(readFileSync(join(root, 'core/units.ts'), 'utf8')).toMatch(/export function unitOf/);
+  });
+
+  it('a feature folder (server/ or templates/ aircraft, sites, studies, whatif) is imported from outside only through its index.ts', () => {
+    const feature = (path: string): string | undefined => /^(server|templates)\/(aircraft|sites|studies|whatif)\//.exec(path)?.[0];
+    const v = ['server', 'templates', 'db', 'bench', 'scripts'].flatMap((folder) =>
+      violations(folder, (t, file) => {
+        const f = t.path ? feature(t.path) : undefined;
+        return f && !file.startsWith(f) && t.path !== `${f}index.js` ? `import ${f} through ${f}index.ts` : undefined;
+      }));
+    expect(v).toEqual([]);
   });
 
   it('the rule checker finds a forbidden import when one exists', () => {

@@ -18,11 +18,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openDatabase, seedDemoIfEmpty, type DatabaseHandle } from '../../db/index.js';
 import { createApp } from '../../server/app.js';
 import { workerJobs, type JobRunner } from '../../server/jobs/index.js';
-import { AIRCRAFT_FORM_FIELDS } from '../../templates/aircraftFields.js';
-import { aircraftFormValues } from '../../templates/pages/aircraft.js';
+import { AIRCRAFT_FORM_FIELDS } from '../../templates/aircraft/fields.js';
+import { aircraftFormValues } from '../../templates/aircraft/pages.js';
 import { demoInput } from '../server/web/helpers.js';
 
-const SHOTS = new URL('../../screenshots/', import.meta.url).pathname;
+const SHOTS = new URL('../../screenshots', import.meta.url).pathname;
 
 let dir: string;
 let handle: DatabaseHandle;

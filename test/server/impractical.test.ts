@@ -11,7 +11,7 @@ import { runCli, type CliIo } from '../../server/cli.js';
 import { resultsCsv } from '../../server/studies/resultsCsv.js';
 import { parseStudyDocument, studyOutput, type StudyOutput } from '../../server/studies/document.js';
 import { whatIf } from '../../core/index.js';
-import { WhatIfResult } from '../../templates/whatif.js';
+import { WhatIfResult } from '../../templates/whatif/panel.js';
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from '../core/study/impractical.fixture.js';
 import { browser, makeApp } from './web/helpers.js';
 

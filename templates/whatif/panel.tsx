@@ -4,12 +4,12 @@
  * typed in is never replaced); field errors travel as out-of-band swaps. Without JavaScript the
  * "Update" button submits the same GET and the whole page comes back.
  */
-import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../core/index.js';
-import type { DisplayKind, WhatIfOutcome } from '../core/index.js';
-import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol } from './format.js';
-import { fieldId, type Errors, type Values } from './forms.js';
-import { IDS } from './ids.js';
-import { useView } from './view.js';
+import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../../core/index.js';
+import type { DisplayKind, WhatIfOutcome } from '../../core/index.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol } from '../format.js';
+import { fieldId, type Errors, type Values } from '../forms.js';
+import { IDS } from '../ids.js';
+import { useView } from '../view.js';
 
 /** What the panel shows: core's what-if outcome (core/whatif.ts). */
 export type WhatIfOutcomeView = WhatIfOutcome;

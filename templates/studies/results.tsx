@@ -12,7 +12,7 @@ import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtSlope } from '../format.js';
 import { IDS } from '../ids.js';
 import { cellText } from '../reportCells.js';
 import { useView } from '../view.js';
-import { UnitsNote } from './studies.js';
+import { UnitsNote } from './pages.js';
 
 const shortDigest = (d: string): string => `${d.slice(0, 12)}…`;
 

@@ -1,5 +1,5 @@
 /** Delete confirmation: a page that names what will go and posts only when the user confirms. */
-import { PostForm } from '../components.js';
+import { PostForm } from './components.js';
 
 export interface ConfirmDeleteProps {
   readonly what: string;

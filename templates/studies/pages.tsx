@@ -5,7 +5,7 @@ import { IDS } from '../ids.js';
 import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
 import { UNIT_SYSTEM_LABELS, fmt, fmtPct, unitSymbol } from '../format.js';
 import { useView } from '../view.js';
-import { WhatIfPanel, type WhatIfProps } from '../whatif.js';
+import { WhatIfPanel, type WhatIfProps } from '../whatif/index.js';
 import { ListPager, listCaption, type ListPaging } from '../pager.js';
 
 /** Fleet rows shown per scenario on the study overview (the scenario page shows them all). */

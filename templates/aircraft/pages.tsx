@@ -6,13 +6,13 @@ import {
   CERTIFICATION_BASES, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
   type AircraftProfile, type UnitSystem,
 } from '../../core/index.js';
-import { AIRCRAFT_FORM_FIELDS, AIRCRAFT_LABELS, AIRCRAFT_TEXT_FIELDS, FORM_SECTIONS } from '../aircraftFields.js';
+import { AIRCRAFT_FORM_FIELDS, AIRCRAFT_LABELS, AIRCRAFT_TEXT_FIELDS, FORM_SECTIONS } from './fields.js';
 import { ActionButton, Facts, ImportProblems, Notice, PostForm } from '../components.js';
 import { ErrorSummary, Field, Section, SelectField, type Errors, type Values } from '../forms.js';
 import { fmt, fmtInput, fmtLengthBoth } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
-import { WhatIfPanel, type WhatIfProps } from '../whatif.js';
+import { WhatIfPanel, type WhatIfProps } from '../whatif/index.js';
 import { Pager } from '../pager.js';
 
 /** Key figures of a catalogue aircraft (the server's computation, structurally). */

@@ -3,7 +3,7 @@
  * CRUISE_FIELDS) so that labels, units and ranges live in one place. Shared by the form template and
  * the server's form reader. Names are the profile's property paths (`cruise.speed_mps`).
  */
-import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type FieldGroup, type FieldSpec } from '../core/index.js';
+import { AIRCRAFT_FIELDS, CRUISE_FIELDS, type FieldGroup, type FieldSpec } from '../../core/index.js';
 
 export interface AircraftFormField extends FieldSpec {
   /** Form field name: the property path. */

@@ -1,5 +1,5 @@
 /** Start page and sign-in page. */
-import { CsrfInput } from '../layout.js';
+import { CsrfInput } from './layout.js';
 
 export function HomePage() {
   return (

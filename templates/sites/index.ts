@@ -1,0 +1,2 @@
+/** Site views: list, detail, site and runway form pages. */
+export * from './pages.js';

@@ -1,0 +1,2 @@
+/** The what-if panel and its result fragment. */
+export * from './panel.js';

@@ -38,6 +38,7 @@ import { brentRoot } from './numeric/index.js';
 import { analyseLanding, type LandingInput, type LandingResult } from './landing.js';
 import { InputDomainError } from './errors.js';
 import { check, finite, inRange } from './validate.js';
+import { notice, qty, type Notice } from './notices.js';
 
 export const CALIBRATION_METHOD_VERSION = 'calibration/1';
 
@@ -86,7 +87,7 @@ interface CalibrationCommon<P extends string> {
   readonly band: CalibrationBand;
   readonly methodVersion: string;
   readonly trace: readonly CalibrationTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface CalibrationOk<P extends string> extends CalibrationCommon<P> {
@@ -183,7 +184,7 @@ interface FitSpec<P extends string> {
   readonly length: (k: number) => number | undefined;
   readonly label: string;
   readonly trace: CalibrationTraceEntry[];
-  readonly warnings: string[];
+  readonly warnings: Notice[];
 }
 
 /** Fits the factor (shared by takeoff and landing). */
@@ -203,7 +204,7 @@ function fit<P extends string>(s: FitSpec<P>): CalibrationOk<P> | CalibrationRef
   const uncal = s.length(1);
   s.trace.push({ label: 'Reference length', value: ref, unit: 'm' });
   if (uncal !== undefined) s.trace.push({ label: 'Model length, uncalibrated (factor 1)', value: uncal, unit: 'm' });
-  else s.warnings.push('The uncalibrated model (factor 1) is infeasible at the reference condition.');
+  else s.warnings.push(notice('calibration.uncalibratedInfeasible')`The uncalibrated model (factor 1) is infeasible at the reference condition.`);
 
   const { min, max } = s.band;
   const lMin = s.length(min);
@@ -303,7 +304,7 @@ export function calibrateTakeoff(input: CalibrateTakeoffInput): TakeoffCalibrati
   const { value: ref, source } = referenceOf(input.reference_m, a.reference?.takeoff_m);
   const label = parameter === 'thrust' ? 'thrust scale' : 'CLmax scale';
   const trace: CalibrationTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   if (ref === undefined) {
     return {
       operation: 'takeoff', parameter, aircraftId: a.id, band, methodVersion: CALIBRATION_METHOD_VERSION, trace, warnings,
@@ -323,7 +324,7 @@ export function calibrateTakeoff(input: CalibrateTakeoffInput): TakeoffCalibrati
   if (out.status === 'ok') {
     const r = analyseTakeoff(referenceTakeoff(a, parameter, out.factor));
     if (r.feasible && r.climb.limited) {
-      warnings.push('At the reference condition the calibrated model is climb-limited at MTOW; the reference length is matched as a field length only.');
+      warnings.push(notice('calibration.climbLimitedAtReference')`At the reference condition the calibrated model is climb-limited at MTOW; the reference length is matched as a field length only.`);
     }
   }
   return out;
@@ -343,7 +344,7 @@ export function predictCalibrated(
   return {
     ...r,
     trace: [{ label: `Calibration: ${label}`, value: calibration.factor, unit: '' }, ...r.trace],
-    warnings: [...r.warnings, `Calibrated model: ${label} ${calibration.factor.toFixed(4)} fitted to the reference takeoff length ${calibration.reference_m.toFixed(0)} m.`],
+    warnings: [...r.warnings, notice('calibration.appliedTakeoff')`Calibrated model: ${label} ${calibration.factor.toFixed(4)} fitted to the reference takeoff length ${qty.length(calibration.reference_m)}.`],
   };
 }
 
@@ -384,7 +385,7 @@ export function calibrateLanding(input: CalibrateLandingInput): LandingCalibrati
   const band = { min: Math.max(requested.min, admissible.min), max: Math.min(requested.max, admissible.max) };
   const { value: ref, source } = referenceOf(input.reference_m, a.reference?.landing_m);
   const trace: CalibrationTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const base = { operation: 'landing' as const, parameter, aircraftId: a.id, methodVersion: CALIBRATION_METHOD_VERSION, trace, warnings };
   if (ref === undefined) {
     return {
@@ -399,7 +400,7 @@ export function calibrateLanding(input: CalibrateLandingInput): LandingCalibrati
     };
   }
   if (band.min > requested.min || band.max < requested.max) {
-    warnings.push(`The band was narrowed to ${band.min.toFixed(3)}–${band.max.toFixed(3)} to keep the scaled braking friction inside its valid range.`);
+    warnings.push(notice('calibration.bandNarrowed')`The band was narrowed to ${band.min.toFixed(3)}–${band.max.toFixed(3)} to keep the scaled braking friction inside its valid range.`);
   }
   const length = (k: number): number | undefined => {
     const r = analyseLanding({ aircraft: scaledBrakingProfile(a, k), mass_kg: a.mlw_kg, ...LANDING_REFERENCE_CONDITION });
@@ -422,6 +423,6 @@ export function predictCalibratedLanding(
     throw new InputDomainError('calibration.aircraftId', calibration.aircraftId, `the id of the aircraft analysed (${rest.aircraft.id})`);
   }
   const r = analyseLanding({ ...rest, aircraft: scaledBrakingProfile(rest.aircraft, calibration.factor) });
-  const note = `Calibrated model: braking factor ${calibration.factor.toFixed(4)} fitted to the reference landing length ${calibration.reference_m.toFixed(0)} m.`;
+  const note = notice('calibration.appliedLanding')`Calibrated model: braking factor ${calibration.factor.toFixed(4)} fitted to the reference landing length ${qty.length(calibration.reference_m)}.`;
   return { ...r, warnings: [...r.warnings, note] };
 }

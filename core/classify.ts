@@ -21,6 +21,7 @@
 import type { AircraftProfile } from './aircraft.js';
 import { FT, KT } from './units.js';
 import { inRange } from './validate.js';
+import { notice, qty, type Notice } from './notices.js';
 
 export const CLASSIFY_METHOD_VERSION = 'classification/1';
 
@@ -111,7 +112,7 @@ export interface AircraftClassification {
   /** E.g. "C-III". */
   readonly runwayDesignCode: string | null;
   readonly trace: readonly { readonly label: string; readonly value: number; readonly unit: string }[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
   readonly methodVersion: string;
 }
 
@@ -127,14 +128,14 @@ export function classifyAircraft(
   const codeLetter = aerodromeCodeLetter(aircraft.wingspan_m);
   const category = approachCategory(basis.vref_mps);
   const adg = airplaneDesignGroup({ tailHeight_m: aircraft.tailHeight_m, wingspan_m: aircraft.wingspan_m });
-  const warnings: string[] = [];
-  if (codeLetter === null) warnings.push(`Wingspan ${aircraft.wingspan_m} m is 80 m or more: beyond code letter F.`);
-  if (adg.group === null) warnings.push('Tail height or wingspan beyond airplane design group VI.');
+  const warnings: Notice[] = [];
+  if (codeLetter === null) warnings.push(notice('classify.beyondCodeF')`Wingspan ${qty.shortLength(aircraft.wingspan_m, 1)} is 80 m (ICAO code letter limit) or more: beyond code letter F.`);
+  if (adg.group === null) warnings.push(notice('classify.beyondAdgVI')`Tail height or wingspan beyond airplane design group VI.`);
   if (basis.vref_mps > VREF_PLAUSIBLE_MAX_MPS) {
-    warnings.push(`VREF at maximum landing mass is ${basis.vref_mps.toFixed(1)} m/s (${(basis.vref_mps / KT).toFixed(0)} kt), above the ${VREF_PLAUSIBLE_MAX_MPS} m/s of any transport aeroplane: check the profile's landing mass, wing area and CLmax (approach category E is open-ended).`);
+    warnings.push(notice('classify.vrefImplausible')`VREF at maximum landing mass is ${qty.speed(basis.vref_mps)}, above the ${qty.speed(VREF_PLAUSIBLE_MAX_MPS)} of any transport aeroplane: check the profile's landing mass, wing area and CLmax (approach category E is open-ended).`);
   }
   if (basis.arfl_m > ARFL_PLAUSIBLE_MAX_M) {
-    warnings.push(`The aeroplane reference field length is ${Math.round(basis.arfl_m)} m, above ${ARFL_PLAUSIBLE_MAX_M} m: check the profile (code number 4 is open-ended).`);
+    warnings.push(notice('classify.arflImplausible')`The aeroplane reference field length is ${qty.length(basis.arfl_m)}, above ${qty.length(ARFL_PLAUSIBLE_MAX_M)}: check the profile (code number 4 is open-ended).`);
   }
   return {
     codeNumber,

@@ -28,6 +28,7 @@ import type { EngineType } from './aircraft.js';
 import { standardTemperatureC } from './atmosphere.js';
 import { RUNWAY_EFFECTIVE_GRADIENT_RANGE } from './fields.js';
 import { check, inRange } from './validate.js';
+import { notice, type Notice } from './notices.js';
 
 export const CORRECTIONS_METHOD_VERSION = 'corrections/1';
 
@@ -89,7 +90,7 @@ export interface CorrectionResult {
   readonly specificStudyRequired: boolean;
   /** "indicative — specific study required" when flagged. */
   readonly label?: string;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
   readonly methodVersion: string;
 }
 
@@ -140,7 +141,7 @@ export function icaoCorrections(input: IcaoCorrectionInput): CorrectionResult {
   const threshold = input.slopeThreshold_m === undefined
     ? ICAO_SLOPE_THRESHOLD_M
     : inRange('slopeThreshold_m', input.slopeThreshold_m, { min: 0, max: 6000, unit: 'm' });
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const steps: CorrectionStep[] = [];
 
   // 1. Elevation. Below sea level no reduction is taken (project choice, conservative).
@@ -174,7 +175,7 @@ export function icaoCorrections(input: IcaoCorrectionInput): CorrectionResult {
   // A tiny tolerance keeps an exact 35 % (e.g. 1500 m elevation at standard temperature) unflagged.
   const flagged = etFraction > ICAO_SPECIFIC_STUDY_LIMIT + FLAG_TOLERANCE;
   if (flagged) {
-    warnings.push(`Elevation and temperature corrections together add ${pct(etFraction)} (> 35 %): the percentage rule is indicative only; a specific study is required.`);
+    warnings.push(notice('corrections.beyond35Percent')`Elevation and temperature corrections together add ${pct(etFraction)} (> 35 %): the percentage rule is indicative only; a specific study is required.`);
   }
   return {
     set: 'icao', operation, basicLength_m: l0, corrected_m: l, steps,
@@ -184,8 +185,8 @@ export function icaoCorrections(input: IcaoCorrectionInput): CorrectionResult {
   };
 }
 
-export const LEGACY_SLOPE_WARNING =
-  'Legacy 20 %/1 % slope rule: about twice the measured effect on jet transports; shown for comparison only.';
+export const LEGACY_SLOPE_WARNING: Notice =
+  notice('corrections.legacySlopeRule')`Legacy 20 %/1 % slope rule: about twice the measured effect on jet transports; shown for comparison only.`;
 
 export interface IcaoSlopeInput {
   /** Length the step multiplies (already corrected for elevation and temperature), m. */
@@ -239,7 +240,7 @@ export function authorityAdjustments(input: AuthorityAdjustmentInput): Correctio
   const l0 = inRange('length_m', input.length_m, LENGTH_RANGE);
   check(input.operation === 'takeoff' || input.operation === 'landing', 'operation', input.operation, 'one of takeoff, landing');
   const steps: CorrectionStep[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   let l = l0;
   if (input.operation === 'takeoff') {
     const dh = inRange('centrelineDifference_m', input.centrelineDifference_m ?? 0, { min: 0, max: 100, unit: 'm' });

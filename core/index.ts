@@ -1,4 +1,5 @@
 export * from './errors.js';
+export * from './notices.js';
 export * from './validate.js';
 export * from './numeric/index.js';
 export * from './fields.js';

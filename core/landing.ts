@@ -31,6 +31,7 @@
  * Validity: pressure altitude −400 to 4 500 m, temperature −60 to 60 °C, slope −5 % to +5 %,
  * headwind −15 (tailwind) to 40 m/s, landing mass from OEW to MTOW. Pure: SI only, no rounding.
  */
+import { notice, qty, type Notice } from './notices.js';
 import { type AircraftProfile, type EngineType, stallSpeed, validateAircraft } from './aircraft.js';
 import { airAt, standardTemperatureC } from './atmosphere.js';
 import { SURFACES, type Surface, friction, isWet } from './surface.js';
@@ -186,7 +187,7 @@ export interface LandingConditions {
 
 interface Common {
   readonly trace: readonly LandingTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
   /** Model assumptions stated with every result. */
   readonly assumptions: readonly string[];
   readonly methodVersion: string;
@@ -555,7 +556,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
   const air = airAt(pa, tC);
   const rho = air.density_kgm3;
   const W = mass * G0;
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const assumptions: string[] = [
     'Reverse thrust is not credited.',
     `Idle thrust held constant during the ground run (${a.engineType === 'turbofan' ? 'static thrust' : 'momentum-theory static thrust'} × idle fraction).`,
@@ -575,11 +576,11 @@ export function analyseLanding(input: LandingInput): LandingResult {
   put('density', 'Air density', rho, 'kg/m³');
   put('densityAltitude', 'Density altitude', air.densityAltitude_m, 'm');
   put('mass', 'Landing mass', mass, 'kg');
-  if (mass > a.mlw_kg) warnings.push(`Landing mass ${mass} kg exceeds MLW (${a.mlw_kg} kg): overweight landing.`);
+  if (mass > a.mlw_kg) warnings.push(notice('landing.overweight')`Landing mass ${qty.mass(mass)} exceeds MLW (${qty.mass(a.mlw_kg)}): overweight landing.`);
   if (input.temperature_c !== undefined && Math.abs(air.isaDeviation_k) > 1e-9) {
-    warnings.push('Certified landing data are scheduled for standard temperature (14 CFR 25.125(a)); the non-standard temperature here is a planning option.');
+    warnings.push(notice('landing.nonStandardTemperature')`Certified landing data are scheduled for standard temperature (14 CFR 25.125(a)); the non-standard temperature here is a planning option.`);
   }
-  if (-vw > TAILWIND_WARNING_MPS) warnings.push(`Tailwind ${(-vw).toFixed(1)} m/s exceeds 10 kt, beyond the usual certified limit (from memory).`);
+  if (-vw > TAILWIND_WARNING_MPS) warnings.push(notice('landing.tailwind')`Tailwind ${qty.speed(-vw, 1)} exceeds 10 kt, beyond the usual certified limit (from memory).`);
 
   // Speeds.
   const vsr0 = stallSpeed(mass, rho, a.wingArea_m2, a.clMaxLanding, G0);
@@ -588,7 +589,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
   let vrefNote = vrefBasis === 'profile' ? `${a.vrefFactor} × VSR0` : '1.3 × VS';
   if (transportCat && va < TRANSPORT_VREF_MIN_FACTOR * vsr0) {
     // 14 CFR 25.125(b)(2)(i): VREF not less than 1.23 VSR0.
-    warnings.push(`VREF raised from ${(va / vsr0).toFixed(3)} VSR0 to ${TRANSPORT_VREF_MIN_FACTOR} VSR0, the transport-category minimum (14 CFR 25.125(b)(2)(i)).`);
+    warnings.push(notice('landing.vrefRaised')`VREF raised from ${(va / vsr0).toFixed(3)} VSR0 to ${TRANSPORT_VREF_MIN_FACTOR} VSR0, the transport-category minimum (14 CFR 25.125(b)(2)(i)).`);
     va = TRANSPORT_VREF_MIN_FACTOR * vsr0;
     vrefNote = `${TRANSPORT_VREF_MIN_FACTOR} × VSR0 (raised to the 25.125(b) minimum)`;
   }
@@ -628,7 +629,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
   } else {
     sAair = 0;
     sFair = Math.sqrt(R * R - (R - LANDING_SCREEN_HEIGHT_M) ** 2);
-    warnings.push(`Flare height ${hf.toFixed(1)} m exceeds the 15.24 m screen height: the flare starts above 50 ft.`);
+    warnings.push(notice('landing.flareAboveScreen')`Flare height ${qty.shortLength(hf, 1)} exceeds the screen height (${qty.shortLength(LANDING_SCREEN_HEIGHT_M, 1)}): the flare starts above 50 ft.`);
   }
   const sA = sAair * ((va - vw) / va);
   const sF = sFair * ((vf - vw) / vf);
@@ -703,7 +704,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
   }
   assumptions.push(`Landing factor: ${req.source}.`);
   if (req.governedBy === 'surface-distance') {
-    warnings.push(`The unfactored distance on the ${surface} surface (${distance.toFixed(0)} m) exceeds the rule length (${req.byRule_m.toFixed(0)} m) and governs.`);
+    warnings.push(notice('landing.surfaceDistanceGoverns')`The unfactored distance on the ${surface} surface (${qty.length(distance)}) exceeds the rule length (${qty.length(req.byRule_m)}) and governs.`);
   }
   put('multiplier', `Rule multiplier (${req.ruleSet}, ${rule})`, multiplier, '', req.source);
   put('required', 'Required landing runway', required, 'm');

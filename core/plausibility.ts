@@ -29,6 +29,7 @@
  *
  * Pure; no rounding.
  */
+import { notice, qty, siText, type Notice } from './notices.js';
 import type { AircraftProfile } from './aircraft.js';
 import { analyseTakeoff } from './takeoff/index.js';
 import type { TakeoffResult } from './takeoff/types.js';
@@ -124,8 +125,10 @@ export interface PlausibilityFinding {
   readonly value_m: number;
   readonly bound_m: number;
   readonly basis: PlausibilityBound['basis'];
-  /** Plain-words reason for the page, the CSV, the JSON and the report. */
+  /** Plain-words reason, SI text. */
   readonly reason: string;
+  /** The same reason as a notice, rendered in the reader's units on the page, the CSV, the JSON and the report. */
+  readonly notice: Notice;
 }
 
 export interface PlausibilityContext {
@@ -136,12 +139,13 @@ export interface PlausibilityContext {
   readonly mass_kg?: number;
 }
 
-/** Reason text for a distance beyond the bound. */
-export function impracticalReason(what: string, value_m: number, bound: PlausibilityBound, ctx: PlausibilityContext): string {
-  const at = `at ${thousands(ctx.elevation_m)} m / ${Number(ctx.temperature_c.toFixed(1))} °C${ctx.mass_kg === undefined ? '' : ` and ${thousands(ctx.mass_kg)} kg`}`;
-  const needs = Number.isFinite(value_m) ? `${thousands(value_m)} m` : 'an unbounded length';
-  return `This aircraft cannot practically operate here: the ${what} needs ${needs} ${at}, ` +
-    `more than the plausibility bound of ${bound.label}. The model is at the edge of the aircraft's climb or thrust capability, where the length is not meaningful; a lighter mass or cooler conditions are needed.`;
+const withReason = (n: Notice): { reason: string; notice: Notice } => ({ reason: siText(n), notice: n });
+
+/** Reason for a distance beyond the bound. */
+export function impracticalReason(what: string, value_m: number, bound: PlausibilityBound, ctx: PlausibilityContext): Notice {
+  const needs = Number.isFinite(value_m) ? qty.length(value_m) : 'an unbounded length';
+  const mass = ctx.mass_kg === undefined ? '' : notice('plausibility.atMass')` and ${qty.mass(ctx.mass_kg)}`;
+  return notice('plausibility.impractical')`This aircraft cannot practically operate here: the ${what} needs ${needs} at ${qty.altitude(ctx.elevation_m)} / ${qty.temperature(ctx.temperature_c)}${mass}, more than the plausibility bound of ${bound.label}. The model is at the edge of the aircraft's climb or thrust capability, where the length is not meaningful; a lighter mass or cooler conditions are needed.`;
 }
 
 /**
@@ -154,7 +158,7 @@ export function checkPlausibility(distances: readonly CheckedDistance[], bound: 
   if (!worst) return undefined;
   return {
     what: worst.what, value_m: worst.value_m, bound_m: bound.bound_m, basis: bound.basis,
-    reason: impracticalReason(worst.what, worst.value_m, bound, ctx),
+    ...withReason(impracticalReason(worst.what, worst.value_m, bound, ctx)),
   };
 }
 

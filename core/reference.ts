@@ -25,6 +25,7 @@ import {
   type CorrectionResult, type CorrectionStep, type LengthOperation, type SlopeRule,
 } from './corrections.js';
 import { check, inRange } from './validate.js';
+import type { Notice } from './notices.js';
 
 export const REFERENCE_METHOD_VERSION = 'reference-length/1';
 
@@ -67,7 +68,7 @@ export type ReferenceLengthResult =
     readonly steps: readonly CorrectionStep[];
     readonly specificStudyRequired: boolean;
     readonly label?: string;
-    readonly warnings: readonly string[];
+    readonly warnings: readonly Notice[];
     readonly methodVersion: string;
   }
   | {
@@ -92,7 +93,7 @@ export function referenceLengthAtSite(input: ReferenceLengthInput): ReferenceLen
   }
   const site = input.site;
   const steps: CorrectionStep[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   let icao: CorrectionResult;
   if (input.set === 'icao') {
     icao = icaoCorrections({
@@ -277,7 +278,7 @@ export type ReferenceTableResult =
     readonly length_m: number;
     readonly corners: readonly ReferenceTableCorner[];
     readonly steps: readonly CorrectionStep[];
-    readonly warnings: readonly string[];
+    readonly warnings: readonly Notice[];
     readonly methodVersion: string;
   }
   | Extract<ReferenceTableLookup, { status: 'outside-data' }>
@@ -298,7 +299,7 @@ export function referenceTableAtSite(input: ReferenceTableInput): ReferenceTable
   if (look.status !== 'ok') return look;
   const l = look.length_m;
   let steps: readonly CorrectionStep[];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   if (input.set === 'icao') {
     const g = inRange('site.effectiveGradient', site.effectiveGradient, { min: 0, max: 0.05, unit: '' });
     // The table already holds elevation and temperature: only the slope step, with the

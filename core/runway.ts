@@ -25,6 +25,7 @@
 import { InputDomainError } from './errors.js';
 import { RUNWAY_EFFECTIVE_GRADIENT_RANGE, RUNWAY_SLOPE_RANGE } from './fields.js';
 import { check, inRange } from './validate.js';
+import { notice, qty, type Notice } from './notices.js';
 
 
 /** One takeoff/landing direction of a runway with its declared distances, m. */
@@ -117,7 +118,7 @@ export interface RunwayProfileResult {
   readonly maxDeviationFromEndLine_m: number;
   readonly limits: ProfileLimits;
   readonly trace: readonly RunwayTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /**
@@ -235,19 +236,14 @@ export function analyseRunwayProfile(input: RunwayProfileInput): RunwayProfileRe
   };
 
   const limits = profileLimits(input.codeNumber);
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const codeText = input.codeNumber === undefined ? 'any code number' : `code ${input.codeNumber}`;
   if (effective > limits.maxEffectiveGradient + SLOPE_COMPARE_TOLERANCE) {
-    warnings.push(
-      `Effective gradient ${pct(effective)} is above the ICAO maximum of ${pct(limits.maxEffectiveGradient)} for ${codeText}; check the profile and its units.`,
-    );
+    warnings.push(notice('runway.effectiveGradientAboveMax')`Effective gradient ${pct(effective)} is above the ICAO maximum of ${pct(limits.maxEffectiveGradient)} for ${codeText}; check the profile and its units.`);
   }
   const steepOnes = segments.filter((s) => Math.abs(s.slope) > limits.maxLongitudinalSlope + SLOPE_COMPARE_TOLERANCE);
   if (steepOnes.length > 0) {
-    warnings.push(
-      `${steepOnes.length} stretch(es) steeper than the ICAO longitudinal maximum of ${pct(limits.maxLongitudinalSlope)} for ${codeText} ` +
-        `(steepest ${pct(Math.abs(steepest.slope))} between chainage ${steepest.fromChainage_m} m and ${steepest.toChainage_m} m).`,
-    );
+    warnings.push(notice('runway.steepStretches')`${steepOnes.length} stretch(es) steeper than the ICAO longitudinal maximum of ${pct(limits.maxLongitudinalSlope)} for ${codeText} (steepest ${pct(Math.abs(steepest.slope))} between chainage ${qty.length(steepest.fromChainage_m)} and ${qty.length(steepest.toChainage_m)}).`);
   }
   if (limits.maxEndQuarterSlope !== undefined) {
     const q1 = start.chainage_m + length / 4;
@@ -256,9 +252,7 @@ export function analyseRunwayProfile(input: RunwayProfileInput): RunwayProfileRe
       (s) => (s.fromChainage_m < q1 || s.toChainage_m > q3) && Math.abs(s.slope) > (limits.maxEndQuarterSlope as number) + SLOPE_COMPARE_TOLERANCE,
     );
     if (endSteep.length > 0) {
-      warnings.push(
-        `${endSteep.length} stretch(es) in the first or last quarter steeper than ${pct(limits.maxEndQuarterSlope)} (ICAO, code 4).`,
-      );
+      warnings.push(notice('runway.steepEndQuarter')`${endSteep.length} stretch(es) in the first or last quarter steeper than ${pct(limits.maxEndQuarterSlope)} (ICAO, code 4).`);
     }
   }
 
@@ -315,7 +309,7 @@ export interface DeclaredDistancesResult extends DeclaredDistancesInput {
   /** TODA − TORA, m. */
   readonly clearway_m: number;
   readonly trace: readonly RunwayTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export const DECLARED_DISTANCE_RANGE = { min: 0, minInclusive: false, max: 6000, unit: 'm' } as const;
@@ -347,11 +341,9 @@ function declared(input: DeclaredDistancesInput, path: string): DeclaredDistance
     `at most TORA + ${MAX_CLEARWAY_FRACTION_OF_TORA * 100} % of TORA (${tora * (1 + MAX_CLEARWAY_FRACTION_OF_TORA)} m): ` +
       'a clearway should not exceed half the take-off run available (ICAO Annex 14 recommendation, from memory)',
   );
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   if (lda > tora) {
-    warnings.push(
-      `${designator}: LDA ${lda} m is longer than TORA ${tora} m; this happens only when the take-off run is shortened by declared-distance reductions — check.`,
-    );
+    warnings.push(notice('runway.ldaAboveTora')`${designator}: LDA ${qty.length(lda)} is longer than TORA ${qty.length(tora)}; this happens only when the take-off run is shortened by declared-distance reductions — check.`);
   }
   return {
     designator,
@@ -376,7 +368,7 @@ export function checkDeclaredDistances(input: DeclaredDistancesInput): DeclaredD
 
 export interface RunwayDeclaredDistancesResult {
   readonly directions: readonly DeclaredDistancesResult[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** True when two designators are the two ends of one runway (numbers 18 apart, L↔R, C↔C, none↔none). */
@@ -407,7 +399,7 @@ export function checkRunwayDeclaredDistances(input: { readonly directions: reado
       throw new InputDomainError('directions[1].designator', b.designator, `a designator other than directions[0] (${a.designator})`);
     }
     if (!areReciprocal(a.designator, b.designator)) {
-      warnings.push(`${a.designator} and ${b.designator} are not the two ends of one runway (designators should differ by 18).`);
+      warnings.push(notice('runway.notReciprocal')`${a.designator} and ${b.designator} are not the two ends of one runway (designators should differ by 18).`);
     }
   }
   return { directions: results, warnings };

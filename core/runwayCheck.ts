@@ -58,6 +58,7 @@ import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, withinP
 import { FT } from './units.js';
 import { standardTemperatureC } from './atmosphere.js';
 import { check, finite, inRange } from './validate.js';
+import { notice, qty, type Notice } from './notices.js';
 
 
 /** The check of one runway direction at the design masses, as a study row stores it. */
@@ -159,7 +160,7 @@ export interface FieldLengthComponents {
   /** FL − (FS + SW + CL): length the equations leave unallocated when the clearway cap or the stopway floor binds, m. */
   readonly unallocated_m: number;
   readonly trace: readonly RunwayCheckTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 const POSITIVE_M = { min: 0, minInclusive: false, unit: 'm' } as const;
@@ -171,7 +172,7 @@ export function fieldLengthComponents(input: FieldLengthComponentsInput): FieldL
   check(loda <= d35a, 'allEnginesLiftoff_m', loda, `at most the all-engines distance to the screen (${d35a} m)`);
   const clCap = inRange('maxClearway_m', input.maxClearway_m ?? MAX_CLEARWAY_M, { min: 0, unit: 'm' });
   const trace: RunwayCheckTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const t = (label: string, value: number): void => { trace.push({ label, value, unit: 'm' }); };
 
   const tod1 = ALL_ENGINES_FACTOR * d35a;
@@ -214,9 +215,9 @@ export function fieldLengthComponents(input: FieldLengthComponentsInput): FieldL
   t('FS = max(TOR1, TOR2, LD)', fs);
   t('SW = DAS − FS (≥ 0)', sw);
   t('CL = min(FL − DAS, CL1max, CL2max), 0 … 1000 ft', cl);
-  if (clRaw > clCap) warnings.push(`The clearway the distances could use (${clRaw.toFixed(0)} m) is capped at ${clCap.toFixed(1)} m.`);
+  if (clRaw > clCap) warnings.push(notice('runwayCheck.clearwayCapped')`The clearway the distances could use (${qty.length(clRaw)}) is capped at ${qty.shortLength(clCap, 1)}.`);
   if (unallocated > 1e-9) {
-    warnings.push(`FS + SW + CL falls ${unallocated.toFixed(0)} m short of the field length FL; that length must be runway (full strength or stopway).`);
+    warnings.push(notice('runwayCheck.fieldLengthUnallocated')`FS + SW + CL falls ${qty.length(unallocated)} short of the field length FL; that length must be runway (full strength or stopway).`);
   }
   return {
     tod1_m: tod1, cl1max_m: cl1, tor1_m: tor1,
@@ -336,7 +337,7 @@ export interface MaxTakeoffMassResult {
   readonly refusedReason?: InfeasibleReason;
   readonly iterations: number;
   readonly trace: readonly RunwayCheckTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 interface Trial {
@@ -385,7 +386,7 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     ...(input.clMaxScale !== undefined ? { clMaxScale: input.clMaxScale } : {}),
   };
   const trace: RunwayCheckTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const kg = (x: number): string => `${x.toFixed(0)} kg`;
   let evaluations = 0;
   const trial = (m: number): Trial => {
@@ -443,7 +444,7 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     const b0 = light.hi;
     lo = b0;
     trace.push({ label: 'Lightest mass with a decision speed (V1 window not empty)', value: b0.mass_kg, unit: 'kg' });
-    warnings.push(`Below about ${kg(b0.mass_kg)} the model finds no decision speed (VR below the V1 reached after a failure at VMCG); the search starts there.`);
+    warnings.push(notice('runwayCheck.noDecisionSpeedBelow')`Below about ${qty.mass(b0.mass_kg)} the model finds no decision speed (VR below the V1 reached after a failure at VMCG); the search starts there.`);
   }
   if (!lo.allowed) {
     const light = lo;
@@ -470,9 +471,9 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   hi = found.hi;
   const it = lightSteps + found.iterations;
   const by: TakeoffMassLimit = trialLimit(hi);
-  if (!hi.result.feasible) warnings.push(`Just above the greatest allowed mass the takeoff is infeasible: ${hi.result.message}`);
+  if (!hi.result.feasible) warnings.push(notice('runwayCheck.infeasibleAboveLimit')`Just above the greatest allowed mass the takeoff is infeasible: ${hi.result.message}`);
   if (hi.result.feasible && hi.result.engineOut?.v1Limited === 'vmcg') {
-    warnings.push('V1 is held at its VMCG-based minimum near the limiting mass; the field length there is not strictly monotone in mass (the result is a mass where the distances stop fitting, within 10 kg).');
+    warnings.push(notice('runwayCheck.v1AtVmcgNearLimit')`V1 is held at its VMCG-based minimum near the limiting mass; the field length there is not strictly monotone in mass (the result is a mass where the distances stop fitting, within ${qty.mass(TAKEOFF_MASS_TOL_KG)}).`);
   }
   const names: Record<DistanceLimit | 'climb' | 'plausibility', string> = {
     TORA: 'takeoff run available (TORA)', TODA: 'takeoff distance available (TODA)', ASDA: 'accelerate-stop distance available (ASDA)', climb: 'climb after lift-off',
@@ -527,7 +528,7 @@ export interface MaxLandingMassResult {
   readonly refusedRequired_m?: number;
   readonly iterations: number;
   readonly trace: readonly RunwayCheckTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Greatest landing mass (lower bound … MLW) whose required landing runway fits the LDA. */
@@ -539,7 +540,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
   const bound = input.plausibility ?? aircraftPlausibilityBound(a);
   const limit = Math.min(lda, bound.bound_m);
   const trace: RunwayCheckTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const kg = (x: number): string => `${x.toFixed(0)} kg`;
   let evaluations = 0;
   const trial = (m: number): { mass_kg: number; r: LandingResult; allowed: boolean } => {
@@ -625,7 +626,7 @@ export interface RoutePenaltyResult {
   readonly rangePenalty_m: number;
   readonly note?: string;
   readonly trace: readonly RunwayCheckTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Payload and range lost on a route when the takeoff mass is limited (route payloadForRange / rangeForPayload). */
@@ -721,7 +722,7 @@ export interface ExistingRunwayAssessment extends ExistingRunwayCheck {
   readonly landingMass: MaxLandingMassResult;
   readonly penalty?: RoutePenaltyResult;
   readonly trace: readonly RunwayCheckTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** One aircraft row on one runway direction: needs vs declared distances, limited masses and penalties. */
@@ -751,7 +752,7 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
     aircraft: a, pressureAltitude_m: input.pressureAltitude_m, temperature_c: input.temperature_c, slope,
     headwind_mps: wind, surface: input.surface, ...scales,
   };
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const notes: string[] = [];
   const trace: RunwayCheckTraceEntry[] = [{ label: 'Design takeoff mass', value: tow, unit: 'kg' }];
   const bound = input.plausibility ?? aircraftPlausibilityBound(a);

@@ -19,7 +19,8 @@ import type { OperatingRuleSet } from './operatingRules.js';
 import { aircraftPlausibilityBound, checkPlausibility, takeoffDistances, type PlausibilityBound } from './plausibility.js';
 import { requiredLength } from './requirement.js';
 import type { Surface } from './surface.js';
-import { analyseTakeoff, climbCappedTakeoff, climbLimitedPeak } from './takeoff/index.js';
+import { analyseTakeoff, climbCapNotices, climbCappedTakeoff, climbLimitedPeak } from './takeoff/index.js';
+import { notice, uniqueNotices, type Notice } from './notices.js';
 
 /** Conditions of a what-if, SI: field elevation (= pressure altitude), temperature, takeoff mass, slope, wind, surface. */
 export interface WhatIfConditions {
@@ -41,13 +42,13 @@ export interface WhatIfSide {
   /** Governing case, e.g. "balanced-field", or the landing rule's words. */
   readonly governing?: string;
   /** Why it cannot be done here (when not ok). */
-  readonly reason?: string;
+  readonly reason?: Notice;
   /** Not ok because the requirement is beyond the aircraft's plausibility bound (core/plausibility.ts). */
   readonly impractical?: boolean;
   /** Takeoff sized at the climb-limited mass below the mass asked for, kg. */
   readonly climbLimitedMass_kg?: number;
   /** What the number rests on (climb cap and offload; the landing factor's source). */
-  readonly note?: string;
+  readonly note?: readonly Notice[];
 }
 
 /** The what-if's outcome, as the panel and POST /api/compute/requirement give it. */
@@ -57,7 +58,7 @@ export interface WhatIfOutcome {
   readonly required_m?: number;
   readonly governing?: 'takeoff' | 'landing';
   /** Reason when a side is beyond the plausibility bound: the aircraft cannot practically operate here. */
-  readonly impractical?: string;
+  readonly impractical?: Notice;
   /** The aircraft's plausibility bound, m. */
   readonly plausibilityBound_m?: number;
   readonly densityAltitude_m: number;
@@ -67,7 +68,7 @@ export interface WhatIfOutcome {
   readonly v2_mps?: number;
   readonly vref_mps?: number;
   readonly landingMass_kg: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface WhatIfInput extends WhatIfConditions {
@@ -85,7 +86,7 @@ export interface WhatIfInput extends WhatIfConditions {
 export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPlausibilityBound(input.aircraft)): WhatIfOutcome {
   const a = input.aircraft;
   const air = airAt(input.elevation_m, input.temperature_c);
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const runAt = (mass_kg: number, temperature_c: number) => analyseTakeoff({
     aircraft: a, mass_kg, pressureAltitude_m: input.elevation_m, temperature_c, slope: input.slope,
     headwind_mps: input.headwind_mps, surface: input.surface,
@@ -95,25 +96,26 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
   // requirement is the greatest over the temperatures up to the one given.
   const capped = climbCappedTakeoff(a, input.mass_kg, (m) => runAt(m, input.temperature_c));
   const to = capped.t;
-  warnings.push(...capped.first.warnings, ...(capped.climbLimited ? to.warnings : []));
+  // The climb findings are the study's own sentences (climbCapNotices), said once: in the side's
+  // reason or note, not again among the warnings (the takeoff's own climb-limited warning is left out).
+  const climbCodes = new Set(['takeoff.climbLimited', 'takeoff.climbLimitedAtOew']);
+  const own = (ws: readonly Notice[]) => ws.filter((w) => !climbCodes.has(w.code));
+  warnings.push(...own(capped.first.warnings), ...(capped.climbLimited ? own(to.warnings) : []));
   const first = capped.first;
-  const limitText = `the ${first.climb.limitingLabel ?? `${first.climb.case} climb`} gradient ${(first.climb.gradient * 100).toFixed(2)} % is below the minimum ${(first.climb.minimum * 100).toFixed(2)} %`;
-  const kg = (x: number): string => `${Math.round(x).toLocaleString('en-US')} kg`;
-  const m = (x: number): string => `${Math.round(x).toLocaleString('en-US')} m`;
-  let climbLimit: string | undefined;
-  let note: string | undefined;
+  let climbLimit: Notice | undefined;
+  let note: Notice[] | undefined;
   let takeoffRequired = to.feasible ? to.required_m : undefined;
   if (capped.belowOew) {
-    climbLimit = `Cannot operate here: ${limitText}, and no mass down to the empty mass meets it. A longer runway does not cure this.`;
+    climbLimit = climbCapNotices.belowOew(first, input.mass_kg, a.oew_kg);
   } else if (capped.climbLimited && to.feasible && to.climb.limited) {
-    climbLimit = `Cannot operate here: even at the climb-limited mass of ${kg(capped.mass_kg)} the ${to.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`;
+    climbLimit = climbCapNotices.atCap(to, capped.mass_kg);
   } else if (!capped.climbLimited && to.feasible && to.climb.limited) {
-    climbLimit = `Climb-limited: ${limitText}. A longer runway does not cure this.`;
+    climbLimit = first.warnings.find((w) => climbCodes.has(w.code)) ?? climbCapNotices.atCap(to, input.mass_kg);
   } else if (capped.climbLimited && to.feasible) {
-    note = `Climb-limited at ${kg(input.mass_kg)} (${limitText}): sized at the climb-limited mass of ${kg(capped.mass_kg)}, ${kg(input.mass_kg - capped.mass_kg)} offload. A longer runway does not allow more mass.`;
+    note = [climbCapNotices.capped(first, input.mass_kg, capped.mass_kg)];
     const peak = climbLimitedPeak(a, input.mass_kg, input.temperature_c, to.required_m, runAt);
     if (peak) {
-      note += ` The requirement peaks below this temperature: ${m(peak.required_m)} at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${kg(peak.mass_kg)}), and is sized on that peak as the study does.`;
+      note.push(climbCapNotices.peak(peak, input.temperature_c, to.required_m));
       takeoffRequired = peak.required_m;
     }
   }
@@ -121,13 +123,13 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
     ? checkPlausibility(takeoffDistances(to), bound, { elevation_m: input.elevation_m, temperature_c: input.temperature_c, mass_kg: capped.mass_kg })
     : undefined;
   const takeoff: WhatIfSide = takeoffBeyond
-    ? { ok: false, impractical: true, reason: takeoffBeyond.reason }
+    ? { ok: false, impractical: true, reason: takeoffBeyond.notice }
     : to.feasible && !climbLimit && takeoffRequired !== undefined
       ? {
         ok: true, required_m: takeoffRequired, governing: to.governing,
         ...(capped.climbLimited ? { climbLimitedMass_kg: capped.mass_kg } : {}), ...(note ? { note } : {}),
       }
-      : { ok: false, reason: climbLimit ?? (to.feasible ? '' : to.message) };
+      : { ok: false, ...(climbLimit ? { reason: climbLimit } : !to.feasible ? { reason: notice('whatif.takeoffInfeasible')`The takeoff is not possible here: ${to.message}` } : {}) };
   const ld = analyseLanding({
     aircraft: a,
     mass_kg: a.mlw_kg,
@@ -147,11 +149,11 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
     })
     : undefined;
   const landing: WhatIfSide = landingBeyond
-    ? { ok: false, impractical: true, reason: landingBeyond.reason }
+    ? { ok: false, impractical: true, reason: landingBeyond.notice }
     : ld.status === 'ok'
-      ? { ok: true, required_m: ld.required_m, governing: landingRuleLabel(ld.requirement), note: ld.requirement.source }
-      : { ok: false, reason: ld.reason };
-  const impractical = takeoffBeyond?.reason ?? landingBeyond?.reason;
+      ? { ok: true, required_m: ld.required_m, governing: landingRuleLabel(ld.requirement), note: [notice('whatif.landingFactorSource')`Landing factor: ${ld.requirement.source}.`] }
+      : { ok: false, reason: notice('whatif.landingInfeasible')`The landing is not possible here: ${ld.reason}` };
+  const impractical = takeoffBeyond?.notice ?? landingBeyond?.notice;
   let required: { length_m: number; governing: 'takeoff' | 'landing' } | undefined;
   if (takeoff.ok && landing.ok) required = requiredLength({ takeoff_m: takeoff.required_m!, landing_m: landing.required_m! });
   return {
@@ -167,6 +169,6 @@ export function whatIf(input: WhatIfInput, bound: PlausibilityBound = aircraftPl
     v2_mps: to.speeds.v2_mps,
     ...(ld.speeds ? { vref_mps: ld.speeds.vref_mps } : {}),
     landingMass_kg: a.mlw_kg,
-    warnings: [...new Set(warnings)],
+    warnings: uniqueNotices(warnings),
   };
 }

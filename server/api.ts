@@ -6,7 +6,7 @@
  */
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import { InputDomainError, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../core/index.js';
+import { InputDomainError, noticeJsonReplacer, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput, type UnitSystem } from '../core/index.js';
 import { AircraftInUseError, DuplicateIdError } from '../db/errors.js';
 import {
   AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
@@ -30,6 +30,11 @@ export interface ApiRouteDeps {
   readonly jobs: JobRunner;
   readonly clock: () => Date;
   readonly service?: StudyService;
+}
+
+/** A JSON answer whose notices carry their sentence (`message`) beside their code and SI values. */
+function jsonWithNotices(c: Context, body: unknown, units: UnitSystem): Response {
+  return c.body(JSON.stringify(body, noticeJsonReplacer(units)), 200, { 'content-type': 'application/json; charset=utf-8' });
 }
 
 const invalid = (c: Context, problems: readonly Problem[]) =>
@@ -254,7 +259,8 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
     const parsed = parseStudyDocument(body.value);
     if (!parsed.ok) return invalid(c, parsed.problems);
     try {
-      return c.json(await jobs.run('study', parsed.input));
+      const out = await jobs.run('study', parsed.input);
+      return jsonWithNotices(c, out, out.options.units);
     } catch (e) {
       // A rule only the run can check (it depends on the computed masses) is still the user's field.
       if (e instanceof InputDomainError) return invalid(c, [problemFromDomainError(e)]);
@@ -282,7 +288,7 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
         landingTemperature: cond.landingTemperature as 'isa' | 'design',
         operatingRules: cond.operatingRules as OperatingRuleSet,
       });
-      return c.json({ aircraft: a.id, conditions: { ...cond, mass_kg: cond.mass_kg ?? a.mtow_kg }, ...outcome });
+      return jsonWithNotices(c, { aircraft: a.id, conditions: { ...cond, mass_kg: cond.mass_kg ?? a.mtow_kg }, ...outcome }, 'si');
     } catch (e) {
       if (e instanceof InputDomainError) return invalid(c, [problemFromDomainError(e, requirementPath(e.field))]);
       throw e;

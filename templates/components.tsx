@@ -3,6 +3,8 @@ import type { Child } from 'hono/jsx';
 import { CsrfInput } from './layout.js';
 import { IDS } from './ids.js';
 import { useView } from './view.js';
+import { say } from './format.js';
+import type { Notice as CoreNotice } from '../core/index.js';
 
 /** Hidden field naming the unit system the form's numbers were typed in. */
 export const UNITS_FIELD = '_units';
@@ -45,12 +47,14 @@ export function ActionButton(p: { action: string; label: string; class?: string;
   );
 }
 
-export function Warnings(p: { items: readonly string[]; title?: string }) {
+/** A list of warnings: plain text, or notices from core rendered in the page's units. */
+export function Warnings(p: { items: readonly (string | CoreNotice)[]; title?: string }) {
+  const { units } = useView();
   if (p.items.length === 0) return null;
   return (
     <div class="warnings" role="note">
       <h3>{p.title ?? 'Warnings'}</h3>
-      <ul>{p.items.map((w) => <li>{w}</li>)}</ul>
+      <ul>{p.items.map((w) => <li>{say(w, units)}</li>)}</ul>
     </div>
   );
 }

@@ -3,7 +3,7 @@
  * the unit system is the study's or the user's choice. Nothing non-finite is ever printed: a missing
  * or non-finite value shows as an em dash.
  */
-import { displayInputValue, displayLimit, unitOf, type DisplayKind, type UnitSystem } from '../core/index.js';
+import { displayInputValue, displayLimit, noticeText, unitOf, type DisplayKind, type Notice, type QuantityFormat, type UnitSystem } from '../core/index.js';
 
 // The display table and conversions live in core/units.ts; this module only formats.
 
@@ -84,4 +84,14 @@ export const UNIT_SYSTEM_LABELS: Readonly<Record<UnitSystem, string>> = {
 export function fmtIsaDeviation(dev_c: number, system: UnitSystem): string {
   if (!Number.isFinite(dev_c)) return '—';
   return `ISA ${dev_c >= 0 ? '+' : '−'}${fmt(Math.abs(dev_c), 'temperatureDelta', system)}`;
+}
+
+/** Quantities of a notice in the reader's units, with the kind's rounding (or the notice's digits). */
+export function noticeFormat(system: UnitSystem): QuantityFormat {
+  return (q) => fmt(q.si, q.kind, system, q.digits);
+}
+
+/** A notice (core/notices.ts) as a sentence in the reader's units; plain text passes through. */
+export function say(n: Notice | string, system: UnitSystem): string {
+  return typeof n === 'string' ? n : noticeText(n, noticeFormat(system));
 }

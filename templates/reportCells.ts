@@ -3,7 +3,7 @@
  * results page and the PDF appendix, so both print the same label with the same number.
  */
 import { unitOf, type Cell, type Column, type UnitSystem, type ValueKind } from '../core/index.js';
-import { fmt, fmtLengthBoth, fmtNumber, fmtPct } from './format.js';
+import { fmt, fmtLengthBoth, fmtNumber, fmtPct, say } from './format.js';
 
 /** Significant digits of the input listing (the attached file holds the exact values). */
 export const LISTING_DIGITS = 6;
@@ -33,6 +33,7 @@ function numberOf(si: number | null | undefined, kind: ValueKind, units: UnitSys
 /** Text of a cell; in a column with a kind the unit is in the header and the cell shows the number only. */
 export function cellText(cell: Cell, column: Column | undefined, units: UnitSystem): string {
   if ('text' in cell) return cell.text;
+  if ('notice' in cell) return say(cell.notice, units);
   const inHeader = column?.kind !== undefined && kindSymbol(column.kind, units) !== '';
   if ('pair' in cell) {
     const [a, b] = cell.pair;

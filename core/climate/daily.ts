@@ -17,6 +17,7 @@
  * Leap years follow the Gregorian rule (February has 29 days in a leap year).
  * Validity: daily temperatures −90 °C to 60 °C, years 1700 to 2200, one record per date.
  */
+import { notice, siText, type Notice } from '../notices.js';
 import { InputDomainError } from '../errors.js';
 import { check, inRange } from '../validate.js';
 import { CLIMATE_YEAR_RANGE, daysInMonth, formatCalendarDate, pad2, parseCalendarDate, type CalendarDate } from './calendar.js';
@@ -159,7 +160,7 @@ export interface DailyClimateResult {
   /** Why there is no design temperature. */
   readonly reason?: string;
   readonly trace: readonly ClimateTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Fewer years than this for the design month raises a warning (5-10 recent years or a 30-year normal; from memory). */
@@ -311,13 +312,14 @@ export function climateFromDaily(input: DailyClimateInput): DailyClimateResult {
     b.tavg[d.day - 1] = vals.tavg_c;
   }
 
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const calendarEmpty = (): CalendarMonthClimate[] => [...Array(12).keys()].map((k) => ({ month: k + 1, yearsUsed: [] }));
   if (first === undefined || last === undefined) {
-    const reason =
+    const empty =
       fromYear !== undefined || toYear !== undefined
-        ? `No temperature values in the years ${fromYear ?? '…'} to ${toYear ?? '…'}.`
-        : 'No temperature values in the record.';
+        ? notice('climate.noValuesInYears')`No temperature values in the years ${String(fromYear ?? '…')} to ${String(toYear ?? '…')}.`
+        : notice('climate.noValues')`No temperature values in the record.`;
+    const reason = siText(empty);
     return {
       method: CLIMATE_METHOD_VERSION,
       period: { firstDate: '', lastDate: '', fromYear: fromYear ?? 0, toYear: toYear ?? 0 },
@@ -330,16 +332,16 @@ export function climateFromDaily(input: DailyClimateInput): DailyClimateResult {
       completeYears: [],
       reason,
       trace: [],
-      warnings: [reason],
+      warnings: [empty],
     };
   }
   const firstDay: CalendarDate = first;
   const lastDay: CalendarDate = last;
   if (fromYear !== undefined && firstDay.year > fromYear) {
-    warnings.push(`The years asked for start in ${fromYear}, but the record starts on ${formatCalendarDate(firstDay)}.`);
+    warnings.push(notice('climate.recordStartsLater')`The years asked for start in ${fromYear}, but the record starts on ${formatCalendarDate(firstDay)}.`);
   }
   if (toYear !== undefined && lastDay.year < toYear) {
-    warnings.push(`The years asked for end in ${toYear}, but the record ends on ${formatCalendarDate(lastDay)}.`);
+    warnings.push(notice('climate.recordEndsEarlier')`The years asked for end in ${toYear}, but the record ends on ${formatCalendarDate(lastDay)}.`);
   }
 
   // Step 1-2: every (year, month) from the first to the last month of the record.
@@ -400,10 +402,7 @@ export function climateFromDaily(input: DailyClimateInput): DailyClimateResult {
     const allMin = ms.every((s) => s.meanMin_c !== undefined);
     const sources = new Set(ms.map((s) => s.meanSource));
     if (sources.size > 1) {
-      warnings.push(
-        `${monthName(cm)}: the monthly mean comes from TAVG in some years and from (TMAX + TMIN)/2 in others; ` +
-          `choose meanSource 'max-min' for one consistent definition.`,
-      );
+      warnings.push(notice('climate.mixedMeanSources')`${monthName(cm)}: the monthly mean comes from TAVG in some years and from (TMAX + TMIN)/2 in others; choose meanSource 'max-min' for one consistent definition.`);
     }
     calendarMonths.push({
       month: cm,
@@ -435,10 +434,11 @@ export function climateFromDaily(input: DailyClimateInput): DailyClimateResult {
     .filter((c) => c.meanMax_c !== undefined && c.mean_c !== undefined)
     .map((c) => ({ month: c.month, meanMax_c: c.meanMax_c as number, mean_c: c.mean_c as number }));
   if (normals.length === 0) {
-    const reason = `No month meets the completeness rule (at most ${rule.maxMissingDays} missing days, at most ${rule.maxConsecutiveMissingDays} consecutive).`;
+    const none = notice('climate.noCompleteMonth')`No month meets the completeness rule (at most ${rule.maxMissingDays} missing days, at most ${rule.maxConsecutiveMissingDays} consecutive).`;
+    const reason = siText(none);
     return {
       method: CLIMATE_METHOD_VERSION, period, completeness: rule, meanSource, stationMonths, calendarMonths,
-      excluded, yearsUsed, completeYears, reason, trace, warnings: [...warnings, reason],
+      excluded, yearsUsed, completeYears, reason, trace, warnings: [...warnings, none],
     };
   }
 
@@ -447,10 +447,7 @@ export function climateFromDaily(input: DailyClimateInput): DailyClimateResult {
   const hotYears = calendarMonths[design.hottestMonth - 1]?.yearsUsed.length ?? 0;
   trace.push({ label: 'years used for the hottest month', value: hotYears, unit: 'years' });
   if (hotYears < MIN_RECOMMENDED_YEARS) {
-    warnings.push(
-      `${monthName(design.hottestMonth)} rests on ${hotYears} year(s) of data; at least ${MIN_RECOMMENDED_YEARS} to 10 complete ` +
-        `years, or a 30-year normal, are usual (from memory).`,
-    );
+    warnings.push(notice('climate.fewYears')`${monthName(design.hottestMonth)} rests on ${hotYears} year(s) of data; at least ${MIN_RECOMMENDED_YEARS} to 10 complete years, or a 30-year normal, are usual (from memory).`);
   }
   return {
     method: CLIMATE_METHOD_VERSION, period, completeness: rule, meanSource, stationMonths, calendarMonths,

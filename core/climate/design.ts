@@ -19,6 +19,7 @@
  */
 import { DESIGN_TEMPERATURE_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE, MONTHLY_MEAN_RANGE } from '../fields.js';
 import { check, inRange } from '../validate.js';
+import { notice, qty, type Notice } from '../notices.js';
 
 /** Version stamp of the climate methods (design temperature, daily aggregation). */
 export const CLIMATE_METHOD_VERSION = 'climate-design-temperature/1';
@@ -95,7 +96,7 @@ export interface DesignTemperatureResult {
   /** Older formula applied to the hottest month, when asked for. */
   readonly olderFormula?: OlderFormulaResult;
   readonly trace: readonly ClimateTraceEntry[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 const MONTH_NAMES = [
@@ -184,18 +185,14 @@ export function designTemperatureFromMonthly(input: DesignTemperatureInput): Des
   });
   months.sort((a, b) => a.month - b.month);
 
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const missing = [...Array(12).keys()].map((k) => k + 1).filter((k) => !seen.has(k));
   if (missing.length > 0) {
-    warnings.push(
-      `No data for ${missing.map(monthName).join(', ')}: the hottest month is chosen among ${months.length} of 12 months only.`,
-    );
+    warnings.push(notice('climate.monthsMissing')`No data for ${missing.map(monthName).join(', ')}: the hottest month is chosen among ${months.length} of 12 months only.`);
   }
   for (const m of months) {
     if (m.mean_c > m.meanMax_c) {
-      warnings.push(
-        `${monthName(m.month)}: mean temperature ${m.mean_c} °C is above the mean daily maximum ${m.meanMax_c} °C; check the data.`,
-      );
+      warnings.push(notice('climate.meanAboveMax')`${monthName(m.month)}: mean temperature ${qty.temperature(m.mean_c)} is above the mean daily maximum ${qty.temperature(m.meanMax_c)}; check the data.`);
     }
   }
 
@@ -205,20 +202,13 @@ export function designTemperatureFromMonthly(input: DesignTemperatureInput): Des
   }
   const tiedMean = months.filter((m) => m !== hot && m.mean_c === hot.mean_c);
   if (tiedMean.length > 0) {
-    warnings.push(
-      `${[hot, ...tiedMean].map((m) => monthName(m.month)).join(' and ')} share the highest mean temperature (${hot.mean_c} °C); ` +
-        `${monthName(hot.month)} is taken because its mean daily maximum is highest.`,
-    );
+    warnings.push(notice('climate.tiedHottestMonth')`${[hot, ...tiedMean].map((m) => monthName(m.month)).join(' and ')} share the highest mean temperature (${qty.temperature(hot.mean_c)}); ${monthName(hot.month)} is taken because its mean daily maximum is highest.`);
   }
   let top = hot;
   for (const m of months) if (m.meanMax_c > top.meanMax_c) top = m;
   const differ = top.month !== hot.month;
   if (differ) {
-    warnings.push(
-      `The hottest month by mean temperature (${monthName(hot.month)}, ART ${hot.meanMax_c} °C) is not the month with the ` +
-        `highest mean daily maximum (${monthName(top.month)}, ${top.meanMax_c} °C). ICAO uses the first; check which one the ` +
-        `applicable guidance intends.`,
-    );
+    warnings.push(notice('climate.criteriaDiffer')`The hottest month by mean temperature (${monthName(hot.month)}, ART ${qty.temperature(hot.meanMax_c)}) is not the month with the highest mean daily maximum (${monthName(top.month)}, ${qty.temperature(top.meanMax_c)}). ICAO uses the first; check which one the applicable guidance intends.`);
   }
 
   const older = input.includeOlderFormula

@@ -21,6 +21,7 @@ import { fToC } from '../units.js';
 import { parseCalendarDate, formatCalendarDate, pad2 } from './calendar.js';
 import { CLIMATE_TEMPERATURE_RANGE, monthName, type MonthlyNormal } from './design.js';
 import type { DailyTemperature } from './daily.js';
+import { notice, type Notice } from '../notices.js';
 
 /** A climate file that cannot be imported. `line` and `column` are 1-based; absent for whole-file problems. */
 export class ClimateFileError extends Error {
@@ -64,7 +65,7 @@ export interface DailyFileReadResult {
   /** One record per date, ascending. */
   readonly days: readonly DailyTemperature[];
   readonly summary: DailyFileSummary;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface MonthlyNormalsReadResult {
@@ -73,7 +74,7 @@ export interface MonthlyNormalsReadResult {
   readonly months: readonly MonthlyNormal[];
   /** Months present in the file but not usable, with the reason. */
   readonly skipped: readonly { readonly month: number; readonly reason: string }[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** The GHCN-Daily missing-value sentinel. */
@@ -251,9 +252,9 @@ export function readGhcnDailyCsv(input: { readonly text: string }): DailyFileRea
   return { station, days: table.list(), summary, warnings: readWarnings(summary) };
 }
 
-function readWarnings(s: DailyFileSummary): string[] {
-  const out: string[] = [];
-  if (s.valuesDroppedQc > 0) out.push(`${s.valuesDroppedQc} temperature value(s) dropped because a quality-control flag was set.`);
+function readWarnings(s: DailyFileSummary): Notice[] {
+  const out: Notice[] = [];
+  if (s.valuesDroppedQc > 0) out.push(notice('climate.qcDropped')`${s.valuesDroppedQc} temperature value(s) dropped because a quality-control flag was set.`);
   return out;
 }
 
@@ -321,9 +322,9 @@ export function readStationDailyCsv(input: { readonly text: string; readonly uni
   const elements = (['TMAX', 'TMIN', 'TAVG'] as const)
     .filter((e) => header.index.has(e))
     .map((e) => ({ name: e, key: ELEMENT_KEYS[e] as ElementKey, col: header.index.get(e) as number, attr: header.index.get(`${e}_ATTRIBUTES`) }));
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const noAttr = elements.filter((e) => e.attr === undefined).map((e) => e.name);
-  if (noAttr.length > 0) warnings.push(`No quality-flag column for ${noAttr.join(', ')}: values are taken as they are.`);
+  if (noAttr.length > 0) warnings.push(notice('climate.noQualityFlags')`No quality-flag column for ${noAttr.join(', ')}: values are taken as they are.`);
   const unitHint = ` (the file's unit was stated as ${UNIT_LABEL[input.unit]}; check it)`;
 
   const table = new DayTable();
@@ -442,8 +443,8 @@ export function readMonthlyNormalsCsv(input: { readonly text: string }): Monthly
     throw new ClimateFileError({}, `no usable month: ${rows.length - 1} rows read, each month needs ${NORMAL_COLUMNS.max} and ${NORMAL_COLUMNS.mean} or ${NORMAL_COLUMNS.min}`);
   }
   months.sort((a, b) => a.month - b.month);
-  const warnings = skipped.map((s) => `${s.reason}; month left out.`);
+  const warnings: Notice[] = skipped.map((s) => notice('climate.monthLeftOut')`${s.reason}; month left out.`);
   const absent = [...Array(12).keys()].map((k) => k + 1).filter((k) => !seen.has(k));
-  if (absent.length > 0) warnings.push(`The file has no row for ${absent.map(monthName).join(', ')}.`);
+  if (absent.length > 0) warnings.push(notice('climate.monthAbsent')`The file has no row for ${absent.map(monthName).join(', ')}.`);
   return { station, months, skipped, warnings };
 }

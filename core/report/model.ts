@@ -19,6 +19,7 @@ import { SURFACE_LABELS } from '../surface.js';
 import { CLIMATE_FIELDS, DIRECTION_FIELDS, FLEET_FIELDS, MONTHLY_FIELDS, PROFILE_POINT_FIELDS, SITE_FIELDS, STUDY_OPTION_FIELDS, optionValue } from '../studyFields.js';
 import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SET_INFO } from '../operatingRules.js';
 import { monthName } from '../climate/index.js';
+import { notice, scoped, type Notice } from '../notices.js';
 import type {
   RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
 } from '../study/types.js';
@@ -44,6 +45,8 @@ export type ValueKind = QuantityKind | 'slopePct' | 'temperatureDelta' | 'percen
  */
 export type Cell =
   | { readonly text: string; readonly bold?: boolean; readonly mono?: boolean }
+  /** A notice (core/notices.ts), rendered in the reader's units. */
+  | { readonly notice: Notice; readonly bold?: boolean }
   | { readonly si: number | null | undefined; readonly kind: ValueKind; readonly listing?: boolean; readonly digits?: number }
   | { readonly si: number; readonly unit: string }
   /** Needed / available pair of the same kind, shown "a / b". */
@@ -72,13 +75,16 @@ export interface Fact {
   readonly value: Cell;
 }
 
+/** Running text: plain words, or a notice whose values the renderer formats in the reader's units. */
+export type Prose = string | Notice;
+
 export type Block =
-  | { readonly type: 'paragraph'; readonly text: string; readonly style?: 'normal' | 'note' | 'caution' | 'strong' }
+  | { readonly type: 'paragraph'; readonly text: Prose; readonly style?: 'normal' | 'note' | 'caution' | 'strong' }
   | { readonly type: 'subheading'; readonly text: string }
   | { readonly type: 'facts'; readonly items: readonly Fact[] }
   | { readonly type: 'table'; readonly caption: string; readonly columns: readonly Column[]; readonly rows: readonly Row[]; readonly note?: string }
   | { readonly type: 'formulas'; readonly lines: readonly string[] }
-  | { readonly type: 'list'; readonly items: readonly string[]; readonly ordered?: boolean }
+  | { readonly type: 'list'; readonly items: readonly Prose[]; readonly ordered?: boolean }
   | { readonly type: 'chart'; readonly chart: ChartModel; readonly caption?: string };
 
 export interface ReportSection {
@@ -432,10 +438,11 @@ function scenarioBlocks(s: ScenarioResult, byId: ReadonlyMap<string, AircraftPro
   });
   const unable = s.rows.filter((r) => r.status !== 'ok');
   if (unable.length > 0) {
-    blocks.push({ type: 'list', items: unable.map((r) => `${r.aircraftName}: cannot operate here. ${r.reason ?? ''}`.trim()) });
+    blocks.push({ type: 'list', items: unable.map((r) => (r.reason ? notice('report.cannotOperate')`${r.aircraftName}: cannot operate here. ${r.reason}` : `${r.aircraftName}: cannot operate here.`)) });
   }
   if (s.excluded.length > 0) {
-    blocks.push({ type: 'paragraph', text: `Not eligible as critical aircraft: ${s.excluded.map((e) => `${byId.get(e.aircraft)?.name ?? e.aircraft} (${e.reason})`).join('; ')}.`, style: 'note' });
+    const each = s.excluded.map((e) => notice('report.notEligibleAircraft')`${byId.get(e.aircraft)?.name ?? e.aircraft} (${e.reason})`);
+    blocks.push({ type: 'paragraph', text: notice('report.notEligible')`Not eligible as critical aircraft: ${each}.`, style: 'note' });
   }
 
   // Components of each requirement: one column per aircraft, in chunks that fit the page width.
@@ -511,7 +518,7 @@ export function componentSections(rows: readonly RowResult[]): ComponentSection[
     { label: 'Offload to meet the climb minimum', value: (r) => (r.climbOffload_kg !== undefined ? q(r.climbOffload_kg, 'mass') : undefined) },
     { label: 'Design takeoff mass (used)', value: (r) => q(r.takeoffMass_kg, 'mass'), bold: true },
     { label: 'Arrival mass', value: (r) => q(r.route.arrivalMass_kg, 'mass') },
-    { label: 'Cannot operate here', value: (r) => (ok(r) ? undefined : t(r.reason ?? 'cannot operate', true)) },
+    { label: 'Cannot operate here', value: (r) => (ok(r) ? undefined : r.reason ? { notice: r.reason, bold: true } : t('cannot operate', true)) },
   ]);
   section('Takeoff', [
     ...labels(takeoffTrace).map((label): ComponentLine => ({ label, value: trace(takeoffTrace, label) })),
@@ -656,13 +663,14 @@ function assumptionBlocks(result: StudyResult): Block[] {
     `Regular use at ${o.regularUseThreshold.toLocaleString('en-US')} annual operations per aircraft group; the recommended length is rounded up to the planning increment.`,
     'Aircraft performance profiles are planning profiles; where the manufacturer\'s planning data exist, they take precedence.',
   ];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const seen = new Set<string>();
-  const add = (prefix: string, ws: readonly string[]): void => {
+  const add = (prefix: string, ws: readonly Notice[]): void => {
     for (const w of ws) {
-      if (seen.has(w)) continue;
-      seen.add(w);
-      warnings.push(prefix ? `${prefix}: ${w}` : w);
+      const key = JSON.stringify(w);
+      if (seen.has(key)) continue;
+      seen.add(key);
+      warnings.push(prefix ? scoped(prefix, w) : w);
     }
   };
   add('', result.warnings);
@@ -670,7 +678,7 @@ function assumptionBlocks(result: StudyResult): Block[] {
   for (const r of result.site.runways) add(`Runway ${r.name}`, r.warnings);
   for (const s of result.scenarios) add(s.name, s.warnings);
   // Aircraft warnings: one line per aircraft and warning, naming the scenarios where it arose.
-  const byAircraft = new Map<string, { name: string; scenarios: string[] }>();
+  const byAircraft = new Map<string, { name: string; warning: Notice; scenarios: string[] }>();
   const climb: string[] = [];
   for (const s of result.scenarios) {
     for (const r of s.rows) {
@@ -680,17 +688,16 @@ function assumptionBlocks(result: StudyResult): Block[] {
           : `CLIMB-LIMITED: ${r.aircraftName} in "${s.name}": at the takeoff mass its route needs, a takeoff climb gradient (first segment at lift-off or second segment at V2; the row warnings name which) is below the regulatory minimum, which a longer runway cannot cure; the runway is sized at the greatest mass that meets the minimum (offload in Section 5).`);
       }
       for (const w of r.warnings) {
-        const key = `${r.aircraftName}\u0000${w}`;
+        const key = `${r.aircraftName}\u0000${JSON.stringify(w)}`;
         const entry = byAircraft.get(key);
         if (entry) { if (!entry.scenarios.includes(s.name)) entry.scenarios.push(s.name); }
-        else byAircraft.set(key, { name: r.aircraftName, scenarios: [s.name] });
+        else byAircraft.set(key, { name: r.aircraftName, warning: w, scenarios: [s.name] });
       }
     }
   }
-  for (const [key, e] of byAircraft) {
-    const w = key.slice(key.indexOf('\u0000') + 1);
+  for (const e of byAircraft.values()) {
     const where = e.scenarios.length === result.scenarios.length && result.scenarios.length > 1 ? 'all scenarios' : e.scenarios.join('; ');
-    warnings.push(`${e.name} (${where}): ${w}`);
+    warnings.push(scoped(`${e.name} (${where})`, e.warning));
   }
   return [
     { type: 'subheading', text: 'Assumptions' },

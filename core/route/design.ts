@@ -11,6 +11,7 @@
  * and at most MTOW. Results are planning estimates: trip fuel is Breguet cruise over the stage plus a
  * climb/descent allowance (model.ts); trip time is stage / cruise TAS; no wind.
  */
+import { notice, qty, siText, type Notice } from '../notices.js';
 import type { AircraftProfile } from '../aircraft.js';
 import { finite, inRange } from '../validate.js';
 import type { ReservePolicy, ResolvedReserves } from './reserves.js';
@@ -34,8 +35,10 @@ export interface DesignTakeoffMassInput {
 export interface RouteResult {
   readonly method: string;
   readonly status: RouteStatus;
-  /** Why the result is not 'ok' (absent when ok). */
+  /** Why the result is not 'ok' (absent when ok), as SI text. */
   readonly reason?: string;
+  /** The same, as a notice (rendered in the reader's units). */
+  readonly why?: Notice;
   readonly aircraftId: string;
   readonly reserves: ResolvedReserves;
   readonly stageLength_m: number;
@@ -63,11 +66,11 @@ export interface RouteResult {
   /** Greatest stage with zero payload (ferry reach), m (0 when none). */
   readonly reachZeroPayload_m: number;
   readonly trace: readonly RouteTraceItem[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
-const kg = (x: number): string => `${Math.round(x)} kg`;
-const km = (x: number): string => `${(x / 1000).toFixed(1)} km`;
+const kg = (x: number) => qty.mass(x);
+const km = (x: number) => qty.distance(x, 1);
 
 function checkLoading(l: RouteLoading): RouteLoading {
   for (const [k, v] of Object.entries(l)) finite(`route loading ${k}`, v as number);
@@ -95,12 +98,12 @@ function clampPayload(m: RouteFuelModel, W: number): number {
   return W < m.oew_kg && W > m.oew_kg - ROUTE_MASS_SLACK_KG ? m.oew_kg : W;
 }
 
-function violationText(m: RouteFuelModel, lim: RouteLimit, l: RouteLoading): string {
+function violationText(m: RouteFuelModel, lim: RouteLimit, l: RouteLoading): Notice {
   switch (lim) {
-    case 'mtow': return `takeoff mass ${kg(l.takeoffMass_kg)} exceeds MTOW ${kg(m.mtow_kg)}`;
-    case 'max-fuel': return `ramp fuel ${kg(l.rampFuel_kg)} exceeds the fuel capacity ${kg(m.maxFuel_kg)}`;
-    case 'mlw': return `arrival mass ${kg(l.arrivalMass_kg)} exceeds MLW ${kg(m.mlw_kg)}`;
-    case 'max-payload': return `payload ${kg(l.payload_kg)} exceeds the maximum payload ${kg(m.maxPayload_kg)}`;
+    case 'mtow': return notice('route.overMtow')`takeoff mass ${kg(l.takeoffMass_kg)} exceeds MTOW ${kg(m.mtow_kg)}`;
+    case 'max-fuel': return notice('route.overFuelCapacity')`ramp fuel ${kg(l.rampFuel_kg)} exceeds the fuel capacity ${kg(m.maxFuel_kg)}`;
+    case 'mlw': return notice('route.overMlw')`arrival mass ${kg(l.arrivalMass_kg)} exceeds MLW ${kg(m.mlw_kg)}`;
+    case 'max-payload': return notice('route.overMaxPayload')`payload ${kg(l.payload_kg)} exceeds the maximum payload ${kg(m.maxPayload_kg)}`;
   }
 }
 
@@ -124,7 +127,7 @@ export function designTakeoffMass(input: DesignTakeoffMassInput): RouteResult {
   const violated = requested ? routeViolations(m, requested, m.mtow_kg) : (['max-fuel'] as RouteLimit[]);
 
   let status: RouteStatus;
-  let reason: string | undefined;
+  let why: Notice | undefined;
   let loading: RouteLoading;
   let limitedBy: RouteLimit | undefined;
 
@@ -133,27 +136,23 @@ export function designTakeoffMass(input: DesignTakeoffMassInput): RouteResult {
     loading = requested;
   } else {
     const cap = routeCapacity(m, s, m.mtow_kg);
-    const broken = requested
-      ? violated.map((v) => violationText(m, v, requested)).join('; ')
-      : 'the contingency rule needs more fuel than any loading can carry';
+    const broken: readonly Notice[] = requested
+      ? violated.map((v) => violationText(m, v, requested))
+      : [notice('route.contingencyUnfundable')`the contingency rule needs more fuel than any loading can carry`];
     if (cap.payload_kg >= -ROUTE_MASS_SLACK_KG) {
       limitedBy = cap.limitedBy;
       loading = checkLoading(routeLoading(m, s, clampPayload(m, cap.zeroFuelMass_kg)));
       status = limitedBy === 'max-fuel' ? 'fuel-limited' : 'payload-limited';
-      reason =
-        `With the requested payload ${kg(P)} over ${km(s)}: ${broken}. ` +
-        `Limited by the ${ROUTE_LIMIT_LABELS[limitedBy]}: the greatest payload for this stage is ${kg(loading.payload_kg)}, ` +
-        `${kg(P - loading.payload_kg)} left behind (takeoff mass ${kg(loading.takeoffMass_kg)}).`;
+      why = notice('route.payloadLimited')`With the requested payload ${kg(P)} over ${km(s)}: ${broken}. Limited by the ${ROUTE_LIMIT_LABELS[limitedBy]}: the greatest payload for this stage is ${kg(loading.payload_kg)}, ${kg(P - loading.payload_kg)} left behind (takeoff mass ${kg(loading.takeoffMass_kg)}).`;
     } else {
       status = 'out-of-range';
       limitedBy = reach0?.limitedBy ?? cap.limitedBy;
       const stage0 = reach0 ? reach0.stage_m : 0;
       const f0 = routeFactors(m, stage0);
       loading = checkLoading(f0.finite ? routeLoading(m, stage0, m.oew_kg) : routeLoading(m, 0, m.oew_kg));
-      reason = reach0
-        ? `Stage ${km(s)} cannot be flown even with zero payload: the farthest reach is ${km(reach0.stage_m)}, ` +
-          `limited by the ${ROUTE_LIMIT_LABELS[reach0.limitedBy]} (${broken}).`
-        : `The aircraft cannot carry its reserve fuel within its limits even with zero payload and zero stage (${broken}).`;
+      why = reach0
+        ? notice('route.outOfRange')`Stage ${km(s)} cannot be flown even with zero payload: the farthest reach is ${km(reach0.stage_m)}, limited by the ${ROUTE_LIMIT_LABELS[reach0.limitedBy]} (${broken}).`
+        : notice('route.reservesUnfundable')`The aircraft cannot carry its reserve fuel within its limits even with zero payload and zero stage (${broken}).`;
     }
   }
 
@@ -164,12 +163,13 @@ export function designTakeoffMass(input: DesignTakeoffMassInput): RouteResult {
     { key: 'phi', label: 'W_TO / (W_ZF + fixed-flow holding fuel) for the stage', value: f.finite ? f.phi : 0, unit: '' },
     ...loadingTrace(loading),
   ];
-  if (status !== 'ok') warnings.push(reason!);
+  if (status !== 'ok') warnings.push(why!);
+  const reason = why === undefined ? undefined : siText(why);
 
   const result: RouteResult = {
     method: ROUTE_METHOD_VERSION,
     status,
-    ...(reason !== undefined ? { reason } : {}),
+    ...(reason !== undefined ? { reason, why } : {}),
     aircraftId: aircraft.id,
     reserves: m.reserves,
     stageLength_m: s,
@@ -210,7 +210,7 @@ export interface RoutePayloadResult {
   /** The loading with that payload (present when ok). Its takeoff mass may be below the given one. */
   readonly loading?: RouteLoading;
   readonly trace: readonly RouteTraceItem[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Greatest payload (≥ 0) that can fly a stage at a given takeoff mass, or 'cannot-fly' (closed form). */
@@ -226,8 +226,8 @@ export function payloadForRange(input: PayloadForRangeInput): RoutePayloadResult
     { key: 'stageLength_m', label: 'Stage length', value: s, unit: 'm' },
   ];
   if (cap.payload_kg < -ROUTE_MASS_SLACK_KG) {
-    const reason = `Stage ${km(s)} cannot be flown at a takeoff mass of ${kg(tow)} even with zero payload (limited by the ${ROUTE_LIMIT_LABELS[cap.limitedBy]}).`;
-    return { method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason, payload_kg: 0, limitedBy: cap.limitedBy, trace, warnings: [...m.warnings, reason] };
+    const why = notice('route.cannotFlyAtMass')`Stage ${km(s)} cannot be flown at a takeoff mass of ${kg(tow)} even with zero payload (limited by the ${ROUTE_LIMIT_LABELS[cap.limitedBy]}).`;
+    return { method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason: siText(why), payload_kg: 0, limitedBy: cap.limitedBy, trace, warnings: [...m.warnings, why] };
   }
   const loading = checkLoading(routeLoading(m, s, clampPayload(m, cap.zeroFuelMass_kg)));
   return {
@@ -261,7 +261,7 @@ export interface RouteRangeResult {
   /** The loading over that stage (present when ok). Its takeoff mass may be below the given one. */
   readonly loading?: RouteLoading;
   readonly trace: readonly RouteTraceItem[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Greatest stage length for a payload at a given takeoff mass (closed form). */
@@ -277,8 +277,8 @@ export function rangeForPayload(input: RangeForPayloadInput): RouteRangeResult {
     { key: 'payload_kg', label: 'Payload', value: P, unit: 'kg' },
   ];
   if (r === null) {
-    const reason = `A payload of ${kg(P)} with its reserves does not fit a takeoff mass of ${kg(tow)} and the aircraft limits.`;
-    return { method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason, range_m: 0, trace, warnings: [...m.warnings, reason] };
+    const why = notice('route.payloadDoesNotFit')`A payload of ${kg(P)} with its reserves does not fit a takeoff mass of ${kg(tow)} and the aircraft limits.`;
+    return { method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason: siText(why), range_m: 0, trace, warnings: [...m.warnings, why] };
   }
   const loading = checkLoading(routeLoading(m, r.stage_m, m.oew_kg + P));
   return {

@@ -39,6 +39,7 @@ import { InputDomainError } from '../errors.js';
 import { check } from '../validate.js';
 import { breguetCpFromBsfc, breguetCtFromTsfcPerHour } from './breguet.js';
 import { resolveReserves, type ResolvedReserves, type ReservePolicy } from './reserves.js';
+import { notice, type Notice } from '../notices.js';
 
 /** A limit that caps the payload or the stage: MTOW (or a given takeoff mass), fuel capacity, MLW, structural payload. */
 export type RouteLimit = 'mtow' | 'max-fuel' | 'mlw' | 'max-payload';
@@ -120,7 +121,7 @@ export interface RouteFuelModel {
   readonly taxiFuel_kg: number;
   /** Usable fuel at brake release with full tanks, kg (maxFuel − taxi). */
   readonly fuelAtBrakeRelease_kg: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** Validates the aircraft (it must carry cruise data) and the policy, and builds the fuel model. */
@@ -133,7 +134,7 @@ export function buildRouteFuelModel(aircraft: AircraftProfile, reserves: Reserve
   const c: CruiseData = aircraft.cruise;
   check(c.taxiFuel_kg < aircraft.maxFuel_kg, `${path}.cruise.taxiFuel_kg`, c.taxiFuel_kg, `less than the maximum fuel (${aircraft.maxFuel_kg} kg)`);
   const res = resolveReserves(reserves, c.contingencyFraction);
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const V = c.speed_mps;
   let propulsion: 'jet' | 'propeller';
   let kappa: number;
@@ -152,10 +153,10 @@ export function buildRouteFuelModel(aircraft: AircraftProfile, reserves: Reserve
     // ASSUMPTION: the propeller aircraft holds at its cruise true airspeed (conservative).
     holdRate = (sc * V) / (eta * c.holdLiftToDrag);
     if (res.reserveFlight === 'hold' && res.reserveTime_s > 0 && c.holdFuelFlow_kgph === undefined) {
-      warnings.push('Propeller holding fuel assumes holding at the cruise true airspeed (conservative).');
+      warnings.push(notice('route.propHoldAtCruiseSpeed')`Propeller holding fuel assumes holding at the cruise true airspeed (conservative).`);
     }
     if (res.kind === 'international') {
-      warnings.push('The international reserve rule is written for turbine aircraft other than turboprops; applied here as a planning convention.');
+      warnings.push(notice('route.internationalRuleForProp')`The international reserve rule is written for turbine aircraft other than turboprops; applied here as a planning convention.`);
     }
   }
   const holds = res.reserveFlight === 'hold' && res.reserveTime_s > 0;

@@ -14,6 +14,7 @@
  *
  * Validity: as the fuel model (stage 0–20 000 km, no wind; climb/descent as an allowance).
  */
+import { notice, siText, type Notice } from '../notices.js';
 import type { AircraftProfile } from '../aircraft.js';
 import { finite, inRange } from '../validate.js';
 import type { ReservePolicy, ResolvedReserves } from './reserves.js';
@@ -76,7 +77,7 @@ export interface PayloadRangeDiagram {
   /** Stage length of corner D, m. */
   readonly ferryRange_m: number;
   readonly trace: readonly RouteTraceItem[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 function pointAt(m: RouteFuelModel, stage_m: number): PayloadRangePoint | null {
@@ -130,18 +131,18 @@ export function payloadRangeDiagram(input: PayloadRangeInput): PayloadRangeDiagr
       limitedBy: routeCapacity(m, 0, m.mtow_kg).limitedBy,
       activeLimits: routeCapacity(m, 0, m.mtow_kg).activeLimits,
     };
-    const reason = 'The aircraft cannot carry its reserve fuel within its limits even with zero payload.';
+    const why = notice('payloadRange.reservesUnfundable')`The aircraft cannot carry its reserve fuel within its limits even with zero payload.`;
     return {
-      method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason, aircraftId: aircraft.id, reserves: m.reserves,
+      method: ROUTE_METHOD_VERSION, status: 'cannot-fly', reason: siText(why), aircraftId: aircraft.id, reserves: m.reserves,
       corners: { A: corner('A', p), B: corner('B', p, 'A'), C: corner('C', p, 'A'), D: corner('D', p, 'A') },
-      points: [p], ferryRange_m: 0, trace, warnings: [...warnings, reason],
+      points: [p], ferryRange_m: 0, trace, warnings: [...warnings, why],
     };
   }
   const sD = rD.stage_m;
   const rB = routeReach(m, Wmax, m.mtow_kg);
   const sB = rB ? rB.stage_m : 0;
   if (a0.payload_kg < m.maxPayload_kg - ROUTE_MASS_SLACK_KG) {
-    warnings.push(`The maximum payload cannot be carried even at zero range (limited by ${a0.limitedBy}); corner A shows the greatest payload.`);
+    warnings.push(notice('payloadRange.maxPayloadNotCarried')`The maximum payload cannot be carried even at zero range (limited by ${a0.limitedBy}); corner A shows the greatest payload.`);
   }
 
   // Corner C: MTOW with full tanks, W_ZF = MTOW − (maxFuel − taxi).
@@ -156,7 +157,7 @@ export function payloadRangeDiagram(input: PayloadRangeInput): PayloadRangeDiagr
     const s = routeStageForPhi(m, m.mtow_kg / (Wc + m.holdFuel_kg));
     sC = Math.min(sD, Math.max(sB, s ?? 0));
     if (s === null || s < sB || s > sD) {
-      warnings.push('Corner C (MTOW with full tanks) is cut by another limit; it is shown at the nearest reachable stage.');
+      warnings.push(notice('payloadRange.cornerCCut')`Corner C (MTOW with full tanks) is cut by another limit; it is shown at the nearest reachable stage.`);
     }
   }
 

@@ -26,6 +26,7 @@
  * Pure and deterministic: the same input gives the same result. No rounding other than the named
  * planning-increment step.
  */
+import { notice, qty, scoped, uniqueNotices, type Notice } from '../notices.js';
 import type { AircraftProfile } from '../aircraft.js';
 import { airAt, standardTemperatureC } from '../atmosphere.js';
 import { classifyAircraft } from '../classify.js';
@@ -45,7 +46,7 @@ import {
 } from '../plausibility.js';
 import { designTakeoffMass, payloadForRange, payloadRangeDiagram, type ReservePolicy, type RouteResult } from '../route/index.js';
 import { analyseRunwayProfile, checkDeclaredDistances, checkProfileSlopes } from '../runway.js';
-import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, climbCappedTakeoff, climbLimitedPeak, type CappedTakeoff, type TakeoffResult } from '../takeoff/index.js';
+import { TAKEOFF_GOVERNING_LABELS, analyseTakeoff, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, climbCapNotices, climbCappedTakeoff, climbLimitedPeak, type CappedTakeoff, type TakeoffResult } from '../takeoff/index.js';
 import { check, inRange } from '../validate.js';
 import { validateAircraft } from '../aircraft.js';
 import { calibrateTakeoff, type TakeoffCalibrationResult } from '../calibrate.js';
@@ -58,7 +59,10 @@ import type {
 } from './types.js';
 
 /** Version of the study engine and the models it calls; changes whenever a number can change. */
-export const STUDY_METHOD_VERSION = 'runwright-methods-4';
+/** The project's own words when a profile has no cruise data (route column and row warning). */
+const NO_CRUISE_DATA: Notice = notice('study.noCruiseData')`The profile has no cruise data; the takeoff is sized at MTOW.`;
+
+export const STUDY_METHOD_VERSION = 'runwright-methods-5';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = PEAK_SCAN_SPAN_C;
@@ -88,9 +92,9 @@ export function roundUpToIncrement(length_m: number, increment_m: number): numbe
  * neither is there or the derived value is out of range.
  */
 export function siteDesignTemperature(site: StudyInput['site']): {
-  designTemperature_c: number; source: 'given' | 'climate'; climate: SiteConditions['climate']; hottestMonthMean_c?: number; warnings: string[];
+  designTemperature_c: number; source: 'given' | 'climate'; climate: SiteConditions['climate']; hottestMonthMean_c?: number; warnings: Notice[];
 } {
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   let climate: SiteConditions['climate'];
   let hottestMonthMean_c: number | undefined;
   if (site.climate) {
@@ -140,7 +144,7 @@ export function siteConditions(input: StudyInput): SiteConditions {
   const site = input.site;
   inRange('site.elevation_m', site.elevation_m, SITE_ELEVATION_RANGE);
   check(site.runways.length > 0, 'site.runways', site.runways.length, 'at least one runway');
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const temperature = siteDesignTemperature(site);
   const { designTemperature_c, source, climate } = temperature;
   warnings.push(...temperature.warnings);
@@ -151,7 +155,7 @@ export function siteConditions(input: StudyInput): SiteConditions {
     checkProfileSlopes(prof, `site.runways[${i}].profile`);
     const directions = r.directions.map((d, j) => {
       const dd = checkDeclaredDistances(d);
-      warnings.push(...dd.warnings.map((w) => `Runway ${d.designator}: ${w}`));
+      warnings.push(...dd.warnings.map((w) => scoped(`Runway ${d.designator}`, w)));
       // The first direction takes off towards increasing chainage, the second towards decreasing.
       const slope = prof.takeoffDirections[j === 0 ? 0 : 1].averageSlope;
       return { ...d, stopway_m: dd.stopway_m, clearway_m: dd.clearway_m, slope };
@@ -268,8 +272,8 @@ class Evaluator {
 }
 
 /** The recorded override that lets a corrected reference length beyond 35 % govern: always on the page and in the report. */
-function overrideWarning(what: 'Takeoff' | 'Landing', reference_m: number, model_m: number, reason: string): string {
-  return `${what}: OVERRIDE RECORDED — the corrected reference length (${Math.round(reference_m)} m) governs although the corrections exceed the 35 % limit of the percentage method; the ${what === 'Takeoff' ? 'physics' : 'landing'} model gives ${Math.round(model_m)} m. Reason given: "${reason}".`;
+function overrideWarning(what: 'Takeoff' | 'Landing', reference_m: number, model_m: number, reason: string): Notice {
+  return notice('study.referenceOverride')`${what}: OVERRIDE RECORDED — the corrected reference length (${qty.length(reference_m)}) governs although the corrections exceed the 35 % limit of the percentage method; the ${what === 'Takeoff' ? 'physics' : 'landing'} model gives ${qty.length(model_m)}. Reason given: "${reason}".`;
 }
 
 function takeoffComponents(t: TakeoffResult): TraceItem[] {
@@ -329,14 +333,14 @@ function cappedTakeoff(ev: Evaluator, a: AircraftProfile, mass_kg: number, cond:
 function routeSummary(row: FleetRowInput, r: RouteResult | undefined, mass_kg: number): RouteSummary {
   if (!r) {
     return {
-      status: 'no-cruise-data', reason: 'The profile has no cruise data; the takeoff is sized at MTOW.',
+      status: 'no-cruise-data', reason: NO_CRUISE_DATA,
       stageLength_km: row.stageLength_km, payload_kg: row.payload_kg, payloadLeftBehind_kg: 0,
       takeoffMass_kg: mass_kg, arrivalMass_kg: 0, tripFuel_kg: 0, reserveFuel_kg: 0,
     };
   }
   return {
     status: r.status,
-    ...(r.reason ? { reason: r.reason } : {}),
+    ...(r.why ? { reason: r.why } : {}),
     stageLength_km: row.stageLength_km,
     payload_kg: row.payload_kg,
     payloadLeftBehind_kg: r.payloadOffload_kg,
@@ -359,7 +363,7 @@ function evaluateRow(
   inRange(`${path}.annualOperations`, row.annualOperations, ANNUAL_OPERATIONS_RANGE);
   inRange(`${path}.stageLength_km`, row.stageLength_km, STAGE_LENGTH_RANGE_KM);
   inRange(`${path}.payload_kg`, row.payload_kg, { min: 0, max: a.maxPayload_kg, unit: 'kg' });
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const regularUse = groupOperations >= opts.regularUseThreshold;
   const cls = classification(ev, a, classes);
   const base = {
@@ -374,12 +378,12 @@ function evaluateRow(
     route = designTakeoffMass({ aircraft: a, stageLength_m: row.stageLength_km * 1000, payload_kg: row.payload_kg, reserves: reservePolicyOf(opts.reserves) });
     warnings.push(...route.warnings);
     if (route.status === 'out-of-range') {
-      return cannotOperate(base, route, row, `Cannot fly the design stage of ${row.stageLength_km} km even with no payload: ${route.reason ?? 'beyond reach'}`, warnings);
+      return cannotOperate(base, route, row, notice('study.stageOutOfReach')`Cannot fly the design stage of ${qty.distance(row.stageLength_km * 1000)} even with no payload: ${route.why ?? 'beyond reach'}`, warnings);
     }
     mass = route.designTakeoffMass_kg;
-    if (route.status !== 'ok') warnings.push(`${route.reason ?? route.status}; sized at ${Math.round(mass)} kg with ${Math.round(route.payloadOffload_kg)} kg of payload left behind.`);
+    if (route.status !== 'ok') warnings.push(notice('study.sizedWithOffload')`The design payload does not fit the design stage (${route.status}): the takeoff is sized at ${qty.mass(mass)} with ${qty.mass(route.payloadOffload_kg)} of payload left behind.`);
   } else {
-    warnings.push('No cruise data: takeoff sized at MTOW.');
+    warnings.push(NO_CRUISE_DATA);
   }
   const routeSum = routeSummary(row, route, mass);
 
@@ -389,32 +393,26 @@ function evaluateRow(
   // mass whatever the runway, so the runway is sized at that mass and the offload is reported.
   const capped = cappedTakeoff(ev, a, mass, cond);
   const t0 = capped.first;
-  const climbLabel = t0.climb.limitingLabel ?? `${t0.climb.case} climb at V2`;
-  const missed = `the gradient of the ${climbLabel} is ${(t0.climb.gradient * 100).toFixed(2)} %`;
   if (capped.belowOew) {
     // Missing the minimum even at the operating empty mass: no mass and no runway cures it.
     warnings.push(...t0.warnings);
-    return cannotOperate(base, route, row,
-      `Cannot operate here: ${missed} at ${Math.round(mass)} kg, below the ${(t0.climb.minimum * 100).toFixed(1)} % minimum, and no mass down to the operating empty mass (${Math.round(a.oew_kg)} kg) meets it; a longer runway cannot cure this.`,
-      warnings, mass, routeSum);
+    return cannotOperate(base, route, row, climbCapNotices.belowOew(t0, mass, a.oew_kg), warnings, mass, routeSum);
   }
   let climbOffload: number | undefined;
   const t = capped.t;
   if (capped.climbLimited) {
-    warnings.push(
-      `Climb-limited at the design mass of ${Math.round(mass)} kg: ${missed}, below the ${(t0.climb.minimum * 100).toFixed(1)} % minimum. The greatest mass meeting every climb minimum is ${capped.mass_kg} kg (${Math.round(mass - capped.mass_kg)} kg to offload); a longer runway cannot cure this, so the runway is sized at that mass.`,
-    );
+    warnings.push(climbCapNotices.capped(t0, mass, capped.mass_kg));
     climbOffload = mass - capped.mass_kg;
     mass = capped.mass_kg;
     // The climb-limited mass is itself checked: it must meet the minima and be feasible.
     if (t.feasible && t.climb.limited) {
       warnings.push(...t.warnings);
-      return cannotOperate(base, route, row, `Cannot operate here: even at the climb-limited mass of ${Math.round(mass)} kg the ${t.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`, warnings, mass, routeSum);
+      return cannotOperate(base, route, row, climbCapNotices.atCap(t, mass), warnings, mass, routeSum);
     }
   }
   warnings.push(...t.warnings);
   if (!t.feasible) {
-    return cannotOperate(base, route, row, `Takeoff not possible at ${Math.round(mass)} kg at design conditions: ${t.message}`, warnings, mass, routeSum);
+    return cannotOperate(base, route, row, notice('study.takeoffInfeasible')`Takeoff not possible at ${qty.mass(mass)} at design conditions: ${t.message}`, warnings, mass, routeSum);
   }
   let takeoffRequired = t.required_m;
   const summary: {
@@ -452,23 +450,23 @@ function evaluateRow(
         // Beyond the 35 % limit of the percentage corrections (ICAO Doc 9157, Aerodrome Design Manual Part 1, percentage corrections) the corrected
         // length is indicative only and never governs without a recorded override: the physics model sizes the row.
         warnings.push(...ref.warnings);
-        warnings.push(`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${Math.round(ref.length_m)} m) is shown as indicative only and does not govern; the physics model (${Math.round(t.required_m)} m) sizes this aircraft.`);
+        warnings.push(notice('study.referenceIndicative')`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${qty.length(ref.length_m)}) is shown as indicative only and does not govern; the physics model (${qty.length(t.required_m)}) sizes this aircraft.`);
       } else if (referenceMethod) {
         takeoffRequired = ref.length_m;
         summary.required_m = ref.length_m;
         summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections${overridden ? ' (override beyond the 35 % limit)' : ''}`;
         warnings.push(...ref.warnings);
         if (overridden) warnings.push(overrideWarning('Takeoff', ref.length_m, t.required_m, opts.referenceOverrideReason!));
-        warnings.push('Reference-length method: the reference length is at MTOW; the design mass from the route is not credited.');
+        warnings.push(notice('study.referenceAtMtow')`Reference-length method: the reference length is at MTOW; the design mass from the route is not credited.`);
       }
     }
   } else if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
-    warnings.push('No reference takeoff length in the profile: the physics model is used for this aircraft.');
+    warnings.push(notice('study.noReferenceLength')`No reference takeoff length in the profile: the physics model is used for this aircraft.`);
   }
   if (opts.method === 'calibrated') {
     const c = ev.calibration(a);
     if (c.status === 'ok') summary.calibrationFactor = c.factor;
-    else warnings.push(`Calibration not applied: ${c.message}; the uncalibrated physics model is used.`);
+    else warnings.push(notice('study.calibrationNotApplied')`Calibration not applied: ${c.message}; the uncalibrated physics model is used.`);
   }
 
   // A climb-limited aircraft's requirement can peak below the design temperature (cooler air allows a
@@ -478,9 +476,7 @@ function evaluateRow(
     const uncapped = mass + climbOffload;
     const peak = climbLimitedPeak(a, uncapped, ev.site.designTemperature_c, takeoffRequired, (m, temperature_c) => ev.takeoff(a, m, { ...cond, temperature_c }));
     if (peak) {
-      warnings.push(
-        `The takeoff requirement of this climb-limited aircraft peaks below the design temperature: ${Math.round(peak.required_m)} m at ${peak.temperature_c.toFixed(1)} °C (climb-limited mass ${Math.round(peak.mass_kg)} kg) against ${Math.round(takeoffRequired)} m at the design temperature. The row is sized on the greatest requirement over temperatures up to the design temperature.`,
-      );
+      warnings.push(climbCapNotices.peak(peak, ev.site.designTemperature_c, takeoffRequired));
       takeoffRequired = peak.required_m;
       summary.required_m = peak.required_m;
       summary.governing = `${summary.governing}, peak at ${peak.temperature_c.toFixed(1)} °C below the design temperature`;
@@ -493,7 +489,7 @@ function evaluateRow(
   const l = ev.landing(a, landingMass, ev.site.pressureAltitude_m);
   warnings.push(...l.warnings);
   if (l.status !== 'ok') {
-    return cannotOperate(base, route, row, `Landing not possible at ${Math.round(landingMass)} kg: ${l.reason}`, warnings, mass, routeSum);
+    return cannotOperate(base, route, row, notice('study.landingInfeasible')`Landing not possible at ${qty.mass(landingMass)}: ${l.reason}`, warnings, mass, routeSum);
   }
   let landingRequired = l.required_m;
   let landingSummary: LandingSummary = {
@@ -522,7 +518,7 @@ function evaluateRow(
       landingSummary = { ...landingSummary, required_m: ref.length_m, rule: 'reference length + corrections (override beyond the 35 % limit)' };
       warnings.push(overrideWarning('Landing', ref.length_m, l.required_m, opts.referenceOverrideReason));
     } else if (ref.status === 'ok' && ref.specificStudyRequired) {
-      warnings.push(`Landing: the corrected reference length (${Math.round(ref.length_m)} m) is beyond the 35 % limit of the percentage corrections and is indicative only; the landing model (${Math.round(l.required_m)} m) governs.`);
+      warnings.push(notice('study.landingReferenceIndicative')`Landing: the corrected reference length (${qty.length(ref.length_m)}) is beyond the 35 % limit of the percentage corrections and is indicative only; the landing model (${qty.length(l.required_m)}) governs.`);
     } else if (ref.status === 'ok') {
       landingRequired = ref.length_m;
       landingSummary = { ...landingSummary, required_m: ref.length_m, rule: 'reference length + corrections' };
@@ -532,7 +528,7 @@ function evaluateRow(
   // 4. Plausibility: a requirement beyond the aircraft's bound is a reasoned result, not a length.
   const impractical = implausibleRow(ev, a, t, takeoffRequired, mass, landingRequired, landingMass);
   if (impractical) {
-    return cannotOperate(base, route, row, impractical.reason, warnings, mass, routeSum, impractical);
+    return cannotOperate(base, route, row, impractical.notice, warnings, mass, routeSum, impractical);
   }
 
   const req = requiredLength({ takeoff_m: takeoffRequired, landing_m: landingRequired });
@@ -609,8 +605,8 @@ function cannotOperate(
   base: Omit<RowResult, 'status' | 'reason' | 'takeoffMass_kg' | 'requiredTakeoff_m' | 'requiredLanding_m' | 'required_m' | 'governing' | 'route' | 'existing' | 'warnings'>,
   route: RouteResult | undefined,
   row: FleetRowInput,
-  reason: string,
-  warnings: string[],
+  reason: Notice,
+  warnings: Notice[],
   mass = route?.designTakeoffMass_kg ?? 0,
   routeSum = routeSummary(row, route, mass),
   plausibility?: PlausibilityFinding,
@@ -632,9 +628,7 @@ function cannotOperate(
   };
 }
 
-function dedupe(list: readonly string[]): string[] {
-  return [...new Set(list)];
-}
+const dedupe = uniqueNotices;
 
 // ---------------------------------------------------------------------------------------------
 // Scenario
@@ -698,18 +692,18 @@ export function runStudy(input: StudyInput): StudyResult {
       return evaluateRow(ev, a, row, groupOps.get(a.group ?? a.id)!, classes, `scenarios[${i}].fleet[${j}]`);
     });
     const crit = criticalRow(rows);
-    const excluded = rows.filter((r) => !isOperating(r)).map((r) => ({ aircraft: r.aircraft, reason: r.reason ?? 'cannot operate' }));
-    const warnings: string[] = [];
+    const excluded = rows.filter((r) => !isOperating(r)).map((r) => ({ aircraft: r.aircraft, reason: r.reason ?? notice('study.cannotOperate')`cannot operate` }));
+    const warnings: Notice[] = [];
     // Rows beyond the plausibility bound are named with their reason: they would otherwise have set
     // the recommendation (or been mistaken for one).
     for (const r of rows) {
       if (!r.plausibility) continue;
-      warnings.push(`${r.aircraftName}${r.regularUse ? ' (regular use)' : ''} is left out of the critical-aircraft selection: ${r.reason ?? r.plausibility.reason}`);
+      warnings.push(notice('study.leftOutOfSelection')`${r.aircraftName}${r.regularUse ? ' (regular use)' : ''} is left out of the critical-aircraft selection: ${r.reason ?? r.plausibility.notice}`);
     }
-    if (!crit) warnings.push('No aircraft in regular use can operate at this site: no recommendation.');
+    if (!crit) warnings.push(notice('study.noRecommendation')`No aircraft in regular use can operate at this site: no recommendation.`);
     const irregularLonger = crit ? rows.filter(isOperating).filter((r) => !r.regularUse && r.required_m > crit.required_m) : [];
     for (const r of irregularLonger) {
-      warnings.push(`${r.aircraftName} needs more (${Math.round(r.required_m)} m) but is below the regular-use threshold (${r.groupOperations} of ${opts.regularUseThreshold} operations).`);
+      warnings.push(notice('study.irregularNeedsMore')`${r.aircraftName} needs more (${qty.length(r.required_m)}) but is below the regular-use threshold (${r.groupOperations} of ${opts.regularUseThreshold} operations).`);
     }
     return {
       name: sc.name,

@@ -10,6 +10,7 @@ import type { PlausibilityFinding } from '../plausibility.js';
 import type { OperatingRuleSet } from '../operatingRules.js';
 import type { RunwayDirectionInput } from '../runway.js';
 import type { ExistingRunwayCheck } from '../runwayCheck.js';
+import type { Notice } from '../notices.js';
 
 export type { RunwayDirectionInput } from '../runway.js';
 export type { ExistingRunwayCheck } from '../runwayCheck.js';
@@ -160,7 +161,7 @@ export interface RunwaySummary {
   readonly highPoint_m: number;
   readonly lowPoint_m: number;
   readonly directions: readonly RunwayDirectionSummary[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface SiteConditions {
@@ -181,7 +182,7 @@ export interface SiteConditions {
   readonly designRunway: string;
   /** Uphill slope applied to the design takeoff case (the design runway's effective gradient), ratio. */
   readonly designSlope: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface AircraftClassificationSummary {
@@ -237,7 +238,7 @@ export interface LandingSummary {
 
 export interface RouteSummary {
   readonly status: string;
-  readonly reason?: string;
+  readonly reason?: Notice;
   readonly stageLength_km: number;
   readonly payload_kg: number;
   /** Payload that must stay behind to fly the stage within the limits, kg. */
@@ -258,7 +259,7 @@ export interface RowResult {
   readonly regularUse: boolean;
   readonly status: 'ok' | 'cannot-operate';
   /** Why the aircraft cannot operate here (status 'cannot-operate'). */
-  readonly reason?: string;
+  readonly reason?: Notice;
   readonly takeoffMass_kg: number;
   /**
    * Mass the aircraft must leave behind at design conditions to meet the climb minimum (the route's
@@ -283,7 +284,7 @@ export interface RowResult {
   readonly landing?: LandingSummary;
   readonly classification: AircraftClassificationSummary;
   readonly existing: readonly ExistingRunwayCheck[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface OperationsServedPoint {
@@ -306,8 +307,8 @@ export interface ScenarioResult {
   readonly runwayDesignCode: string | null;
   readonly totalOperations: number;
   readonly operationsServed: readonly OperationsServedPoint[];
-  readonly excluded: readonly { readonly aircraft: string; readonly reason: string }[];
-  readonly warnings: readonly string[];
+  readonly excluded: readonly { readonly aircraft: string; readonly reason: Notice }[];
+  readonly warnings: readonly Notice[];
 }
 
 export interface SensitivityCurve {
@@ -354,7 +355,7 @@ export interface StudyResult {
   readonly sensitivity: readonly SensitivityCurve[];
   /** Payload-range of each critical aircraft with cruise data, computed with the study (views never run the route model). */
   readonly payloadRange: readonly PayloadRangeSeries[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 /** A payload-range diagram of one aircraft as the charts draw it (SI: stage length m, payload kg). */

@@ -7,6 +7,7 @@
  */
 import type { AircraftProfile } from '../aircraft.js';
 import type { TakeoffResult } from './types.js';
+import { notice, qty, type Notice } from '../notices.js';
 
 /**
  * `first` is the takeoff at the mass asked for. When that mass misses a climb minimum, `belowOew`
@@ -61,3 +62,27 @@ export function climbLimitedPeak(
   }
   return peak;
 }
+
+/**
+ * The climb cap's findings in words, one sentence per case, shared by the study rows and the what-if
+ * (the mass is the one asked for: the route's design mass in a study, the panel's mass in a what-if).
+ */
+export const climbCapNotices = {
+  /** What the first takeoff missed: "the gradient of the second segment is 2.10 %". */
+  missed(first: TakeoffResult): Notice {
+    const label = first.climb.limitingLabel ?? `${first.climb.case} climb at V2`;
+    return notice('climb.gradientMissed')`the gradient of the ${label} is ${(first.climb.gradient * 100).toFixed(2)} %, below the ${(first.climb.minimum * 100).toFixed(1)} % minimum`;
+  },
+  belowOew(first: TakeoffResult, mass_kg: number, oew_kg: number): Notice {
+    return notice('climb.limitedAtOew')`Cannot operate here: at ${qty.mass(mass_kg)} ${climbCapNotices.missed(first)}, and no mass down to the operating empty mass (${qty.mass(oew_kg)}) meets it; a longer runway cannot cure this.`;
+  },
+  atCap(t: TakeoffResult, capMass_kg: number): Notice {
+    return notice('climb.limitedAtCap')`Cannot operate here: even at the climb-limited mass of ${qty.mass(capMass_kg)} the ${t.climb.limitingLabel ?? 'climb'} gradient misses its minimum.`;
+  },
+  capped(first: TakeoffResult, mass_kg: number, capMass_kg: number): Notice {
+    return notice('climb.capped')`Climb-limited at ${qty.mass(mass_kg)}: ${climbCapNotices.missed(first)}. The greatest mass meeting every climb minimum is ${qty.mass(capMass_kg)} (${qty.mass(mass_kg - capMass_kg)} to offload); a longer runway cannot cure this, so the runway is sized at that mass.`;
+  },
+  peak(peak: { temperature_c: number; required_m: number; mass_kg: number }, temperature_c: number, atTemperature_m: number): Notice {
+    return notice('climb.peakBelowTemperature')`The takeoff requirement of this climb-limited aircraft peaks below ${qty.temperature(temperature_c)}: ${qty.length(peak.required_m)} at ${qty.temperature(peak.temperature_c)} (climb-limited mass ${qty.mass(peak.mass_kg)}) against ${qty.length(atTemperature_m)} at ${qty.temperature(temperature_c)}. The requirement is sized on the greatest over the temperatures up to ${qty.temperature(temperature_c)}.`;
+  },
+};

@@ -18,6 +18,7 @@
  * Validity: see model.ts (input ranges); dry-runway certification rules applied on every surface
  * (the surface changes friction only). Infeasible physics is a result with a reason, never NaN.
  */
+import { notice, qty, type Notice } from '../notices.js';
 import { LIGHT_TAKEOFF_FACTOR_DEFAULT } from '../operatingRules.js';
 import { buildSpeedTable, distanceAt, type SpeedTable } from './quadrature.js';
 import {
@@ -47,7 +48,7 @@ import type {
 export type * from './types.js';
 export { takeoffSetup, rollAcceleration, stopDeceleration, TAKEOFF_INPUT_RANGES, MIN_ACCELERATION_MPS2 } from './model.js';
 export type { TakeoffSetup } from './model.js';
-export { climbCappedTakeoff, climbLimitedPeak, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, type CappedTakeoff } from './climbCap.js';
+export { climbCapNotices, climbCappedTakeoff, climbLimitedPeak, PEAK_SCAN_SPAN_C, PEAK_SCAN_STEP_C, type CappedTakeoff } from './climbCap.js';
 export { airborneDistance, rotationDistance, TRANSITION_LOAD_FACTOR } from './airborne.js';
 export { gearDragIncrement, gearUpCd0, climbAtV2, firstSegmentAt, climbChecks } from './climb.js';
 export { energyAirborne, MAX_ENGINE_OUT_AIR_M, GEAR_SELECT_DELAY_S, AIR_STEPS } from './energyAirborne.js';
@@ -252,7 +253,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   const n = s.engineCount;
   const basis = a.certification;
   const trace: TakeoffTraceEntry[] = [];
-  const warnings: string[] = [];
+  const warnings: Notice[] = [];
   const t = (label: string, value: number, unit: string): void => { trace.push({ label, value, unit }); };
 
   t('Air density', s.air.density_kgm3, 'kg/m³');
@@ -275,9 +276,9 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   if (n > 1) t(`Stop activation time after V1${a.stopActivationTime_s === undefined ? ' (default, from memory)' : ''}`, s.activation_s, 's');
 
   if (basis !== 'normal' && isWet(input.surface)) {
-    warnings.push('Wet runway: friction is reduced, but the wet-runway rules of 14 CFR 25.109/25.113 (15-ft screen, reverse-thrust credit) are not modelled.');
+    warnings.push(notice('takeoff.wetRulesNotModelled')`Wet runway: friction is reduced, but the wet-runway rules of 14 CFR 25.109/25.113 (15-ft screen, reverse-thrust credit) are not modelled.`);
   }
-  for (const r of s.speedsRaised) warnings.push(`${r}.`);
+  warnings.push(...s.speedsRaised);
   const easFactor = Math.sqrt(s.air.sigma);
   const baseSpeeds: TakeoffSpeeds = {
     vs1_mps: s.vs1, vr_mps: s.vr, vlof_mps: s.vlof, v2_mps: s.v2, v1_mps: undefined, vef_mps: undefined,
@@ -296,14 +297,14 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   t('Climb gradient at V2 (second segment)', climb.gradient, '');
   if (climb.firstSegment) t('Climb gradient at VLOF, gear down (first segment)', climb.firstSegment.gradient, '');
   if (s.cd0GearUpSource === 'derived' && s.cd0GearUpFloor && n > 1) {
-    warnings.push('The derived gear-up drag fell below 40 % of the takeoff zero-lift drag; that floor was used.');
+    warnings.push(notice('takeoff.gearUpDragFloor')`The derived gear-up drag fell below 40 % of the takeoff zero-lift drag; that floor was used.`);
   }
   if (climb.limited) {
     const seg = climb.limitingSegment === 'first' ? climb.firstSegment! : { gradient: climb.gradient, minimum: climb.minimum };
     warnings.push(
       climb.maxMass_kg !== undefined
-        ? `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %); the greatest mass that meets every climb minimum is ${Math.floor(climb.maxMass_kg).toLocaleString('en-US')} kg. A longer runway cannot cure this.`
-        : `Climb-limited: the ${climb.limitingLabel} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %) even at the operating empty mass. A longer runway cannot cure this.`,
+        ? notice('takeoff.climbLimited')`Climb-limited: the ${climb.limitingLabel ?? 'climb'} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %); the greatest mass that meets every climb minimum is ${qty.mass(Math.floor(climb.maxMass_kg))}. A longer runway cannot cure this.`
+        : notice('takeoff.climbLimitedAtOew')`Climb-limited: the ${climb.limitingLabel ?? 'climb'} gradient (${pct(seg.gradient)}) is below the minimum (${(seg.minimum * 100).toFixed(1)} %) even at the operating empty mass. A longer runway cannot cure this.`,
     );
   }
 
@@ -348,7 +349,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   const avgForce = (s.vlofG * s.vlofG) / (2 * aAvg);
   const avgDiff = ((avgForce - sVlof) / sVlof) * 100;
   if (Math.abs(avgDiff) > AVERAGE_FORCE_WARN_PCT) {
-    warnings.push(`The average-force estimate differs from the integrated ground run by ${avgDiff.toFixed(1)} %.`);
+    warnings.push(notice('takeoff.averageForceDiffers')`The average-force estimate differs from the integrated ground run by ${avgDiff.toFixed(1)} %.`);
   }
   allEngines = {
     groundRun_m: sVr, rotation_m: rot, liftoff_m: liftoff, airborne_m: air.distance_m, toScreen_m: toScreen,
@@ -374,7 +375,7 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
     if (!fm.ok && 'raiseVr_mps' in fm) return fm;
     if (!fm.ok) {
       if (basis !== 'normal') return infeasible(fm.reason, fm.message);
-      warnings.push(`Engine-failure analysis not available: ${fm.message}`);
+      warnings.push(notice('takeoff.engineOutUnavailable')`Engine-failure analysis not available: ${fm.message}`);
     } else {
       const b = balance(fm.model, fm.lo, fm.hi, fm.hiBasis);
       const p = b.point;
@@ -389,9 +390,9 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
         brakeSpeed_mps: p.brakeSpeed, brakeEnergy_J: brakeEnergy, activation_s: s.activation_s,
       };
       speeds = { ...baseSpeeds, v1_mps: p.v1G + s.wind_mps, vef_mps: p.vefG + s.wind_mps, v1Basis: b.basis };
-      if (b.basis === 'vmcg') warnings.push('V1 is held at its VMCG-based minimum; the field length is unbalanced (accelerate-stop exceeds the continued takeoff).');
-      if (b.basis === 'vr') warnings.push('V1 is held at VR; the field length is unbalanced (the continued takeoff exceeds accelerate-stop).');
-      if (b.basis === 'vmbe') warnings.push('V1 is held at the brake-energy limit (VMBE); the field length is unbalanced (the continued takeoff exceeds accelerate-stop).');
+      if (b.basis === 'vmcg') warnings.push(notice('takeoff.v1AtVmcg')`V1 is held at its VMCG-based minimum; the field length is unbalanced (accelerate-stop exceeds the continued takeoff).`);
+      if (b.basis === 'vr') warnings.push(notice('takeoff.v1AtVr')`V1 is held at VR; the field length is unbalanced (the continued takeoff exceeds accelerate-stop).`);
+      if (b.basis === 'vmbe') warnings.push(notice('takeoff.v1AtVmbe')`V1 is held at the brake-energy limit (VMBE); the field length is unbalanced (the continued takeoff exceeds accelerate-stop).`);
       t('Engine out: V1 window low (true airspeed)', fm.lo + s.wind_mps, 'm/s');
       t('Engine out: V1 window high (true airspeed)', fm.hi + s.wind_mps, 'm/s');
       if (fm.airborne.floored) t('Engine out: air distance held at the all-engines transition arc (energy method shorter)', fm.airborne.distance_m, 'm');

@@ -24,6 +24,7 @@
  * Validity: pressure altitude −400…4 500 m, |slope| ≤ 3 %, tailwind ≤ 15 m/s, headwind ≤ 25 m/s and
  * below half the stall speed, masses OEW…MTOW.
  */
+import { notice, type Notice } from '../notices.js';
 import { airAt } from '../atmosphere.js';
 import { stallSpeed, validateAircraft, type AircraftProfile } from '../aircraft.js';
 import { check, inRange } from '../validate.js';
@@ -62,7 +63,7 @@ export interface SpeedSchedule {
   readonly vlof: number;
   readonly v2: number;
   /** Plain words for each rule of 25.107 that raised a scheduled speed. */
-  readonly raised: readonly string[];
+  readonly raised: readonly Notice[];
 }
 
 /**
@@ -72,32 +73,32 @@ export interface SpeedSchedule {
 export function speedSchedule(
   a: AircraftProfile, vs1: number, vmca: number | undefined, vrAtLeast?: number,
 ): SpeedSchedule {
-  const raised: string[] = [];
+  const raised: Notice[] = [];
   const vrSched = a.vrFactor * vs1;
   let vr = vrSched;
   if (vmca !== undefined && VR_OVER_VMCA * vmca > vr) {
     vr = VR_OVER_VMCA * vmca;
-    raised.push('VR raised to 1.05 × VMCA (14 CFR 25.107(e)(1)(ii))');
+    raised.push(notice('takeoff.vrRaisedVmca')`VR raised to 1.05 × VMCA (14 CFR 25.107(e)(1)(ii)).`);
   }
   if (vrAtLeast !== undefined && vrAtLeast > vr) {
     vr = vrAtLeast;
-    raised.push('VR raised to the least V1 that an engine failure at VMCG allows (14 CFR 25.107(e)(1)(i): VR ≥ V1)');
+    raised.push(notice('takeoff.vrRaisedV1')`VR raised to the least V1 that an engine failure at VMCG allows (14 CFR 25.107(e)(1)(i): VR ≥ V1).`);
   }
   const lift = vr - vrSched;
   let vlof = a.vlofFactor * vs1 + lift;
   if (a.vmuFactor !== undefined && vlof < VLOF_OVER_VMU * a.vmuFactor * vs1) {
     vlof = VLOF_OVER_VMU * a.vmuFactor * vs1;
-    raised.push('VLOF raised to 1.10 × VMU (14 CFR 25.107(e)(1)(iv), from memory)');
+    raised.push(notice('takeoff.vlofRaisedVmu')`VLOF raised to 1.10 × VMU (14 CFR 25.107(e)(1)(iv), from memory).`);
   }
   let v2 = a.v2Factor * vs1 + lift;
   const floor = v2StallFloor(a.certification, a.engineCount);
   if (floor !== undefined && v2 < floor * vs1) {
     v2 = floor * vs1;
-    raised.push(`V2 raised to ${floor.toFixed(2)} × VS1 (14 CFR 25.107(b), from memory)`);
+    raised.push(notice('takeoff.v2RaisedStall')`V2 raised to ${floor.toFixed(2)} × VS1 (14 CFR 25.107(b), from memory).`);
   }
   if (vmca !== undefined && v2 < V2_OVER_VMCA * vmca) {
     v2 = V2_OVER_VMCA * vmca;
-    raised.push('V2 raised to 1.10 × VMCA (14 CFR 25.107(b)(3), (c))');
+    raised.push(notice('takeoff.v2RaisedVmca')`V2 raised to 1.10 × VMCA (14 CFR 25.107(b)(3), (c)).`);
   }
   if (v2 < vlof) v2 = vlof;
   return { vr, vlof, v2, raised };
@@ -146,7 +147,7 @@ export interface TakeoffSetup {
   /** Where VMCA came from. */
   readonly vmcaSource?: 'profile' | 'equal to VMCG (derived default)';
   /** Rules of 25.107 that raised the scheduled speeds. */
-  readonly speedsRaised: readonly string[];
+  readonly speedsRaised: readonly Notice[];
   /** Takeoff C_D0, gear up, and its source. */
   readonly cd0GearUp: number;
   readonly cd0GearUpSource: 'profile' | 'derived';

@@ -6,6 +6,7 @@
  * which equals calibrated airspeed at takeoff speeds to well under 1 %.
  */
 import type { AircraftProfile, CertificationBasis } from '../aircraft.js';
+import type { Notice } from '../notices.js';
 import type { Surface } from '../surface.js';
 
 export interface TakeoffInput {
@@ -78,7 +79,7 @@ export interface TakeoffSpeeds {
   readonly vmca_mps?: number;
   readonly vmcaSource?: string;
   /** Rules of 14 CFR 25.107 that raised the scheduled VR, VLOF or V2. */
-  readonly raised: readonly string[];
+  readonly raised: readonly Notice[];
   /** What fixed V1 ('none' for single-engine aircraft). */
   readonly v1Basis: V1Basis | 'none';
   /** √σ: true airspeed × easFactor = equivalent airspeed. */
@@ -207,7 +208,7 @@ interface TakeoffCommon {
   /** Screen height used, m (35 ft transport/commuter, 50 ft normal). */
   readonly screenHeight_m: number;
   readonly speeds: TakeoffSpeeds;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
   readonly trace: readonly TakeoffTraceEntry[];
 }
 

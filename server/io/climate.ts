@@ -20,6 +20,7 @@ import {
   type DailyFileTemperatureUnit,
   type MonthlyClimate,
   type SiteClimate,
+  type Notice,
 } from '../../core/index.js';
 import { NotFoundError } from '../../db/errors.js';
 import { getSite, setSiteClimate } from '../../db/repos/sites.js';
@@ -48,7 +49,7 @@ export interface ClimateFileInput {
 export interface ClimateFileResult {
   readonly climate: SiteClimate;
   /** Warnings from the reader and the monthly reduction. */
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Notice[];
 }
 
 const FORMAT_LABEL: Record<ClimateFileFormat, string> = {
@@ -67,7 +68,7 @@ function describeSource(station: string, input: ClimateFileInput, tail: string):
   return s.length > 300 ? s.slice(0, 300) : s;
 }
 
-function readMonths(text: string, input: ClimateFileInput): { climate: SiteClimate; warnings: string[] } {
+function readMonths(text: string, input: ClimateFileInput): { climate: SiteClimate; warnings: Notice[] } {
   if (input.format === 'monthly-normals') {
     const r = readMonthlyNormalsCsv({ text });
     if (r.skipped.length > 0 || r.months.length < 12) {
@@ -114,7 +115,7 @@ function toMonthly(m: MonthlyClimate): MonthlyClimate {
 export function readClimateFile(input: ClimateFileInput): ClimateFileResult {
   if (!CLIMATE_FILE_FORMATS.includes(input.format)) fail(`unknown climate file format ${JSON.stringify(input.format)}; one of ${CLIMATE_FILE_FORMATS.join(', ')}`);
   const text = decodeUtf8(input.data, 'climate file');
-  let out: { climate: SiteClimate; warnings: string[] };
+  let out: { climate: SiteClimate; warnings: Notice[] };
   try {
     out = readMonths(text, input);
   } catch (e) {

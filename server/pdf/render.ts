@@ -19,7 +19,7 @@ import { studyCharts } from '../../core/index.js';
 import {
   buildAppendixModel, type AppendixModel, type Block, type Cell, type Column, type ReportSection, type Row,
 } from '../../core/index.js';
-import { UNIT_SYSTEM_LABELS } from '../../templates/format.js';
+import { UNIT_SYSTEM_LABELS, say } from '../../templates/format.js';
 import { cellText, kindSymbol } from '../../templates/reportCells.js';
 import { canonicalJson, inputDigest, type StudyOutput } from '../studies/index.js';
 import { drawChart, chartBox, legendHeight } from './chart.js';
@@ -192,12 +192,12 @@ class Writer {
 
   block(b: Block): void {
     switch (b.type) {
-      case 'paragraph': return this.paragraph(b.text, b.style ?? 'normal');
+      case 'paragraph': return this.paragraph(say(b.text, this.units), b.style ?? 'normal');
       case 'subheading': return this.subheading(b.text);
       case 'facts': return this.facts(b.items);
       case 'table': return this.table(b.caption, b.columns, b.rows, b.note);
       case 'formulas': return this.formulas(b.lines);
-      case 'list': return this.list(b.items, b.ordered ?? false);
+      case 'list': return this.list(b.items.map((i) => say(i, this.units)), b.ordered ?? false);
       case 'chart': return this.chart(b.chart);
     }
   }

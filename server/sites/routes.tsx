@@ -7,6 +7,7 @@ import { Hono, type Context } from 'hono';
 import {
   InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances, climateChart, siteDesignTemperature,
   runwayProfileChart, type DailyFileTemperatureUnit, type RunwayInput, type SiteInput,
+  type Notice,
 } from '../../core/index.js';
 import { NotFoundError, SiteInUseError } from '../../db/errors.js';
 import { createSite, deleteSite, getSite, listSites, setSiteClimate, siteInput, updateSite } from '../../db/repos/sites.js';
@@ -57,7 +58,7 @@ function designView(s: SiteInput): DesignTemperatureView {
 }
 
 function runwayView(r: RunwayInput, index: number): RunwayView {
-  const warnings: string[] = [];
+  const warnings: (string | Notice)[] = [];
   let geo: ReturnType<typeof analyseRunwayProfile> | undefined;
   try {
     const [a, b] = r.directions;

@@ -4,7 +4,7 @@
  * A row that cannot operate has empty requirement cells and its reason in the `reason` column.
  */
 import { stringify } from 'csv-stringify/sync';
-import { CAUTION_TEXT, unitOf, type UnitSystem } from '../../core/index.js';
+import { CAUTION_TEXT, noticeText, plainFormat, unitOf, type UnitSystem } from '../../core/index.js';
 import type { StudyOutput } from './document.js';
 import { csvSafeRecords } from '../io/csvSafe.js';
 
@@ -15,6 +15,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
   const mass = unitOf('mass', units);
   const L = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(len.from(v), 0));
   const M = (v: number | null | undefined) => (v === null || v === undefined ? '' : round(mass.from(v), 0));
+  const text = plainFormat(units);
   const header = [
     'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status', 'reason',
     `takeoff_mass_${mass.symbol}`, `required_takeoff_${len.symbol}`, `required_landing_${len.symbol}`, `required_${len.symbol}`,
@@ -34,7 +35,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
       rows.push([
         s.name, r.aircraft, r.aircraftName, String(r.annualOperations), String(r.groupOperations), r.regularUse ? 'yes' : 'no', r.status,
         // Why a row has no requirement (cannot operate, or beyond the plausibility bound): never a bare blank.
-        r.reason ?? '',
+        r.reason ? noticeText(r.reason, text) : '',
         M(r.takeoffMass_kg), ok ? L(r.requiredTakeoff_m) : '', ok ? L(r.requiredLanding_m) : '', ok ? L(r.required_m) : '',
         ok ? r.governing : '', r.takeoff?.governing ?? '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
         critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '',
@@ -43,7 +44,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
           ? [L(r.takeoff?.physics_m), L(r.takeoff?.reference_m), L(r.takeoff?.torenbeek_m), L(r.takeoff?.roskam_m),
             L(r.landing?.distance_m), r.landing?.rule ?? '', r.landing?.ruleSource ?? '', L(r.landing?.roskam_m)]
           : ['', '', '', '', '', '', '', '']),
-        r.warnings.join(' | '),
+        r.warnings.map((w) => noticeText(w, text)).join(' | '),
       ]);
     }
   }

@@ -3,7 +3,7 @@
  * table, the design temperature by both hottest-month criteria, runways with their profile table and
  * chart and declared distances, the station-file import), and the runway form.
  */
-import type { ChartModel, RunwayInput, SiteInput, UnitSystem } from '../../core/index.js';
+import type { ChartModel, RunwayInput, SiteInput, UnitSystem, Notice as CoreNotice } from '../../core/index.js';
 import { ListPager, listCaption, type ListPaging } from '../pager.js';
 import { monthName } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
@@ -145,7 +145,7 @@ export interface DesignTemperatureView {
   readonly maxMeanMax_c?: number;
   readonly monthsDiffer?: boolean;
   readonly olderFormula_c?: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly (string | CoreNotice)[];
 }
 
 export interface RunwayView {
@@ -156,7 +156,7 @@ export interface RunwayView {
   readonly elevationDifference_m?: number;
   readonly directions: readonly { designator: string; tora_m: number; toda_m: number; asda_m: number; lda_m: number; stopway_m?: number; clearway_m?: number; slope?: number }[];
   readonly chart?: ChartModel;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly (string | CoreNotice)[];
 }
 
 export interface SiteDetailProps {

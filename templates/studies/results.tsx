@@ -8,7 +8,7 @@ import type { ChartModel, RowResult, ScenarioResult, StudyResult } from '../../c
 import { SURFACE_LABELS, componentSections } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { PostForm, Warnings } from '../components.js';
-import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtSlope } from '../format.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, fmtSlope, say } from '../format.js';
 import { IDS } from '../ids.js';
 import { cellText } from '../reportCells.js';
 import { useView } from '../view.js';
@@ -49,7 +49,7 @@ export function RowComponents(p: { row: RowResult }) {
         </table>
       ))}
       <ExistingDetail row={r} />
-      {r.warnings.length > 0 ? <ul class="warnings-inline">{r.warnings.map((w) => <li>{w}</li>)}</ul> : null}
+      {r.warnings.length > 0 ? <ul class="warnings-inline">{r.warnings.map((w) => <li>{say(w, units)}</li>)}</ul> : null}
     </div>
   );
 }
@@ -101,7 +101,7 @@ function ScenarioTable(p: { s: ScenarioResult; index: number; studyId: number })
                         <td>{r.governing}{r.governing === 'takeoff' && r.takeoff ? `: ${r.takeoff.governing}` : ''}</td>
                       </>
                     ) : (
-                      <td colspan={5} class="cannot">{r.plausibility ? r.reason : `Cannot operate: ${r.reason ?? ''}`}</td>
+                      <td colspan={5} class="cannot">{r.plausibility && r.reason ? say(r.reason, units) : `Cannot operate: ${r.reason ? say(r.reason, units) : ''}`}</td>
                     )}
                     <td>{r.classification.runwayDesignCode} / {r.classification.aerodromeCode}</td>
                     <td><a href={url} hx-get={url} hx-target={`#${id}`} hx-swap="innerHTML" aria-controls={id}>Components<span class="sr-only"> of {r.aircraftName}</span></a></td>
@@ -113,7 +113,7 @@ function ScenarioTable(p: { s: ScenarioResult; index: number; studyId: number })
           </tbody>
         </table>
       </div>
-      {s.excluded.length > 0 ? <ul class="muted">{s.excluded.map((e) => <li>Not eligible: {e.aircraft}: {e.reason}</li>)}</ul> : null}
+      {s.excluded.length > 0 ? <ul class="muted">{s.excluded.map((e) => <li>Not eligible: {e.aircraft}: {say(e.reason, units)}</li>)}</ul> : null}
       <Warnings items={s.warnings} title="Scenario warnings" />
     </section>
   );

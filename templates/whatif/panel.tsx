@@ -6,7 +6,7 @@
  */
 import { LANDING_RULE_LABELS, SURFACES, SURFACE_LABELS, TAKEOFF_GOVERNING_LABELS } from '../../core/index.js';
 import type { DisplayKind, WhatIfOutcome } from '../../core/index.js';
-import { fmt, fmtIsaDeviation, fmtLengthBoth, unitSymbol } from '../format.js';
+import { fmt, fmtIsaDeviation, fmtLengthBoth, say, unitSymbol } from '../format.js';
 import { fieldId, type Errors, type Values } from '../forms.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
@@ -87,7 +87,7 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
               Required length: <strong data-testid="whatif-required">{o.required_m !== undefined ? fmtLengthBoth(o.required_m, units) : o.impractical ? 'cannot practically operate here' : 'not possible here'}</strong>
               {o.governing ? <span class="muted"> ({o.governing} governs)</span> : null}
             </p>
-            {o.impractical ? <p class="cannot" data-testid="whatif-impractical">{o.impractical}</p> : null}
+            {o.impractical ? <p class="cannot" data-testid="whatif-impractical">{say(o.impractical, units)}</p> : null}
             {delta !== undefined ? (
               <p class="delta">
                 {delta === 0 ? 'Same as' : `${delta > 0 ? '+' : '−'}${fmt(Math.abs(delta), 'length', units)} against`} {p.baseline!.label}
@@ -96,8 +96,8 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
             ) : null}
             <table class="compact">
               <tbody>
-                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? <>{caseLabel(o.takeoff.governing)}{o.takeoff.note ? <div class="muted" data-testid="whatif-takeoff-note">{o.takeoff.note}</div> : null}</> : o.takeoff.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.takeoff.reason}</td></tr>
-                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? <>{caseLabel(o.landing.governing)}{o.landing.note ? <div class="muted">{o.landing.note}</div> : null}</> : o.landing.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.landing.reason}</td></tr>
+                <tr><th scope="row">Takeoff</th><td class="num">{o.takeoff.ok ? fmt(o.takeoff.required_m, 'length', units) : '—'}</td><td>{o.takeoff.ok ? <>{caseLabel(o.takeoff.governing)}{o.takeoff.note ? <div class="muted" data-testid="whatif-takeoff-note">{o.takeoff.note.map((n) => say(n, units)).join(' ')}</div> : null}</> : o.takeoff.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.takeoff.reason ? say(o.takeoff.reason, units) : '—'}</td></tr>
+                <tr><th scope="row">Landing at MLW</th><td class="num">{o.landing.ok ? fmt(o.landing.required_m, 'length', units) : '—'}</td><td>{o.landing.ok ? <>{caseLabel(o.landing.governing)}{o.landing.note ? <div class="muted">{o.landing.note.map((n) => say(n, units)).join(' ')}</div> : null}</> : o.landing.impractical ? `Beyond the plausibility bound${o.plausibilityBound_m === undefined ? '' : ` (${fmt(o.plausibilityBound_m, 'length', units)})`}: cannot practically operate here.` : o.landing.reason ? say(o.landing.reason, units) : '—'}</td></tr>
                 <tr><th scope="row">Density altitude</th><td class="num">{fmt(o.densityAltitude_m, 'altitude', units)}</td><td>{fmtIsaDeviation(o.isaDeviation_c, units)}</td></tr>
                 <tr><th scope="row">Speeds</th><td colspan={2}>
                   {o.v1_mps !== undefined ? `V1 ${fmt(o.v1_mps, 'speed', units)}, ` : ''}VR {fmt(o.vr_mps, 'speed', units)}, V2 {fmt(o.v2_mps, 'speed', units)}
@@ -105,7 +105,7 @@ export function WhatIfResult(p: { outcome?: WhatIfOutcomeView; baseline?: WhatIf
                 </td></tr>
               </tbody>
             </table>
-            {o.warnings.length > 0 ? <ul class="warnings-inline">{o.warnings.map((w) => <li>{w}</li>)}</ul> : null}
+            {o.warnings.length > 0 ? <ul class="warnings-inline">{o.warnings.map((w) => <li>{say(w, units)}</li>)}</ul> : null}
           </>
         )}
       </div>

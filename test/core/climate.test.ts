@@ -1,3 +1,4 @@
+import { siText } from '../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import {
   ClimateFileError,
@@ -72,8 +73,8 @@ describe('design temperature from monthly values (ICAO Annex 14 Vol I §2.4.1–
     expectClose(r.olderFormula?.art_c ?? Number.NaN, 30.76, { abs: 0.005 });
     expect(r.months.map((m) => m.month)).toEqual([7, 8]);
     expect(r.months[1]?.meanSource).toBe('max-min');
-    expect(r.warnings.some((w) => w.includes('is not the month with the highest mean daily maximum'))).toBe(true);
-    expect(r.warnings.some((w) => w.includes('among 2 of 12 months'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('is not the month with the highest mean daily maximum'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('among 2 of 12 months'))).toBe(true);
     expect(r.trace.find((t) => t.label.startsWith('aerodrome reference temperature'))?.value).toBe(r.art_c);
   });
 
@@ -109,7 +110,7 @@ describe('design temperature from monthly values (ICAO Annex 14 Vol I §2.4.1–
     });
     expect(r.hottestMonth).toBe(8);
     expect(r.monthsDiffer).toBe(false);
-    expect(r.warnings.some((w) => w.includes('share the highest mean temperature'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('share the highest mean temperature'))).toBe(true);
   });
 
   it('refuses bad input with InputDomainError naming the field', () => {
@@ -235,7 +236,7 @@ describe('design temperature from daily records (§10.4 steps; NOAA GSOM complet
     // Older formula on July: 28.5 + (33.5 − 28.5)/3 (derived).
     expectClose(r.design?.olderFormula?.art_c ?? Number.NaN, 28.5 + 5 / 3, { abs: ABS });
     // Four years for the design month: fewer than the five usually asked for.
-    expect(r.warnings.some((w) => w.includes('July rests on 4 year(s)'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('July rests on 4 year(s)'))).toBe(true);
     expect(r.trace.find((t) => t.label === 'years used for the hottest month')?.value).toBe(4);
   });
 
@@ -267,7 +268,7 @@ describe('daily aggregation details (derived by hand)', () => {
     expect(jan?.tmax.longestMissingRun_days).toBe(1);
     expect(jan?.used).toBe(true);
     expect(r.design?.hottestMonth).toBe(1);
-    expect(r.warnings.some((w) => w.includes('among 1 of 12 months'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('among 1 of 12 months'))).toBe(true);
   });
 
   it('TAVG is used for the mean when complete; meanSource "max-min" ignores it', () => {
@@ -297,7 +298,7 @@ describe('daily aggregation details (derived by hand)', () => {
     }
     const r = climateFromDaily({ days, fromYear: 2020, toYear: 2021 });
     expect(r.calendarMonths[6]?.mean_c).toBe((26 + 25) / 2);
-    expect(r.warnings.some((w) => w.includes('from TAVG in some years'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('from TAVG in some years'))).toBe(true);
   });
 
   it('a record with no temperatures gives a result with a reason, not an exception', () => {
@@ -352,7 +353,7 @@ describe('GHCN-Daily by-station CSV (GHCN-D readme field list and units, NOAA NC
     expect(r.days[0]).toEqual({ date: '2023-07-01', tmax_c: 34.5, tmin_c: 22.1 });
     expect(r.days.find((d) => d.date === '2023-07-03')).toEqual({ date: '2023-07-03', tmin_c: 23 });
     expect(r.summary).toEqual({ rowsRead: 12, valuesKept: 9, valuesDroppedQc: 1, valuesMissing: 1, rowsOtherElements: 1 });
-    expect(r.warnings[0]).toContain('1 temperature value(s) dropped');
+    expect(siText(r.warnings[0]!)).toContain('1 temperature value(s) dropped');
     expect(r.days.map((d) => d.date)).toEqual(['2023-07-01', '2023-07-02', '2023-07-03', '2023-08-01', '2023-08-02']);
   });
 
@@ -518,7 +519,7 @@ describe('monthly normals CSV (normals 1991-2020 access layout, °F, NOAA NCEI U
     const r = readMonthlyNormalsCsv({ text: t });
     expect(r.months.map((m) => m.month)).toEqual([7]);
     expect(r.skipped).toEqual([{ month: 8, reason: 'August: no maximum normal' }]);
-    expect(r.warnings.some((w) => w.includes('no row for January'))).toBe(true);
+    expect(r.warnings.map(siText).some((w) => w.includes('no row for January'))).toBe(true);
   });
 
   it('refuses bad rows with line and column', () => {

@@ -1,3 +1,4 @@
+import { siText } from '../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import {
   INDICATIVE_LABEL, authorityAdjustments, icaoCorrections, icaoSlopeStep,
@@ -21,7 +22,7 @@ describe('ICAO percentage corrections — check case 5 (Made Easy Ex. 3.2 [C2]; 
     const l = icaoCorrections({ basicLength_m: 1650, elevation_m: 250, referenceTemperature_c: 32.9, effectiveGradient: 0.002, slopeRule: 'legacy-20' });
     expectClose(l.corrected_m, 2170.69, { abs: 0.005 }, 'L3 legacy');
     expect(l.steps[2]!.label).toMatch(/legacy/);
-    expect(l.warnings.join(' ')).toMatch(/Legacy 20 %/);
+    expect(l.warnings.map(siText).join(' ')).toMatch(/Legacy 20 %/);
   });
   it('every step is in the trace with before, increment and after', () => {
     expect(r.steps.map((s) => s.kind)).toEqual(['elevation', 'temperature', 'slope']);
@@ -55,7 +56,7 @@ describe('ICAO rule details (ICAO Doc 9157, Aerodrome Design Manual Part 1, perc
     const r = icaoCorrections({ basicLength_m: 2000, elevation_m: 2000, referenceTemperature_c: 30, effectiveGradient: 0 });
     expect(r.specificStudyRequired).toBe(true);
     expect(r.label).toBe(INDICATIVE_LABEL);
-    expect(r.warnings.join(' ')).toMatch(/specific study/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/specific study/);
   });
   it('flag boundary: exactly 35 % is not flagged, just above is (derived)', () => {
     // Elevation only at sea-level ISA: 1500 m gives 0.07 × 5 = 35 %; temperature at standard (5.25 °C).

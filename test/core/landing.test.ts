@@ -1,3 +1,4 @@
+import { siText } from '../../core/index.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { AircraftProfile } from '../../core/aircraft.js';
@@ -128,7 +129,7 @@ describe('transport landing speeds: touchdown 0.95 VREF, VREF ≥ 1.23 VSR0 (lan
   it('a transport VREF below 1.23 VSR0 is raised to it with a warning (14 CFR 25.125(b)(2)(i)); a commuter keeps its profile value', () => {
     const t = ok(analyseLanding(base({ ...HAND, vrefFactor: 1.18 })));
     expectClose(t.speeds.vref_mps / t.speeds.vsr0_mps, 1.23, { rel: 1e-12 });
-    expect(t.warnings.join(' ')).toMatch(/VREF raised from 1\.180 VSR0 to 1\.23 VSR0/);
+    expect(t.warnings.map(siText).join(' ')).toMatch(/VREF raised from 1\.180 VSR0 to 1\.23 VSR0/);
     const c = ok(analyseLanding(base({ ...TEXTBOOK, vrefFactor: 1.18 }, { liftDumping: true })));
     expectClose(c.speeds.vref_mps / c.speeds.vsr0_mps, 1.18, { rel: 1e-12 });
   });
@@ -253,7 +254,7 @@ describe('analyseLanding — rules, defaults and options (common practice, 14 CF
     const isa = ok(analyseLanding(base(tern)));
     const hot = ok(analyseLanding(base(tern, { temperature_c: 35 })));
     expect(hot.distance_m).toBeGreaterThan(isa.distance_m);
-    expect(hot.warnings.join(' ')).toMatch(/standard temperature/);
+    expect(hot.warnings.map(siText).join(' ')).toMatch(/standard temperature/);
   });
   it('uphill in the landing direction shortens, downhill lengthens', () => {
     const flat = ok(analyseLanding(base(tern))).distance_m;
@@ -275,7 +276,7 @@ describe('analyseLanding — rules, defaults and options (common practice, 14 CF
     const nb = byId('albatross-nb180');
     const r = ok(analyseLanding(base(nb, { pressureAltitude_m: 4500, temperature_c: 40, glideAngle_deg: 6 })));
     expect(r.segments.approach_m).toBe(0);
-    expect(r.warnings.join(' ')).toMatch(/flare starts above 50 ft/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/flare starts above 50 ft/);
     expect(r.segments.flare_m).toBeGreaterThan(0);
     expect(LANDING_SCREEN_HEIGHT_M).toBeCloseTo(15.24, 12);
   });

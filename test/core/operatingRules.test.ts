@@ -5,6 +5,7 @@
  * dry, 2 875 m wet); 14 CFR 135.385(f) (80 %) and (d) (115 %; on the 80 % length from memory); Part 91
  * (no factor); EU Air Operations CAT.POL.A.230 / .235 / .305 / .325 / .330 (from memory).
  */
+import { siText } from '../../core/index.js';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
@@ -159,12 +160,12 @@ describe('a recorded override lets a corrected reference length beyond 35 % gove
     expect(overRows.length).toBeGreaterThan(0);
     for (const row of overRows) {
       const before = plain.scenarios.flatMap((s) => s.rows).find((x) => x.aircraft === row.aircraft && x.status === 'ok')!;
-      expect(before.warnings.some((w) => w.includes('does not govern'))).toBe(true);
+      expect(before.warnings.map(siText).some((w) => w.includes('does not govern'))).toBe(true);
       expect(row.takeoff!.required_m).toBe(row.takeoff!.reference_m);
       expect(row.takeoff!.governing).toMatch(/override beyond the 35 % limit/);
-      const w = row.warnings.find((x) => x.startsWith('Takeoff: OVERRIDE RECORDED'))!;
+      const w = row.warnings.map(siText).find((x) => x.startsWith('Takeoff: OVERRIDE RECORDED'))!;
       expect(w).toContain(reason);
-      expect(w).toContain(`${Math.round(row.takeoff!.physics_m!)} m`);
+      expect(w).toContain(`${Math.round(row.takeoff!.physics_m!).toLocaleString('en-US')} m`);
     }
   });
 });

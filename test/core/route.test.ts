@@ -14,6 +14,7 @@
  * carry one; the distance is from memory / common practice). The pinned values below are the forward
  * evaluation of that model.
  */
+import { siText } from '../../core/index.js';
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -165,7 +166,7 @@ describe('payload-range corners — §9.4 (derived)', () => {
         // Degenerate: the reserves (200 NM alternate + 45 min) do not fit on top of the maximum payload
         // (heron-st1: MLW 3700 kg < MZFW 3600 kg + reserves), so B collapses onto A, with a warning.
         expect(A.limitedBy).not.toBe('max-payload');
-        expect(d.warnings.join(' ')).toMatch(/cannot be carried even at zero range/);
+        expect(d.warnings.map(siText).join(' ')).toMatch(/cannot be carried even at zero range/);
         expect(B.coincidesWith).toBe('A');
         expectClose(B.payload_kg, A.payload_kg, { abs: 1e-6 }, 'B payload = A payload');
       } else {
@@ -430,8 +431,8 @@ describe('reserve policies — §9.2 (14 CFR 121.639 / 91.167, 121.645(b)); orde
   });
 
   it('propeller holding carries its assumption as a warning, unless the profile gives a holding fuel flow', () => {
-    expect(run(INTL, CURLEW).warnings.join(' ')).toMatch(/cruise true airspeed/);
-    expect(run(INTL, withHoldFlow(CURLEW, 400)).warnings.join(' ')).not.toMatch(/cruise true airspeed/);
+    expect(run(INTL, CURLEW).warnings.map(siText).join(' ')).toMatch(/cruise true airspeed/);
+    expect(run(INTL, withHoldFlow(CURLEW, 400)).warnings.map(siText).join(' ')).not.toMatch(/cruise true airspeed/);
     expect(run(C45, TERN).warnings).toEqual([]);
   });
 });

@@ -1,3 +1,4 @@
+import { siText } from '../../core/index.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputDomainError } from '../../core/errors.js';
@@ -116,8 +117,8 @@ describe('plausibility warnings against ICAO limits (Annex 14 via Horonjeff Tabl
 
   it('G 1.2 %: a warning for code 4, none for code 2 — warnings, not errors', () => {
     const c4 = analyseRunwayProfile({ points: steady, codeNumber: 4 });
-    expect(c4.warnings.some((w) => w.includes('Effective gradient 1.20 % is above the ICAO maximum of 1.00 % for code 4'))).toBe(true);
-    expect(c4.warnings.some((w) => w.includes('first or last quarter'))).toBe(true);
+    expect(c4.warnings.map(siText).some((w) => w.includes('Effective gradient 1.20 % is above the ICAO maximum of 1.00 % for code 4'))).toBe(true);
+    expect(c4.warnings.map(siText).some((w) => w.includes('first or last quarter'))).toBe(true);
     const c2 = analyseRunwayProfile({ points: steady, codeNumber: 2 });
     expect(c2.warnings).toEqual([]);
   });
@@ -141,12 +142,12 @@ describe('plausibility warnings against ICAO limits (Annex 14 via Horonjeff Tabl
     });
     expectClose(p.steepestSegment.slope, 0.015, { rel: 1e-12 });
     expect(p.warnings).toHaveLength(1);
-    expect(p.warnings[0]).toContain('steeper than the ICAO longitudinal maximum of 1.25 %');
+    expect(siText(p.warnings[0]!)).toContain('steeper than the ICAO longitudinal maximum of 1.25 %');
   });
 
   it('without a code number the loosest limits apply (2 %)', () => {
     const p = analyseRunwayProfile({ points: [{ chainage_m: 0, elevation_m: 0 }, { chainage_m: 1000, elevation_m: 25 }] });
-    expect(p.warnings.some((w) => w.includes('above the ICAO maximum of 2.00 % for any code number'))).toBe(true);
+    expect(p.warnings.map(siText).some((w) => w.includes('above the ICAO maximum of 2.00 % for any code number'))).toBe(true);
     expect(p.limits.codeNumber).toBeUndefined();
   });
 });
@@ -207,14 +208,14 @@ describe('declared distances (ICAO Annex 14 definitions; clearway ≤ ½ TORA fr
 
   it('LDA longer than TORA (but within ASDA) is a warning, not an error', () => {
     const r = checkDeclaredDistances({ designator: '27', tora_m: 2200, toda_m: 2400, asda_m: 2500, lda_m: 2400 });
-    expect(r.warnings[0]).toContain('LDA 2400 m is longer than TORA 2200 m');
+    expect(siText(r.warnings[0]!)).toContain('LDA 2,400 m is longer than TORA 2,200 m');
   });
 
   it('both directions: reciprocal designators pass; others warn; duplicates are refused', () => {
     const pair = checkRunwayDeclaredDistances({ directions: [ok, { ...ok, designator: '27' }] });
     expect(pair.directions.map((d) => d.designator)).toEqual(['09', '27']);
     expect(pair.warnings).toEqual([]);
-    expect(checkRunwayDeclaredDistances({ directions: [ok, { ...ok, designator: '28' }] }).warnings[0]).toContain('not the two ends');
+    expect(checkRunwayDeclaredDistances({ directions: [ok, { ...ok, designator: '28' }] }).warnings.map(siText)[0]).toContain('not the two ends');
     expect(domainError(() => checkRunwayDeclaredDistances({ directions: [ok, ok] })).field).toBe('directions[1].designator');
     expect(domainError(() => checkRunwayDeclaredDistances({ directions: [ok, { ...ok, designator: '27', lda_m: 2700 }] })).field).toBe('directions[1].lda_m');
     expect(domainError(() => checkRunwayDeclaredDistances({ directions: [] })).field).toBe('directions');

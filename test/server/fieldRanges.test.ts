@@ -4,6 +4,7 @@
  * the unit. Check cases are the defects found by the robustness review (issue 12, finding 4); the
  * physical limits are stated in core/fields.ts (common practice, chosen for this project).
  */
+import { siText, type Notice } from '../../core/index.js';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
@@ -93,7 +94,7 @@ describe('monthly mean maximum (−60 to 55 °C in the schema and the engine)', 
   it('a mean above the mean maximum (station data with different missing days) is computed with a warning', () => {
     const r = endToEnd(study((d) => { delete d.site.designTemperature_c; d.site.climate = climate({ meanMax_c: 30.2, mean_c: 30.4 }); }));
     expect(r.ok).toBe(true);
-    if (r.ok) expect(r.out.site.warnings.join(' ')).toMatch(/July: mean temperature 30\.4 °C is above the mean daily maximum 30\.2 °C/);
+    if (r.ok) expect(r.out.site.warnings.map(siText).join(' ')).toMatch(/July: mean temperature 30\.4 °C is above the mean daily maximum 30\.2 °C/);
   });
 });
 
@@ -124,13 +125,13 @@ describe('runway slope (average ±3 % in the schema and the models; ICAO limits 
   it('a 5 % stretch inside a runway of 0.3 % average slope is accepted with the ICAO warning', () => {
     const r = endToEnd(study((d) => { d.site.runways[0].profile = profile([0, 250], [100, 255], [1500, 255]); }));
     expect(r.ok).toBe(true);
-    if (r.ok) expect(r.out.site.runways[0]!.warnings.join(' ')).toMatch(/steeper than the ICAO longitudinal maximum of 2\.00 %.*steepest 5\.00 %/);
+    if (r.ok) expect(r.out.site.runways[0]!.warnings.map(siText).join(' ')).toMatch(/steeper than the ICAO longitudinal maximum of 2\.00 %.*steepest 5\.00 %/);
   });
 
   it('2.5 % average is computed, with the ICAO effective-gradient warning', () => {
     const r = endToEnd(study((d) => { d.site.runways[0].profile = profile([0, 250], [1500, 287.5]); }));
     expect(r.ok).toBe(true);
-    if (r.ok) expect(r.out.site.runways[0]!.warnings.join(' ')).toMatch(/Effective gradient 2\.50 % is above the ICAO maximum/);
+    if (r.ok) expect(r.out.site.runways[0]!.warnings.map(siText).join(' ')).toMatch(/Effective gradient 2\.50 % is above the ICAO maximum/);
   });
 
   it('a chainage that goes back is refused at profile[i].chainage_m (core used to name it points[i])', () => {
@@ -156,11 +157,11 @@ describe('fleet payload and derived values', () => {
     }));
     expect(r.ok).toBe(true);
     if (!r.ok) return;
-    const rows = r.out.scenarios[0]!.rows as unknown as { aircraft: string; required_m: number | null; warnings: string[]; classification: { approachCategory: string; vref_mps: number } }[];
+    const rows = r.out.scenarios[0]!.rows as unknown as { aircraft: string; required_m: number | null; warnings: Notice[]; classification: { approachCategory: string; vref_mps: number } }[];
     const row = rows.find((x) => x.aircraft === 'giant-600')!;
     expect(row.classification.vref_mps).toBeGreaterThan(150);
     expect(row.classification.approachCategory).toBe('E');
-    expect(row.warnings.join(' ')).toMatch(/cannot reach lift-off speed|cannot climb|Climb-limited/);
+    expect(row.warnings.map(siText).join(' ')).toMatch(/cannot reach lift-off speed|cannot climb|Climb-limited/);
     expect(rows.find((x) => x.aircraft === 'plover-ct19')!.required_m).toBeGreaterThan(0);
   });
 

@@ -10,12 +10,12 @@ import type { AircraftProfile } from '../../core/index.js';
 import { runCli, type CliIo } from '../../server/cli.js';
 import { resultsCsv } from '../../server/studies/resultsCsv.js';
 import { parseStudyDocument, studyOutput, type StudyOutput } from '../../server/studies/document.js';
-import { whatIf } from '../../core/index.js';
+import { siText, whatIf } from '../../core/index.js';
 import { WhatIfResult } from '../../templates/whatif/panel.js';
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from '../core/study/impractical.fixture.js';
 import { browser, makeApp } from './web/helpers.js';
 
-const REASON = /This aircraft cannot practically operate here: the takeoff needs 6,\d{3} m at 3,500 m \/ 45 °C and 7,294 kg, more than the plausibility bound of 5,500 m \(absolute cap, the length class of the longest paved runways\)/;
+const REASON = /This aircraft cannot practically operate here: the takeoff needs 6,\d{3} m at 3,500 m \/ 45.0 °C and 7,294 kg, more than the plausibility bound of 5,500 m \(absolute cap, the length class of the longest paved runways\)/;
 
 function output(): StudyOutput {
   const p = parseStudyDocument(impracticalDoc(45));
@@ -35,7 +35,8 @@ describe('study outputs of a row beyond the plausibility bound', () => {
     expect(row.required_m).toBeNull();
     expect(row.requiredTakeoff_m).toBeNull();
     expect(row.requiredLanding_m).toBeNull();
-    expect(row.reason).toMatch(REASON);
+    expect(row.reason.code).toBe('plausibility.impractical');
+    expect(row.reason.message).toMatch(REASON);
     expect(json.scenarios[0].criticalAircraft).toBe('heron-st1');
     // The light single, with the planning factors (takeoff × 1.25, landing ÷ 0.70), sets a modest length.
     expect(json.scenarios[0].recommendedLength_m).toBeLessThan(1500);
@@ -79,7 +80,7 @@ describe('what-if beyond the plausibility bound', () => {
       expect(o.required_m, `${t} °C`).toBeUndefined();
       expect(o.takeoff.ok).toBe(false);
       expect(o.takeoff.impractical).toBe(true);
-      expect(o.impractical).toMatch(new RegExp(`cannot practically operate here: the takeoff needs [\\d,]+ m at 3,500 m / ${t} °C`));
+      expect(siText(o.impractical!)).toMatch(new RegExp(`cannot practically operate here: the takeoff needs [\\d,]+ m at 3,500 m / ${t}.0 °C`));
     }
     const html = String(await WhatIfResult({ outcome: at(45), errors: {} }).toString());
     expect(html).toContain('data-testid="whatif-required">cannot practically operate here</strong>');

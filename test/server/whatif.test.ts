@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import type { AircraftProfile } from '../../core/index.js';
 import { whatIf } from '../../core/index.js';
+import { say } from '../../templates/format.js';
 import demo from '../../examples/demo-study.json' with { type: 'json' };
 
 const tern = demo.aircraft.find((a) => a.id === 'tern-rj90') as unknown as AircraftProfile;
@@ -17,11 +18,14 @@ describe('whatIf climb limit (14 CFR 25.121(b) engine-out minimum, 2.4 % for twi
     expect(r.takeoff.ok).toBe(true);
     const m = r.takeoff.climbLimitedMass_kg!;
     expect(m).toBeLessThan(tern.mtow_kg);
-    expect(r.takeoff.note).toMatch(new RegExp(`^Climb-limited at ${tern.mtow_kg.toLocaleString("en-US")} kg \\(the .* gradient [\\d.]+ % is below the minimum 2\\.40 %\\): sized at the climb-limited mass of ${Math.round(m).toLocaleString("en-US")} kg, ${Math.round(tern.mtow_kg - m).toLocaleString("en-US")} kg offload\\.`));
+    // The study's own sentence (climbCapNotices.capped), in the page's units.
+    const note = r.takeoff.note!.map((n) => say(n, 'si')).join(' ');
+    expect(note).toMatch(new RegExp(`^Climb-limited at ${tern.mtow_kg.toLocaleString('en-US')} kg: the gradient of the .* is [\\d.]+ %, below the 2\\.4 % minimum\\. The greatest mass meeting every climb minimum is ${Math.round(m).toLocaleString('en-US')} kg \\(${Math.round(tern.mtow_kg - m).toLocaleString('en-US')} kg to offload\\)`));
+    expect(r.takeoff.note!.map((n) => n.code)[0]).toBe('climb.capped');
     // The number is the takeoff at that mass (or the cooler-day peak the note names), never the heavier one.
     const atCap = whatIf({ ...base, mass_kg: m });
     expect(atCap.takeoff.climbLimitedMass_kg).toBeUndefined();
-    if (!/peaks below this temperature/.test(r.takeoff.note!)) expect(r.takeoff.required_m).toBe(atCap.takeoff.required_m);
+    if (!r.takeoff.note!.some((n) => n.code === 'climb.peakBelowTemperature')) expect(r.takeoff.required_m).toBe(atCap.takeoff.required_m);
     else expect(r.takeoff.required_m!).toBeGreaterThan(atCap.takeoff.required_m!);
   });
   it('a what-if at the study design conditions gives the study row (same climb-cap rule, demo site)', async () => {
@@ -39,7 +43,7 @@ describe('whatIf climb limit (14 CFR 25.121(b) engine-out minimum, 2.4 % for twi
     expect(r.takeoff.climbLimitedMass_kg).toBe(row.takeoffMass_kg);
     // The demo twin's requirement peaks at a cooler temperature: both size on that peak.
     expect(row.takeoff!.peakTemperature_c).toBeDefined();
-    expect(r.takeoff.note).toMatch(/peaks below this temperature/);
+    expect(r.takeoff.note!.map((n) => n.code)).toContain('climb.peakBelowTemperature');
     expect(r.takeoff.required_m).toBeCloseTo(row.takeoff!.required_m, 6);
   });
   it('gives a length below that mass', () => {

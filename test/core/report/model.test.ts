@@ -3,6 +3,7 @@
  * unrounded (checked against the result they come from, derived); every input value is listed; the
  * structure is the one the appendix promises.
  */
+import { siText } from '../../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import { runStudy, type StudyInput } from '../../../core/index.js';
@@ -96,7 +97,7 @@ describe('appendix model of a study with a climb-limited aircraft', () => {
     const row = r2.scenarios[0]!.rows[0]!;
     // Precondition: the study sized the jet below its route mass because of the climb minimum.
     expect(row.takeoffMass_kg).toBeLessThan(row.route.takeoffMass_kg - 100);
-    expect(row.warnings.some((w) => /climb-limited/i.test(w))).toBe(true);
+    expect(row.warnings.map(siText).some((w) => /climb-limited/i.test(w))).toBe(true);
     expect(climbLimitedRow(row)).toBe(true);
     expect(r2.scenarios.flatMap((s) => s.rows).filter(climbLimitedRow)).toHaveLength(1);
     const m2 = buildAppendixModel({ input: i2, result: r2, charts: [], inputDigest: 'a'.repeat(64), date: '2026-12-02', version: 't' });

@@ -4,6 +4,7 @@
  * Regular Use Determination", 2017, §1); the critical aircraft is the regular-use aircraft with the
  * greatest requirement (same AC); rounding up to a planning increment is common practice.
  */
+import { siText } from '../../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import {
   criticalRow, operationsServed, roundUpToIncrement, runStudy, InputDomainError,
@@ -119,7 +120,7 @@ describe('runStudy on the invented demo study', () => {
     expect(rows[0]!.regularUse).toBe(false);
     expect(rows[1]!.regularUse).toBe(true);
     expect(r.scenarios[0]!.criticalAircraft).toBe('heron-st1');
-    expect(r.scenarios[0]!.warnings.join(' ')).toMatch(/below the regular-use threshold/);
+    expect(r.scenarios[0]!.warnings.map(siText).join(' ')).toMatch(/below the regular-use threshold/);
   });
   it('counts operations of a group of similar aircraft together', () => {
     const doc = clone(demo);
@@ -143,7 +144,7 @@ describe('runStudy on the invented demo study', () => {
     ] }];
     const s = runStudy(input(doc)).scenarios[0]!;
     expect(s.rows[0]!.status).toBe('cannot-operate');
-    expect(s.rows[0]!.reason).toMatch(/^Cannot operate here: the gradient of the engine-out climb .* no mass down to the operating empty mass/);
+    expect(siText(s.rows[0]!.reason!)).toMatch(/^Cannot operate here: at [\d,]+ kg the gradient of the engine-out climb .* no mass down to the operating empty mass/);
     expect(s.excluded.map((e) => e.aircraft)).toEqual(['weak-jet']);
     expect(s.criticalAircraft).toBe('heron-st1');
   });
@@ -159,7 +160,7 @@ describe('runStudy on the invented demo study', () => {
     expect(r.status).toBe('ok');
     expect(r.takeoffMass_kg).toBeLessThan(r.route.takeoffMass_kg);
     expect(r.climbOffload_kg).toBeCloseTo(r.route.takeoffMass_kg - r.takeoffMass_kg, 9);
-    expect(r.warnings.join(' ')).toMatch(/Climb-limited at the design mass .* a longer runway cannot cure this/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/Climb-limited at [\d,]+ kg: .* a longer runway cannot cure this/);
     expect(r.takeoff!.climbLimited).toBe(false); // at the offloaded mass the gradient is met
   });
   it('classifies on the dry-runway reference field length whatever the design surface (Annex 14 ARFL definition)', () => {
@@ -174,7 +175,7 @@ describe('runStudy on the invented demo study', () => {
     doc.scenarios[0]!.fleet[0]!.stageLength_km = 9000;
     const s = runStudy(input(doc)).scenarios[0]!;
     expect(s.rows[0]!.status).toBe('cannot-operate');
-    expect(s.rows[0]!.reason).toMatch(/design stage/);
+    expect(siText(s.rows[0]!.reason!)).toMatch(/design stage/);
     expect(s.criticalAircraft).toBeNull();
     expect(s.recommendedLength_m).toBeNull();
   });

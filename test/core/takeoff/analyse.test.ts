@@ -1,3 +1,4 @@
+import { siText } from '../../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import { InputDomainError } from '../../../core/errors.js';
 import { analyseTakeoff, engineFailureAt } from '../../../core/takeoff/index.js';
@@ -104,7 +105,7 @@ describe('analyseTakeoff on the invented demo fleet (structure and internal cons
     expect(r.engineOut!.continued_m).toBeGreaterThan(r.engineOut!.accelerateStop_m);
     expect(r.engineOut!.balancedField_m).toBe(r.engineOut!.continued_m);
     expect(r.governing).toBe('engine-out');
-    expect(r.warnings.join(' ')).toMatch(/held at VR/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/held at VR/);
   });
 
   it('V1 held at its VMCG-based minimum when stopping is the harder case', () => {
@@ -121,7 +122,7 @@ describe('analyseTakeoff on the invented demo fleet (structure and internal cons
     expect(r.climb.limited).toBe(true);
     const m = r.climb.maxMass_kg!;
     expect(m).toBeLessThan(input.mass_kg);
-    expect(r.warnings.join(' ')).toMatch(/cannot cure/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/cannot cure/);
     const atLimit = analyseTakeoff({ ...input, mass_kg: m });
     // At the limit the tighter of the two segment margins is zero (25.121(b) 2.4 %, 25.121(a) > 0).
     const margin = Math.min(atLimit.climb.gradient - 0.024, atLimit.climb.firstSegment!.gradient - 0);
@@ -144,16 +145,16 @@ describe('analyseTakeoff on the invented demo fleet (structure and internal cons
     expect(kk).toBeLessThan(303.15 / 288.15); // below the flat-rating corner: no temperature term
     const thrust = 36000 * kk ** 3.5 * (1 - 0.49 * Math.sqrt(m));
     expectClose(r.climb.gradient, (thrust - drag) / w, { rel: 1e-4 });
-    expect(r.warnings.join(' ')).not.toMatch(/floor/);
+    expect(r.warnings.map(siText).join(' ')).not.toMatch(/floor/);
     // With CD0 0.04 the gear increment (0.0241) would leave less than 40 %: the floor binds and is reported.
-    expect(feasible(analyseTakeoff(at(HAND))).warnings.join(' ')).toMatch(/floor/);
+    expect(feasible(analyseTakeoff(at(HAND))).warnings.map(siText).join(' ')).toMatch(/floor/);
   });
 
   it('wet runway: longer accelerate-stop, and a warning that the wet-runway rules are not modelled', () => {
     const dry = feasible(analyseTakeoff(at(byId('tern-rj90'))));
     const wet = feasible(analyseTakeoff(at(byId('tern-rj90'), { surface: 'wet' })));
     expect(wet.required_m).toBeGreaterThan(dry.required_m);
-    expect(wet.warnings.join(' ')).toMatch(/Wet runway/);
+    expect(wet.warnings.map(siText).join(' ')).toMatch(/Wet runway/);
   });
 });
 
@@ -203,7 +204,7 @@ describe('Infeasible cases are results with a reason (design brief, "What it mus
     // VMCA given low so that only the V1 rule raises VR.
     const r = feasible(analyseTakeoff(at({ ...HAND, vmcg_mps: 68, vmca_mps: 50 })));
     for (const [path, v] of numbers(r)) expect(Number.isFinite(v), path).toBe(true);
-    expect(r.speeds.raised.join(' ')).toMatch(/VR ≥ V1/);
+    expect(r.speeds.raised.map(siText).join(' ')).toMatch(/VR ≥ V1/);
     expectClose(r.speeds.v1_mps!, r.speeds.vr_mps, { rel: 1e-6 });
     expectClose(r.speeds.v1_mps!, r.engineOut!.v1Min_mps, { rel: 1e-6 });
     expect(r.speeds.vr_mps).toBeGreaterThan(HAND.vrFactor * r.speeds.vs1_mps);
@@ -219,7 +220,7 @@ describe('Infeasible cases are results with a reason (design brief, "What it mus
   it('a normal-category twin whose engine-out analysis fails stays feasible, with a warning', () => {
     const r = feasible(analyseTakeoff(at({ ...byId('pipit-lt2'), vmcg_mps: 40 })));
     expect(r.engineOut).toBeUndefined();
-    expect(r.warnings.join(' ')).toMatch(/Engine-failure analysis not available/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/Engine-failure analysis not available/);
   });
 });
 

@@ -8,6 +8,7 @@
  * - every study row that is not sized carries a reason, and no number is NaN or Infinity.
  * Directions are common practice in performance work (more mass, higher or hotter air need more runway).
  */
+import { siText } from '../../../core/index.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -148,14 +149,14 @@ describe('every study row is sized or carries its reason (fast-check over random
           } else {
             excluded++;
             expect(row.reason, `${row.aircraft} ${row.status} without a reason`).toBeTruthy();
-            expect(row.reason!.length).toBeGreaterThan(20);
+            expect(siText(row.reason!).length).toBeGreaterThan(20);
             expect(row.required_m).toBeNull();
           }
         }
-        for (const e of s.excluded) expect(e.reason.length, `${e.aircraft} excluded without a reason`).toBeGreaterThan(20);
+        for (const e of s.excluded) expect(siText(e.reason).length, `${e.aircraft} excluded without a reason`).toBeGreaterThan(20);
         // A regular-use row that is not sized is named in the scenario warnings (never silently dropped).
         for (const row of s.rows.filter((x) => x.status !== 'ok' && x.regularUse)) {
-          expect(s.excluded.some((e) => e.aircraft === row.aircraft) || s.warnings.some((w) => w.includes(row.aircraftName)), row.aircraft).toBe(true);
+          expect(s.excluded.some((e) => e.aircraft === row.aircraft) || s.warnings.map(siText).some((w) => w.includes(row.aircraftName)), row.aircraft).toBe(true);
         }
       }
     }), { numRuns: 12, examples: [[{ elevation_m: 3500, designTemperature_c: 45, power: 0.75 }]] });

@@ -4,6 +4,7 @@
  * time, and the brake-energy and tyre-speed checks. Each block names its source; a value from memory
  * says so. Demo aircraft are invented (examples/demo-study.json).
  */
+import { siText } from '../../../core/index.js';
 import { describe, expect, it } from 'vitest';
 import { analyseTakeoff, energyAirborne, engineOutAirInput, MAX_ENGINE_OUT_AIR_M, takeoffSetup } from '../../../core/takeoff/index.js';
 import { validateAircraft } from '../../../core/aircraft.js';
@@ -32,7 +33,7 @@ describe('25.107 speeds: light masses are sized, never dropped (item 1)', () => 
   it('V2 floor of 25.107(b): a profile V2/VS1 of 1.10 is raised to 1.13 VS1 for a twin (from memory), with a warning', () => {
     const r = feasible(analyseTakeoff(at({ ...HAND, vlofFactor: 1.1, vrFactor: 1.05, v2Factor: 1.1 })));
     expectClose(r.speeds.v2_mps / r.speeds.vs1_mps, 1.13, { rel: 1e-9 });
-    expect(r.warnings.join(' ')).toMatch(/V2 raised to 1\.13/);
+    expect(r.warnings.map(siText).join(' ')).toMatch(/V2 raised to 1\.13/);
   });
 
   it('VLOF ≥ 1.10 VMU (25.107(e)(1)(iv), from memory) when the profile gives VMU/VS1', () => {

@@ -13,7 +13,7 @@ import { CAUTION_TEXT } from '../../../core/index.js';
 import { climbLimitedRow } from '../../../core/report/model.js';
 import { appendixModel, ATTACHMENT_NAME, studyFileText } from '../../../server/pdf/index.js';
 import { canonicalJson, inputDigest, sha256Hex } from '../../../server/studies/document.js';
-import { fmtLengthBoth } from '../../../templates/format.js';
+import { fmtLengthBoth, say } from '../../../templates/format.js';
 import {
   climbLimitedDoc, clock, demoDoc, pagesText, pdfInfo, renderTo, root, runTool, studyOf, workDir,
 } from './helpers.js';
@@ -102,7 +102,7 @@ describe('appendix of the demo study (SI)', () => {
     for (const ref of ['U.S. Standard Atmosphere, 1976', '14 CFR Part 25', 'Annex 14', 'Torenbeek']) expect(squash(all)).toContain(ref);
     const warnings = study.output.warnings;
     expect(warnings.length).toBeGreaterThan(0);
-    expect(squash(all)).toContain(squash(warnings[0]!.replace(/−/g, '-')));
+    expect(squash(all)).toContain(squash(say(warnings[0]!, study.output.options.units).replace(/−/g, '-')));
   });
 
   it('prints the input digest and attaches the exact input, which regenerates the same numbers', () => {
@@ -164,7 +164,7 @@ describe('appendix of a study with a climb-limited aircraft', () => {
     // Precondition: the jet is climb-limited (sized below its route mass, with the study's warning).
     const limited = study.output.scenarios.flatMap((s) => s.rows.filter(climbLimitedRow));
     expect(limited.map((r) => r.aircraft)).toEqual(['tern-rj90']);
-    const warning = limited[0]!.warnings.find((w) => /climb-limited/i.test(w));
+    const warning = limited[0]!.warnings.map((w) => say(w, study.output.options.units)).find((w) => /climb-limited/i.test(w));
     expect(warning).toBeDefined();
     const { file } = await renderTo(dir, 'climb.pdf', study);
     const pages = pagesText(file);

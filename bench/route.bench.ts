@@ -4,7 +4,8 @@
  */
 import { readFileSync } from 'node:fs';
 import type { AircraftProfile } from '../core/index.js';
-import { designTakeoffMass, payloadRangeDiagram } from '../core/index.js';
+import { designTakeoffMass } from '../core/route/design.js';
+import { payloadRangeDiagram } from '../core/route/payloadRange.js';
 import { ratePerSecond, type BenchModule } from './harness.js';
 
 const fleet = JSON.parse(readFileSync(new URL('../examples/demo-study.json', import.meta.url), 'utf8')).aircraft as AircraftProfile[];

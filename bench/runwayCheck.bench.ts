@@ -7,7 +7,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { AircraftProfile } from '../core/index.js';
-import { maxTakeoffMassForRunway, type MaxTakeoffMassInput } from '../core/index.js';
+import { maxTakeoffMassForRunway, type MaxTakeoffMassInput } from '../core/runwayCheck.js';
 import { ratePerSecond, type BenchFigure, type BenchModule } from './harness.js';
 
 const fleet = JSON.parse(readFileSync(new URL('../examples/demo-study.json', import.meta.url), 'utf8')).aircraft as AircraftProfile[];

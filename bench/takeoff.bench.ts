@@ -19,10 +19,13 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import type { BenchFigure, BenchModule } from './harness.js';
 import { ratePerSecond } from './harness.js';
-import type { AircraftProfile, Surface, TakeoffInput } from '../core/index.js';
-import {
-  analyseTakeoff, energyAirborne, engineOutAirInput, rollAcceleration, stopDeceleration, takeoffSetup, STOP_ALLOWANCE_S,
-} from '../core/index.js';
+import type { AircraftProfile, Surface } from '../core/index.js';
+import type { TakeoffInput } from '../core/takeoff/types.js';
+import { analyseTakeoff } from '../core/index.js';
+import { energyAirborne } from '../core/takeoff/energyAirborne.js';
+import { engineOutAirInput } from '../core/takeoff/index.js';
+import { rollAcceleration, stopDeceleration, takeoffSetup } from '../core/takeoff/model.js';
+import { STOP_ALLOWANCE_S } from '../core/takeoff/regulations.js';
 
 const fleet = JSON.parse(
   readFileSync(fileURLToPath(new URL('../examples/demo-study.json', import.meta.url)), 'utf8'),

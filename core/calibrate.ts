@@ -111,7 +111,8 @@ export interface CalibrationOk<P extends string> extends CalibrationCommon<P> {
 export interface CalibrationRefused<P extends string> extends CalibrationCommon<P> {
   readonly status: 'refused';
   readonly reason: CalibrationRefusal;
-  readonly message: string;
+  /** Why, in plain words (rendered in the reader's units). */
+  readonly message: Notice;
   readonly reference_m?: number;
   readonly uncalibrated_m?: number;
   /**
@@ -221,8 +222,8 @@ function fit<P extends string>(s: FitSpec<P>): CalibrationOk<P> | CalibrationRef
         ...common, status: 'refused', reason: 'no-solution', reference_m: ref,
         ...(uncal !== undefined ? { uncalibrated_m: uncal } : {}),
         message: fLo === big
-          ? `The ${s.operation} model is infeasible at the reference condition for every ${s.label} between ${min} and ${max}; no factor reproduces ${ref.toFixed(0)} m.`
-          : `The ${s.operation} model does not shorten as the ${s.label} rises across ${min}–${max}; no factor is fitted.`,
+          ? notice('calibration.infeasibleAcrossBand')`The ${s.operation} model is infeasible at the reference condition for every ${s.label} between ${min} and ${max}; no factor reproduces ${qty.length(ref)}.`
+          : notice('calibration.notMonotone')`The ${s.operation} model does not shorten as the ${s.label} rises across ${min}–${max}; no factor is fitted.`,
       };
     }
     const side: 'below' | 'above' = fHi > 0 ? 'above' : 'below';
@@ -244,8 +245,7 @@ function fit<P extends string>(s: FitSpec<P>): CalibrationOk<P> | CalibrationRef
       ...common, status: 'refused', reason: 'outside-band', reference_m: ref,
       ...(uncal !== undefined ? { uncalibrated_m: uncal } : {}),
       ...(needed !== undefined ? { factorNeeded: needed } : {}), side,
-      message: `Reproducing the reference ${s.operation} length ${ref.toFixed(0)} m would need ${what}, outside the plausible band ${min}–${max}` +
-        `${uncal !== undefined ? ` (the uncalibrated model gives ${uncal.toFixed(0)} m)` : ''}. Check the profile or the reference length.`,
+      message: notice('calibration.outsideBand')`Reproducing the reference ${s.operation} length ${qty.length(ref)} would need ${what}, outside the plausible band ${min}–${max}${uncal !== undefined ? notice('calibration.uncalibratedGives')` (the uncalibrated model gives ${qty.length(uncal)})` : ''}. Check the profile or the reference length.`,
     };
   }
   const r = brentRoot({
@@ -265,8 +265,7 @@ function fit<P extends string>(s: FitSpec<P>): CalibrationOk<P> | CalibrationRef
     return {
       ...common, status: 'refused', reason: 'no-solution', reference_m: ref,
       ...(uncal !== undefined ? { uncalibrated_m: uncal } : {}),
-      message: `The reference ${s.operation} length ${ref.toFixed(0)} m is longer than any the model gives before it becomes infeasible ` +
-        `(${L.toFixed(0)} m at a ${s.label} of ${k.toFixed(3)}, at the edge of its climb capability); no factor reproduces it. Check the profile or the reference length.`,
+      message: notice('calibration.beyondModelEdge')`The reference ${s.operation} length ${qty.length(ref)} is longer than any the model gives before it becomes infeasible (${qty.length(L)} at a ${s.label} of ${k.toFixed(3)}, at the edge of its climb capability); no factor reproduces it. Check the profile or the reference length.`,
     };
   }
   s.trace.push({ label: `Fitted ${s.label}`, value: k, unit: '' });
@@ -309,7 +308,7 @@ export function calibrateTakeoff(input: CalibrateTakeoffInput): TakeoffCalibrati
     return {
       operation: 'takeoff', parameter, aircraftId: a.id, band, methodVersion: CALIBRATION_METHOD_VERSION, trace, warnings,
       status: 'refused', reason: 'no-reference',
-      message: `The profile "${a.id}" holds no reference takeoff length and none was given; nothing to calibrate against.`,
+      message: notice('calibration.noTakeoffReference')`The profile "${a.id}" holds no reference takeoff length and none was given; nothing to calibrate against.`,
     };
   }
   const wide = modelRange(parameter);
@@ -390,13 +389,13 @@ export function calibrateLanding(input: CalibrateLandingInput): LandingCalibrati
   if (ref === undefined) {
     return {
       ...base, band: requested, status: 'refused', reason: 'no-reference',
-      message: `The profile "${a.id}" holds no reference landing length and none was given; nothing to calibrate against.`,
+      message: notice('calibration.noLandingReference')`The profile "${a.id}" holds no reference landing length and none was given; nothing to calibrate against.`,
     };
   }
   if (!(band.min < band.max)) {
     return {
       ...base, band: requested, status: 'refused', reason: 'outside-band', reference_m: ref,
-      message: `No braking factor inside the band ${requested.min}–${requested.max} keeps the braking friction inside its valid range (${admissible.min.toFixed(3)}–${admissible.max.toFixed(3)}).`,
+      message: notice('calibration.noBrakingFactor')`No braking factor inside the band ${requested.min}–${requested.max} keeps the braking friction inside its valid range (${admissible.min.toFixed(3)}–${admissible.max.toFixed(3)}).`,
     };
   }
   if (band.min > requested.min || band.max < requested.max) {

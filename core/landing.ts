@@ -209,7 +209,8 @@ export interface LandingOk extends Common {
 
 export interface LandingInfeasible extends Common {
   readonly status: 'infeasible';
-  readonly reason: string;
+  /** Why, in plain words (rendered in the reader's units). */
+  readonly reason: Notice;
   readonly speeds?: LandingSpeeds;
 }
 
@@ -252,7 +253,7 @@ export interface LandingBrakingOk {
 
 export interface LandingBrakingCannotStop {
   readonly status: 'cannot-stop';
-  readonly reason: string;
+  readonly reason: Notice;
   readonly minNetDeceleration_g: number;
   /** Groundspeed where the net deceleration is smallest, m/s. */
   readonly atGroundspeed_mps: number;
@@ -316,8 +317,7 @@ export function landingBrakingDistance(input: LandingBrakingInput): LandingBraki
   if (!(fMin > LANDING_MIN_NET_DECELERATION_G)) {
     return {
       status: 'cannot-stop', minNetDeceleration_g: fMin, atGroundspeed_mps: vAtMin,
-      reason: `Net deceleration falls to ${fMin.toFixed(4)} g at ${vAtMin.toFixed(1)} m/s groundspeed ` +
-        `(minimum ${LANDING_MIN_NET_DECELERATION_G} g): braking friction cannot overcome idle thrust, downhill slope and lift.`,
+      reason: notice('landing.cannotStop')`Net deceleration falls to ${fMin.toFixed(4)} g at ${qty.speed(vAtMin)} groundspeed (minimum ${LANDING_MIN_NET_DECELERATION_G} g): braking friction cannot overcome idle thrust, downhill slope and lift.`,
     };
   }
 
@@ -609,7 +609,7 @@ export function analyseLanding(input: LandingInput): LandingResult {
   const speedsBase = { vsr0_mps: vsr0, vref_mps: va, flare_mps: vf, touchdown_mps: vtd };
   if (!(gTd > 0)) {
     return {
-      status: 'infeasible', reason: `Headwind ${vw} m/s is at or above the touchdown airspeed (${vtd.toFixed(1)} m/s).`,
+      status: 'infeasible', reason: notice('landing.headwindAboveTouchdown')`Headwind ${qty.speed(vw)} is at or above the touchdown airspeed (${qty.speed(vtd)}).`,
       speeds: { ...speedsBase, touchdownGroundspeed_mps: Math.max(0, gTd) },
       trace, warnings, assumptions, methodVersion: LANDING_METHOD_VERSION,
     };

@@ -25,7 +25,7 @@ export interface NoticeQuantity {
 
 /**
  * An argument of a notice: a quantity, a plain number (a count or a ratio shown as it is), a word, a
- * nested notice, or a list of notices (rendered joined by "; ").
+ * nested notice, or a list of notices (full sentences joined by a space, fragments by "; ").
  */
 export type NoticeArg = NoticeQuantity | string | number | Notice | readonly Notice[];
 
@@ -73,13 +73,18 @@ function isQuantity(a: NoticeArg): a is NoticeQuantity {
   return typeof a === 'object' && 'kind' in a;
 }
 
+/** Items of a list argument: full sentences follow each other with a space, fragments with "; ". */
+function joinSentences(items: readonly string[]): string {
+  return items.reduce((out, s, i) => (i === 0 ? s : `${out}${/[.!?]$/.test(out) ? ' ' : '; '}${s}`), '');
+}
+
 /** One notice as a sentence, its quantities formatted by `format`. */
 export function noticeText(n: Notice, format: QuantityFormat): string {
   let out = n.text[0] ?? '';
   n.args.forEach((a, i) => {
     const s = typeof a === 'string' ? a
       : typeof a === 'number' ? (Number.isFinite(a) ? String(a) : '—')
-      : isNoticeList(a) ? a.map((x) => noticeText(x, format)).join('; ')
+      : isNoticeList(a) ? joinSentences(a.map((x) => noticeText(x, format)))
       : isQuantity(a) ? format(a)
       : noticeText(a, format);
     out += s + (n.text[i + 1] ?? '');

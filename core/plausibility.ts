@@ -39,8 +39,6 @@ export const PLAUSIBILITY_RATIO = 2.5;
 /** Absolute length above which a requirement is not plausible, m (length class of the longest paved runways; common practice). */
 export const PLAUSIBILITY_CAP_M = 5500;
 
-const thousands = (x: number): string => Math.round(x).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ',');
-
 export interface PlausibilityBound {
   /** The bound, m. */
   readonly bound_m: number;
@@ -50,8 +48,8 @@ export interface PlausibilityBound {
   readonly arfl_m?: number;
   /** Where that reference length comes from. */
   readonly arflSource?: 'flight-manual' | 'model';
-  /** Plain words: "5,500 m (absolute cap, the length class of the longest paved runways)". */
-  readonly label: string;
+  /** Plain words: "5,500 m (absolute cap, the length class of the longest paved runways)", in the reader's units. */
+  readonly label: Notice;
 }
 
 /** The bound for an aircraft with the given aeroplane reference field length (m; undefined when unknown). */
@@ -62,12 +60,12 @@ export function plausibilityBound(arfl_m?: number, arflSource: 'flight-manual' |
   if (ratio > PLAUSIBILITY_CAP_M) {
     return {
       bound_m: ratio, basis: 'reference-ratio', ...ref,
-      label: `${thousands(ratio)} m (${PLAUSIBILITY_RATIO} × the aeroplane reference field length of ${thousands(arfl_m!)} m)`,
+      label: notice('plausibility.boundRatio')`${qty.length(ratio)} (${PLAUSIBILITY_RATIO} × the aeroplane reference field length of ${qty.length(arfl_m!)})`,
     };
   }
   return {
     bound_m: PLAUSIBILITY_CAP_M, basis: 'absolute-cap', ...ref,
-    label: `${thousands(PLAUSIBILITY_CAP_M)} m (absolute cap, the length class of the longest paved runways)`,
+    label: notice('plausibility.boundCap')`${qty.length(PLAUSIBILITY_CAP_M)} (absolute cap, the length class of the longest paved runways)`,
   };
 }
 

@@ -92,7 +92,8 @@ export interface ExistingRunwayCheck {
   readonly rangePenalty_km?: number;
   /** Greatest landing mass the LDA allows, kg. */
   readonly maxLandingMass_kg?: number;
-  readonly note?: string;
+  /** What limits or prevents the operation here, sentence by sentence (rendered in the reader's units). */
+  readonly note?: readonly Notice[];
 }
 
 export const RUNWAY_CHECK_METHOD_VERSION = 'runway-check/1';
@@ -323,8 +324,8 @@ export interface MaxTakeoffMassResult {
   /** Greatest allowed takeoff mass, kg (status ok). */
   readonly maxTakeoffMass_kg?: number;
   readonly limitedBy: TakeoffMassLimit;
-  /** Plain-words explanation. */
-  readonly message: string;
+  /** Plain-words explanation (rendered in the reader's units). */
+  readonly message: Notice;
   /** Greatest mass meeting the V2 climb minimum (MTOW when the climb does not limit), kg; absent when even OEW fails. */
   readonly climbLimitMass_kg?: number;
   /** Needs at the greatest allowed mass. */
@@ -387,7 +388,7 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   };
   const trace: RunwayCheckTraceEntry[] = [];
   const warnings: Notice[] = [];
-  const kg = (x: number): string => `${x.toFixed(0)} kg`;
+  const kg = qty.mass;
   let evaluations = 0;
   const trial = (m: number): Trial => {
     evaluations++;
@@ -413,8 +414,9 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   if (climbCap === undefined || climbCap < lower) {
     return done({
       status: 'none-feasible', limitedBy: 'climb',
-      message: `The ${climb.case} climb gradient at V2 is below the minimum (${(climb.minimum * 100).toFixed(1)} %) ` +
-        `even at ${climbCap === undefined ? 'the operating empty mass' : `the lightest mass searched (${kg(lower)})`}; no takeoff mass is allowed. A longer runway cannot cure this.`,
+      message: climbCap === undefined
+        ? notice('runwayCheck.climbLimitedAtOew')`The ${climb.case} climb gradient at V2 is below the minimum (${(climb.minimum * 100).toFixed(1)} %) even at the operating empty mass; no takeoff mass is allowed. A longer runway cannot cure this.`
+        : notice('runwayCheck.climbLimitedAtLightest')`The ${climb.case} climb gradient at V2 is below the minimum (${(climb.minimum * 100).toFixed(1)} %) even at the lightest mass searched (${kg(lower)}); no takeoff mass is allowed. A longer runway cannot cure this.`,
       ...(climbCap !== undefined ? { climbLimitMass_kg: climbCap } : {}),
     }, 0);
   }
@@ -424,8 +426,8 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     return done({
       status: 'ok', maxTakeoffMass_kg: climbCap, limitedBy: by, climbLimitMass_kg: climbCap, needs: hiTrial.needs!,
       message: by === 'MTOW'
-        ? 'The declared distances allow the maximum takeoff mass.'
-        : `The V2 climb gradient limits the takeoff mass to ${kg(climbCap)}; the declared distances would allow more.`,
+        ? notice('runwayCheck.mtowAllowed')`The declared distances allow the maximum takeoff mass.`
+        : notice('runwayCheck.climbLimitsMass')`The V2 climb gradient limits the takeoff mass to ${kg(climbCap)}; the declared distances would allow more.`,
     }, 0);
   }
   // Light masses can be refused too: below some mass the modelled VR falls under the V1 reached
@@ -454,12 +456,12 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
       ...(light.needs ? { refusedNeeds: light.needs } : {}),
       ...(!light.result.feasible ? { refusedReason: light.result.reason } : {}),
       refusedMass_kg: light.mass_kg,
-      message: `No mass from ${kg(light.mass_kg)} to ${kg(climbCap)} fits the declared distances${light.implausible ? ' and the plausibility bound' : ''}. ` + (light.result.feasible
+      message: notice('runwayCheck.noMassFits')`No mass from ${kg(light.mass_kg)} to ${kg(climbCap)} fits the declared distances${light.implausible ? ' and the plausibility bound' : ''}. ${light.result.feasible
         ? [
-          ...(light.exceeded.length ? [`At ${kg(light.mass_kg)} the takeoff still exceeds ${light.exceeded.join(', ')}.`] : []),
-          ...(light.implausible ? [`At ${kg(light.mass_kg)} the takeoff is beyond the plausibility bound of ${bound.label}.`] : []),
-        ].join(' ')
-        : `At ${kg(light.mass_kg)}: ${light.result.message} (binding: ${lim}).`),
+          ...(light.exceeded.length ? [notice('runwayCheck.lightestExceeds')`At ${kg(light.mass_kg)} the takeoff still exceeds ${light.exceeded.join(', ')}.`] : []),
+          ...(light.implausible ? [notice('runwayCheck.lightestImplausible')`At ${kg(light.mass_kg)} the takeoff is beyond the plausibility bound of ${bound.label}.`] : []),
+        ]
+        : notice('runwayCheck.lightestInfeasible')`At ${kg(light.mass_kg)}: ${light.result.message} (binding: ${lim}).`}`,
     }, lightSteps);
   }
   // Bisection: lo allowed, hi refused.
@@ -475,9 +477,9 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
   if (hi.result.feasible && hi.result.engineOut?.v1Limited === 'vmcg') {
     warnings.push(notice('runwayCheck.v1AtVmcgNearLimit')`V1 is held at its VMCG-based minimum near the limiting mass; the field length there is not strictly monotone in mass (the result is a mass where the distances stop fitting, within ${qty.mass(TAKEOFF_MASS_TOL_KG)}).`);
   }
-  const names: Record<DistanceLimit | 'climb' | 'plausibility', string> = {
+  const names: Record<DistanceLimit | 'climb' | 'plausibility', string | Notice> = {
     TORA: 'takeoff run available (TORA)', TODA: 'takeoff distance available (TODA)', ASDA: 'accelerate-stop distance available (ASDA)', climb: 'climb after lift-off',
-    plausibility: `plausibility bound of ${bound.label}`,
+    plausibility: notice('runwayCheck.plausibilityBoundName')`plausibility bound of ${bound.label}`,
   };
   trace.push({ label: 'Bisection steps', value: it, unit: '' });
   return done({
@@ -485,7 +487,7 @@ export function maxTakeoffMassForRunway(input: MaxTakeoffMassInput): MaxTakeoffM
     refusedMass_kg: hi.mass_kg,
     ...(hi.needs ? { refusedNeeds: hi.needs } : {}),
     ...(!hi.result.feasible ? { refusedReason: hi.result.reason } : {}),
-    message: `The ${names[by as DistanceLimit | 'climb' | 'plausibility']} limits the takeoff mass to ${kg(lo.mass_kg)} (MTOW ${kg(a.mtow_kg)}).`,
+    message: notice('runwayCheck.takeoffMassLimited')`The ${names[by as DistanceLimit | 'climb' | 'plausibility']} limits the takeoff mass to ${kg(lo.mass_kg)} (MTOW ${kg(a.mtow_kg)}).`,
   }, it);
 }
 
@@ -520,7 +522,8 @@ export interface MaxLandingMassResult {
   readonly status: 'ok' | 'none-feasible';
   readonly maxLandingMass_kg?: number;
   readonly limitedBy: LandingMassLimit;
-  readonly message: string;
+  /** Plain-words explanation (rendered in the reader's units). */
+  readonly message: Notice;
   /** Required landing runway at the greatest allowed mass, m. */
   readonly requiredAtMax_m?: number;
   /** The refused mass closest above (≤ LANDING_MASS_TOL_KG heavier), kg, when the LDA binds. */
@@ -541,7 +544,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
   const limit = Math.min(lda, bound.bound_m);
   const trace: RunwayCheckTraceEntry[] = [];
   const warnings: Notice[] = [];
-  const kg = (x: number): string => `${x.toFixed(0)} kg`;
+  const kg = qty.mass;
   let evaluations = 0;
   const trial = (m: number): { mass_kg: number; r: LandingResult; allowed: boolean } => {
     evaluations++;
@@ -561,11 +564,14 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
     trace.push({ label: 'Landing analyses run', value: evaluations, unit: '' });
     return { methodVersion: RUNWAY_CHECK_METHOD_VERSION, ...o, iterations, trace, warnings };
   };
+  const landingLimitName = limit < lda
+    ? notice('runwayCheck.landingPlausibilityName')`plausibility bound of ${bound.label}`
+    : notice('runwayCheck.ldaName')`LDA (${qty.length(lda)})`;
   const top = trial(a.mlw_kg);
   if (top.allowed) {
     return done({
       status: 'ok', maxLandingMass_kg: a.mlw_kg, limitedBy: 'MLW', requiredAtMax_m: req(top)!,
-      message: 'The LDA allows the maximum landing mass.',
+      message: notice('runwayCheck.mlwAllowed')`The LDA allows the maximum landing mass.`,
     }, 0);
   }
   const bottom = lower === a.mlw_kg ? top : trial(lower);
@@ -575,8 +581,8 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
       status: 'none-feasible', limitedBy: 'none-feasible', refusedMass_kg: lower,
       ...(r.status === 'ok' ? { refusedRequired_m: r.required_m } : {}),
       message: r.status === 'ok'
-        ? `Even at ${kg(lower)} the landing needs ${r.required_m.toFixed(0)} m, more than the ${limit < lda ? `plausibility bound of ${bound.label}` : `LDA (${lda} m)`}.`
-        : `Even at ${kg(lower)} the landing is not possible here: ${r.reason}`,
+        ? notice('runwayCheck.landingTooLongAtLightest')`Even at ${kg(lower)} the landing needs ${qty.length(r.required_m)}, more than the ${landingLimitName}.`
+        : notice('runwayCheck.landingInfeasibleAtLightest')`Even at ${kg(lower)} the landing is not possible here: ${r.reason}`,
     }, 0);
   }
   const { lo, hi, iterations: it } = bisect({
@@ -588,7 +594,7 @@ export function maxLandingMassForLda(input: MaxLandingMassInput): MaxLandingMass
   return done({
     status: 'ok', maxLandingMass_kg: lo.mass_kg, limitedBy: limit < lda ? 'plausibility' : 'LDA', requiredAtMax_m: req(lo)!,
     refusedMass_kg: hi.mass_kg, ...(hiReq !== undefined ? { refusedRequired_m: hiReq } : {}),
-    message: `The ${limit < lda ? `plausibility bound of ${bound.label}` : `LDA (${lda} m)`} limits the landing mass to ${kg(lo.mass_kg)} (MLW ${kg(a.mlw_kg)}).`,
+    message: notice('runwayCheck.landingMassLimited')`The ${landingLimitName} limits the landing mass to ${kg(lo.mass_kg)} (MLW ${kg(a.mlw_kg)}).`,
   }, it);
 }
 
@@ -624,7 +630,8 @@ export interface RoutePenaltyResult {
   readonly rangeAtMass_m: number;
   /** Design stage − rangeAtMass, not below 0, m. */
   readonly rangePenalty_m: number;
-  readonly note?: string;
+  /** Why the penalty is counted as it is (route limits, stage beyond reach), when it needs saying. */
+  readonly note?: readonly Notice[];
   readonly trace: readonly RunwayCheckTraceEntry[];
   readonly warnings: readonly Notice[];
 }
@@ -642,12 +649,12 @@ export function routePenalty(input: RoutePenaltyInput): RoutePenaltyResult {
   const penalty = Math.max(0, pMtow - pMass);
   const rangeAt = range.status === 'ok' ? range.range_m : 0;
   const rangePen = Math.max(0, input.stageLength_m - rangeAt);
-  const notes: string[] = [];
-  const km = (x: number): string => `${(x / 1000).toFixed(0)} km`;
-  if (atMtow.status !== 'ok') notes.push(`The design stage ${km(input.stageLength_m)} is beyond the aircraft's reach even at MTOW with zero payload.`);
-  else if (pMtow < P) notes.push(`At MTOW the route itself limits the payload to ${pMtow.toFixed(0)} kg (${atMtow.limitedBy}); the penalty is counted from there.`);
-  if (atMass.status !== 'ok' && atMtow.status === 'ok') notes.push(`At ${input.takeoffMass_kg.toFixed(0)} kg the design stage is beyond reach even with zero payload.`);
-  if (range.status !== 'ok') notes.push(`At ${input.takeoffMass_kg.toFixed(0)} kg the design payload cannot be carried over any stage (reserves included).`);
+  const notes: Notice[] = [];
+  const tom = qty.mass(input.takeoffMass_kg);
+  if (atMtow.status !== 'ok') notes.push(notice('runwayCheck.stageBeyondReachAtMtow')`The design stage ${qty.distance(input.stageLength_m)} is beyond the aircraft's reach even at MTOW with zero payload.`);
+  else if (pMtow < P) notes.push(notice('runwayCheck.routeLimitsPayloadAtMtow')`At MTOW the route itself limits the payload to ${qty.mass(pMtow)} (${atMtow.limitedBy}); the penalty is counted from there.`);
+  if (atMass.status !== 'ok' && atMtow.status === 'ok') notes.push(notice('runwayCheck.stageBeyondReachAtMass')`At ${tom} the design stage is beyond reach even with zero payload.`);
+  if (range.status !== 'ok') notes.push(notice('runwayCheck.payloadOverNoStage')`At ${tom} the design payload cannot be carried over any stage (reserves included).`);
   const trace: RunwayCheckTraceEntry[] = [
     { label: 'Takeoff mass available', value: input.takeoffMass_kg, unit: 'kg' },
     { label: 'Payload over the design stage at MTOW', value: pMtow, unit: 'kg' },
@@ -665,7 +672,7 @@ export function routePenalty(input: RoutePenaltyInput): RoutePenaltyResult {
     ...(pax !== undefined ? { passengersPenalty: penalty / pax } : {}),
     rangeAtMass_m: finite('rangeAtMass_m', rangeAt),
     rangePenalty_m: finite('rangePenalty_m', rangePen),
-    ...(notes.length ? { note: notes.join(' ') } : {}),
+    ...(notes.length ? { note: notes } : {}),
     trace,
     warnings: [...atMass.warnings],
   };
@@ -753,7 +760,7 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
     headwind_mps: wind, surface: input.surface, ...scales,
   };
   const warnings: Notice[] = [];
-  const notes: string[] = [];
+  const notes: Notice[] = [];
   const trace: RunwayCheckTraceEntry[] = [{ label: 'Design takeoff mass', value: tow, unit: 'kg' }];
   const bound = input.plausibility ?? aircraftPlausibilityBound(a);
 
@@ -765,13 +772,13 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
   const exceeded = needs ? exceededDistances(needs, { tora_m: tora, toda_m: toda, asda_m: asda }) : [];
   const climbLimited = r.climb.limited;
   const takeoffOk = r.feasible && !implausible && exceeded.length === 0 && !climbLimited;
-  if (!r.feasible) notes.push(`At the design takeoff mass the takeoff is not possible here: ${r.message}`);
+  if (!r.feasible) notes.push(notice('runwayCheck.designTakeoffInfeasible')`At the design takeoff mass the takeoff is not possible here: ${r.message}`);
   else if (implausible) {
     const f = checkPlausibility([...takeoffDistances(r), { what: 'takeoff run', value_m: rawNeeds!.takeoffRun_m }], bound,
       { elevation_m: input.pressureAltitude_m, temperature_c: input.temperature_c, mass_kg: tow });
-    notes.push(`At the design takeoff mass: ${f?.reason ?? `the takeoff is beyond the plausibility bound of ${bound.label}.`}`);
-  } else if (exceeded.length) notes.push(`At the design takeoff mass the takeoff exceeds ${exceeded.join(', ')}.`);
-  if (climbLimited) notes.push('At the design takeoff mass the V2 climb gradient is below its minimum.');
+    notes.push(notice('runwayCheck.designTakeoffImplausible')`At the design takeoff mass: ${f?.notice ?? notice('runwayCheck.beyondBound')`the takeoff is beyond the plausibility bound of ${bound.label}.`}`);
+  } else if (exceeded.length) notes.push(notice('runwayCheck.designTakeoffExceeds')`At the design takeoff mass the takeoff exceeds ${exceeded.join(', ')}.`);
+  if (climbLimited) notes.push(notice('runwayCheck.designClimbBelowMinimum')`At the design takeoff mass the V2 climb gradient is below its minimum.`);
   if (needs) {
     trace.push({ label: 'Takeoff run needed', value: needs.takeoffRun_m, unit: 'm' });
     trace.push({ label: 'Takeoff distance needed', value: needs.takeoffDistance_m, unit: 'm' });
@@ -790,12 +797,12 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
   const landingBeyond = land.status === 'ok' && !withinPlausibility(land.required_m, bound);
   const landingNeeded = land.status === 'ok' && !landingBeyond ? land.required_m : undefined;
   const landingOk = landingNeeded !== undefined && landingNeeded <= lda;
-  if (land.status !== 'ok') notes.push(`Landing at ${lm.toFixed(0)} kg is not possible here: ${land.reason}`);
+  if (land.status !== 'ok') notes.push(notice('runwayCheck.landingInfeasible')`Landing at ${qty.mass(lm)} is not possible here: ${land.reason}`);
   else if (landingBeyond) {
     const f = checkPlausibility([{ what: 'landing', value_m: land.required_m }], bound, {
       elevation_m: input.pressureAltitude_m, temperature_c: input.landingTemperature_c ?? standardTemperatureC(input.pressureAltitude_m), mass_kg: lm,
     });
-    notes.push(f!.reason);
+    notes.push(f!.notice);
   }
   if (landingNeeded !== undefined) trace.push({ label: 'Landing runway needed', value: landingNeeded, unit: 'm' });
 
@@ -814,10 +821,10 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
         aircraft: a, takeoffMass_kg: mt.maxTakeoffMass_kg!, stageLength_m: route.stageLength_m, payload_kg: route.payload_kg,
         reserves: route.reserves, ...(pax !== undefined ? { passengerMass_kg: pax } : {}),
       });
-      if (penalty.note) notes.push(penalty.note);
+      if (penalty.note) notes.push(...penalty.note);
       trace.push(...penalty.trace);
     } else {
-      notes.push('No takeoff mass is allowed on this runway direction: the route cannot be flown from it.');
+      notes.push(notice('runwayCheck.routeNotFlyable')`No takeoff mass is allowed on this runway direction: the route cannot be flown from it.`);
     }
   }
 
@@ -839,7 +846,7 @@ export function assessExistingRunway(input: AssessExistingRunwayInput): Existing
       rangePenalty_km: penalty.rangePenalty_m / 1000,
     } : {}),
     ...(ml.maxLandingMass_kg !== undefined ? { maxLandingMass_kg: ml.maxLandingMass_kg } : {}),
-    ...(notes.length ? { note: notes.join(' ') } : {}),
+    ...(notes.length ? { note: notes } : {}),
   };
   return {
     ...check_,

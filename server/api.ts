@@ -239,7 +239,7 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
         problems: state.problems,
       }, 409);
     }
-    return c.json({ savedAt: latest.loaded.saved.createdAt, ...latest.loaded.output });
+    return jsonWithNotices(c, { savedAt: latest.loaded.saved.createdAt, ...latest.loaded.output }, latest.loaded.output.options.units);
   });
 
   app.post('/studies/:id/run', async (c) => {
@@ -249,7 +249,7 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
     if (state.problems.length > 0) return c.json({ error: 'invalid', message: 'the study cannot be computed yet', problems: state.problems }, 422);
     const saved = await service.compute(state);
     const loaded = service.load(id, saved);
-    return c.json({ savedAt: saved.createdAt, ...loaded.output });
+    return jsonWithNotices(c, { savedAt: saved.createdAt, ...loaded.output }, loaded.output.options.units);
   });
 
   // One-off computations ------------------------------------------------------------------------

@@ -3,6 +3,7 @@
  * PDF (vector paths) both render this model, so the same numbers appear in both.
  */
 import type { QuantityKind } from '../aircraft.js';
+import type { Notice } from '../notices.js';
 
 export interface ChartPoint {
   readonly x: number;
@@ -10,7 +11,8 @@ export interface ChartPoint {
 }
 
 export interface ChartSeries {
-  readonly name: string;
+  /** Legend text; a notice when it carries a value (rendered in the reader's units). */
+  readonly name: string | Notice;
   readonly points: readonly ChartPoint[];
   /**
    * 'line' joins points; 'step' draws a step function (after); 'points' draws markers only; 'bar' draws

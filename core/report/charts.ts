@@ -11,6 +11,7 @@
 import { isOperating } from '../study/run.js';
 import type { PayloadRangeSeries, StudyResult, ScenarioResult } from '../study/types.js';
 import type { ChartModel, ChartPoint, ChartSeries } from './chart.js';
+import { notice, qty } from '../notices.js';
 
 function longestTakeoffRun(result: StudyResult): { length_m: number; label: string } | undefined {
   let best: { length_m: number; label: string } | undefined;
@@ -110,7 +111,7 @@ export function payloadRangeChart(pr: PayloadRangeSeries): ChartModel {
   ];
   if (pr.runwayLimited) {
     series.push({
-      name: `Existing runway: takeoff mass limited to ${Math.floor(pr.runwayLimited.takeoffMass_kg)} kg`, style: 'line', emphasis: true,
+      name: notice('chart.runwayLimitedMass')`Existing runway: takeoff mass limited to ${qty.mass(Math.floor(pr.runwayLimited.takeoffMass_kg))}`, style: 'line', emphasis: true,
       points: pr.runwayLimited.points.map((p): ChartPoint => ({ x: p.stageLength_m, y: p.payload_kg })),
     });
   }

@@ -19,7 +19,7 @@ import { SURFACE_LABELS } from '../surface.js';
 import { CLIMATE_FIELDS, DIRECTION_FIELDS, FLEET_FIELDS, MONTHLY_FIELDS, PROFILE_POINT_FIELDS, SITE_FIELDS, STUDY_OPTION_FIELDS, optionValue } from '../studyFields.js';
 import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SET_INFO } from '../operatingRules.js';
 import { monthName } from '../climate/index.js';
-import { notice, scoped, type Notice } from '../notices.js';
+import { notice, qty, scoped, type Notice } from '../notices.js';
 import type {
   RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
 } from '../study/types.js';
@@ -68,7 +68,7 @@ export interface Column {
 export type Row =
   | { readonly cells: readonly Cell[] }
   | { readonly group: string }
-  | { readonly note: string };
+  | { readonly note: Prose };
 
 export interface Fact {
   readonly label: string;
@@ -371,9 +371,11 @@ function fleetBlocks(input: StudyInput, result: StudyResult, byId: ReadonlyMap<s
 function methodIntroBlocks(result: StudyResult): Block[] {
   const o = result.options;
   const rules = OPERATING_RULE_SET_INFO[o.operatingRules ?? DEFAULT_OPERATING_RULES];
-  const reserves = o.reserves.policy === 'custom'
-    ? `custom (alternate ${o.reserves.alternate_km ?? 0} km, ${o.reserves.holding_min ?? 0} min)`
-    : o.reserves.policy === 'international' ? 'international (10 % trip time, alternate, 30 min hold)' : `cruise plus alternate (${o.reserves.alternate_km ?? 370.4} km${o.reserves.alternate_km === undefined ? ', 200 NM default' : ''}) plus 45 minutes`;
+  const alternate = qty.distance((o.reserves.alternate_km ?? (o.reserves.policy === 'custom' ? 0 : 370.4)) * 1000);
+  const reserves: Notice = o.reserves.policy === 'custom'
+    ? notice('report.reservesCustom')`custom (alternate ${alternate}, ${o.reserves.holding_min ?? 0} min)`
+    : o.reserves.policy === 'international' ? notice('report.reservesInternational')`international (10 % trip time, alternate, 30 min hold)`
+    : notice('report.reservesDomestic')`cruise plus alternate (${alternate}${o.reserves.alternate_km === undefined ? ', the 200 NM default' : ''}) plus 45 minutes`;
   return [
     { type: 'paragraph', text: `Method version ${result.methodVersion}. Each aircraft is sized at the site's design conditions from first-principles performance models and published correction methods; this section states the models, their formulas and their published sources. The references are listed at the end of the section.` },
     { type: 'facts', items: [
@@ -383,7 +385,7 @@ function methodIntroBlocks(result: StudyResult): Block[] {
       { label: 'Operating rules (landing factors)', value: t(`${rules.label}: ${rules.summary} (${rules.source})`) },
       { label: 'Light-aircraft factors', value: t(`takeoff × ${LIGHT_TAKEOFF_FACTOR_DEFAULT}, landing × ${LIGHT_LANDING_FACTOR_DEFAULT.toFixed(2)} unless the profile gives its own: ${LIGHT_FACTOR_SOURCE}`) },
       ...(o.referenceOverrideReason !== undefined ? [{ label: 'Override of the 35 % limit (recorded)', value: t(`corrected reference lengths beyond the 35 % limit of the percentage corrections govern. Reason given: "${o.referenceOverrideReason}"`) }] : []),
-      { label: 'Fuel reserves for the design takeoff mass', value: t(reserves) },
+      { label: 'Fuel reserves for the design takeoff mass', value: { notice: reserves } },
       { label: 'Regular-use threshold', value: t(`${o.regularUseThreshold.toLocaleString('en-US')} annual operations`) },
       { label: 'Planning increment for the recommended length', value: q(o.roundingIncrement_m, 'length') },
       { label: 'Mass per passenger (payload penalties)', value: q(o.passengerMass_kg, 'mass') },
@@ -584,7 +586,7 @@ function comparisonBlocks(result: StudyResult): Block[] {
 function existingIntroBlocks(result: StudyResult): Block[] {
   return [
     { type: 'paragraph', text: 'For each aircraft that can operate, the needs at its design takeoff mass are set against the declared distances of each runway direction at design conditions. Where a distance falls short, the greatest takeoff mass the declared distances allow is found, with the payload that can then fly the design stage and the range with the design payload; the differences are the penalties of operating from the existing runway.' },
-    { type: 'paragraph', text: `Penalties in passengers use ${result.options.passengerMass_kg} kg per passenger with baggage.`, style: 'note' },
+    { type: 'paragraph', text: notice('report.passengerMass')`Penalties in passengers use ${qty.mass(result.options.passengerMass_kg)} per passenger with baggage.`, style: 'note' },
   ];
 }
 
@@ -612,7 +614,7 @@ function existingBlocks(s: ScenarioResult, result: StudyResult): Block[] {
         penalty(e.rangePenalty_km === undefined ? undefined : e.rangePenalty_km * 1000, e.takeoffOk, 'distance'),
         q(e.maxLandingMass_kg, 'mass'),
       ));
-      if (e.note) mass.push({ note: e.note });
+      if (e.note) mass.push({ note: notice('report.runwayNotes')`${e.note}` });
     }
   }
   return [

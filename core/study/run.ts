@@ -58,11 +58,15 @@ import type {
   StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
 } from './types.js';
 
-/** Version of the study engine and the models it calls; changes whenever a number can change. */
 /** The project's own words when a profile has no cruise data (route column and row warning). */
 const NO_CRUISE_DATA: Notice = notice('study.noCruiseData')`The profile has no cruise data; the takeoff is sized at MTOW.`;
 
-export const STUDY_METHOD_VERSION = 'runwright-methods-5';
+/**
+ * Version of the study engine and the models it calls, and of the saved result's shape: it changes
+ * whenever a number or the result's structure can change (a saved result of another version is
+ * recomputed, never shown as current).
+ */
+export const STUDY_METHOD_VERSION = 'runwright-methods-6';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = PEAK_SCAN_SPAN_C;
@@ -479,7 +483,7 @@ function evaluateRow(
       warnings.push(climbCapNotices.peak(peak, ev.site.designTemperature_c, takeoffRequired));
       takeoffRequired = peak.required_m;
       summary.required_m = peak.required_m;
-      summary.governing = `${summary.governing}, peak at ${peak.temperature_c.toFixed(1)} °C below the design temperature`;
+      summary.governing = `${summary.governing}, at its peak below the design temperature (the row's warning gives the temperature)`;
       summary.peakTemperature_c = peak.temperature_c;
     }
   }

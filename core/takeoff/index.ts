@@ -77,12 +77,15 @@ type Failure =
     readonly hi: number;
     readonly hiBasis: 'vr' | 'vmbe';
   }
-  | { readonly ok: false; readonly reason: InfeasibleReason; readonly message: string }
+  | { readonly ok: false; readonly reason: InfeasibleReason; readonly message: Notice }
   /** The VMCG-based V1 minimum lies above VR: re-run with VR raised to it (25.107(e)(1)(i)). */
   | { readonly ok: false; readonly raiseVr_mps: number };
 
-const f1 = (x: number): string => x.toFixed(1);
+const sp = (v: number) => qty.speed(v);
+/** An excess-thrust ratio as a percentage with two decimals (a plain figure, the same in every unit system). */
 const pct = (x: number): string => `${(x * 100).toFixed(2)} %`;
+
+const NO_LIFTOFF: Notice = notice('takeoff.noLiftoffShort')`The aircraft cannot reach lift-off speed.`;
 
 /** Highest groundspeed searched for a VMCG-based V1 beyond lift-off speed, as a multiple of VLOF. */
 const V1_SEARCH_VLOF_MULTIPLE = 1.6;
@@ -125,7 +128,7 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeo
   if (!oeiB.ok) {
     return {
       ok: false, reason: 'cannot-continue-engine-out',
-      message: `With one engine failed the aircraft cannot accelerate to lift-off speed: resistance exceeds thrust near ${f1(oeiB.speed_mps)} m/s groundspeed.`,
+      message: notice('takeoff.engineOutNoLiftoff')`With one engine failed the aircraft cannot accelerate to lift-off speed: resistance exceeds thrust near ${sp(oeiB.speed_mps)} groundspeed.`,
     };
   }
   const oei = oeiB.table;
@@ -134,14 +137,14 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeo
   if (v1Min === undefined) {
     return {
       ok: false, reason: 'v1-window-empty',
-      message: `No decision speed is possible: after an engine failure at VMCG (${f1(s.vmcg ?? 0)} m/s) the aircraft does not reach a decision speed below ${V1_SEARCH_VLOF_MULTIPLE} × VLOF.`,
+      message: notice('takeoff.noV1BelowSearchLimit')`No decision speed is possible: after an engine failure at VMCG (${sp(s.vmcg ?? 0)}) the aircraft does not reach a decision speed below ${V1_SEARCH_VLOF_MULTIPLE} × VLOF.`,
     };
   }
   if (v1Min > s.vrG) {
     if (allowRaise) return { ok: false, raiseVr_mps: v1Min + s.wind_mps };
     return {
       ok: false, reason: 'v1-window-empty',
-      message: `No decision speed is possible: the least V1 after an engine failure at VMCG (${f1(v1Min + s.wind_mps)} m/s) stays above VR (${f1(s.vr)} m/s) even with VR raised.`,
+      message: notice('takeoff.noV1AboveRaisedVr')`No decision speed is possible: the least V1 after an engine failure at VMCG (${sp(v1Min + s.wind_mps)}) stays above VR (${sp(s.vr)}) even with VR raised.`,
     };
   }
   const energyAir = energyAirborne(engineOutAirInput(s));
@@ -150,8 +153,8 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeo
     return {
       ok: false, reason: 'cannot-climb-engine-out',
       message: air.cause === 'no-excess-thrust'
-        ? `With one engine failed the aircraft cannot reach V2 (${f1(s.v2)} m/s) by the screen height: thrust no longer exceeds drag at ${f1(air.height_m)} m above the runway (excess thrust ratio ${pct(air.excess)}).`
-        : `With one engine failed the air distance from lift-off to the screen height would exceed ${MAX_ENGINE_OUT_AIR_M} m (least excess thrust ratio ${pct(air.excess)}): the aircraft is at its climb limit here.`,
+        ? notice('takeoff.engineOutNoV2')`With one engine failed the aircraft cannot reach V2 (${sp(s.v2)}) by the screen height: thrust no longer exceeds drag at ${qty.shortLength(air.height_m, 1)} above the runway (excess thrust ratio ${pct(air.excess)}).`
+        : notice('takeoff.engineOutAirTooLong')`With one engine failed the air distance from lift-off to the screen height would exceed ${qty.length(MAX_ENGINE_OUT_AIR_M)} (least excess thrust ratio ${pct(air.excess)}): the aircraft is at its climb limit here.`,
     };
   }
   // The energy method has no pull-up arc; fewer engines cannot reach the screen height sooner, so the
@@ -164,7 +167,7 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeo
     const bad = !stopOeiB.ok ? stopOeiB : stopAeoB.ok ? undefined : stopAeoB;
     return {
       ok: false, reason: 'cannot-stop',
-      message: `Braking cannot stop the aircraft: idle thrust and the downhill slope exceed braking and drag near ${f1(bad?.speed_mps ?? 0)} m/s groundspeed.`,
+      message: notice('takeoff.cannotStop')`Braking cannot stop the aircraft: idle thrust and the downhill slope exceed braking and drag near ${sp(bad?.speed_mps ?? 0)} groundspeed.`,
     };
   }
   const rotation = rotationDistance({
@@ -186,12 +189,12 @@ function buildFailure(s: TakeoffSetup, aeo: SpeedTable, aeoAir: ReturnType<typeo
     if (w.cause === 'vmbe') {
       return {
         ok: false, reason: 'brake-energy-limit',
-        message: `The brakes cannot absorb a rejected takeoff: the energy limit (${(a.maxBrakeEnergy_J! / 1e6).toFixed(1)} MJ) allows V1 up to ${f1(w.vmbe + s.wind_mps)} m/s, below the least V1 after an engine failure at VMCG (${f1(w.v1Min + s.wind_mps)} m/s).`,
+        message: notice('takeoff.brakeEnergyLimit')`The brakes cannot absorb a rejected takeoff: the energy limit (${(a.maxBrakeEnergy_J! / 1e6).toFixed(1)} MJ) allows V1 up to ${sp(w.vmbe + s.wind_mps)}, below the least V1 after an engine failure at VMCG (${sp(w.v1Min + s.wind_mps)}).`,
       };
     }
     return {
       ok: false, reason: 'v1-window-empty',
-      message: `No decision speed is possible: the least V1 after an engine failure at VMCG exceeds VR (${f1(s.vr)} m/s).`,
+      message: notice('takeoff.noV1AboveVr')`No decision speed is possible: the least V1 after an engine failure at VMCG exceeds VR (${sp(s.vr)}).`,
     };
   }
   return { ok: true, model, rotation_m: rotation, airborne: air, lo: w.lo, hi: w.hi, hiBasis: w.hiBasis };
@@ -309,21 +312,21 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   }
 
   let allEngines: AllEnginesResult | undefined;
-  const infeasible = (reason: InfeasibleReason, message: string): TakeoffResult => ({
+  const infeasible = (reason: InfeasibleReason, message: Notice): TakeoffResult => ({
     feasible: false, reason, message, methodVersion: TAKEOFF_METHOD_VERSION, certification: basis,
     screenHeight_m: s.screen_m, speeds: baseSpeeds, climb, allEngines, warnings, trace,
   });
 
   if (a.tyreSpeedLimit_mps !== undefined && s.vlofG > a.tyreSpeedLimit_mps) {
     return infeasible('tyre-speed-limit',
-      `The lift-off groundspeed (${f1(s.vlofG)} m/s) exceeds the tyre speed rating (${f1(a.tyreSpeedLimit_mps)} m/s) at this mass and site.`);
+      notice('takeoff.tyreSpeedLimit')`The lift-off groundspeed (${sp(s.vlofG)}) exceeds the tyre speed rating (${sp(a.tyreSpeedLimit_mps)}) at this mass and site.`);
   }
 
   // All engines.
   const aeoB = runTable(s, n, 0);
   if (!aeoB.ok) {
     return infeasible('cannot-reach-liftoff',
-      `The aircraft cannot reach lift-off speed: resistance exceeds thrust near ${f1(aeoB.speed_mps)} m/s groundspeed (lift-off needs ${f1(s.vlofG)} m/s).`);
+      notice('takeoff.noLiftoff')`The aircraft cannot reach lift-off speed: resistance exceeds thrust near ${sp(aeoB.speed_mps)} groundspeed (lift-off needs ${sp(s.vlofG)}).`);
   }
   const aeo = aeoB.table;
   const sVr = distanceAt(aeo, s.vrG);
@@ -332,11 +335,11 @@ function analyseSetup(s: TakeoffSetup, input: TakeoffInput, allowRaise: boolean)
   const air = allEnginesAir(s);
   if (!air.ok) {
     return infeasible('cannot-climb',
-      `With all engines the aircraft cannot climb after lift-off (gradient ${pct(air.gradient)}).`);
+      notice('takeoff.noClimbAllEngines')`With all engines the aircraft cannot climb after lift-off (gradient ${pct(air.gradient)}).`);
   }
   if (air.airDistance_m > MAX_ALL_ENGINES_AIR_M) {
     return infeasible('cannot-climb',
-      `With all engines the air distance from lift-off to the screen height would be ${Math.round(air.airDistance_m)} m, beyond the ${MAX_ALL_ENGINES_AIR_M} m guard (transition gradient ${pct(air.gradient)}): the aircraft is at its climb limit here.`);
+      notice('takeoff.allEnginesAirTooLong')`With all engines the air distance from lift-off to the screen height would be ${qty.length(air.airDistance_m)}, beyond the ${qty.length(MAX_ALL_ENGINES_AIR_M)} guard (transition gradient ${pct(air.gradient)}): the aircraft is at its climb limit here.`);
   }
   const liftoff = sVr + rot;
   const toScreen = liftoff + air.distance_m;
@@ -506,7 +509,7 @@ export type EngineFailureAtResult =
     readonly v1Min_mps: number;
     readonly v1Max_mps: number;
   }
-  | { readonly feasible: false; readonly reason: InfeasibleReason; readonly message: string };
+  | { readonly feasible: false; readonly reason: InfeasibleReason; readonly message: Notice };
 
 /**
  * Continued and accelerate-stop distances at a chosen V1 (multi-engine aircraft). V1 outside the
@@ -519,13 +522,13 @@ export function engineFailureAt(input: EngineFailureAtInput): EngineFailureAtRes
     throw new InputDomainError('aircraft.engineCount', s.engineCount, 'at least 2 for an engine-failure analysis');
   }
   let aeoB = runTable(s, s.engineCount, 0);
-  if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
+  if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: NO_LIFTOFF };
   const aeoAir = allEnginesAir(s);
   let fm = buildFailure(s, aeoB.table, aeoAir, true);
   if (!fm.ok && 'raiseVr_mps' in fm) {
     s = withVrAtLeast(s, fm.raiseVr_mps * (1 + 1e-9));
     aeoB = runTable(s, s.engineCount, 0);
-    if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: 'The aircraft cannot reach lift-off speed.' };
+    if (!aeoB.ok) return { feasible: false, reason: 'cannot-reach-liftoff', message: NO_LIFTOFF };
     fm = buildFailure(s, aeoB.table, allEnginesAir(s), false);
   }
   if (!fm.ok) {

@@ -228,8 +228,8 @@ export interface TakeoffFeasible extends TakeoffCommon {
 export interface TakeoffInfeasible extends TakeoffCommon {
   readonly feasible: false;
   readonly reason: InfeasibleReason;
-  /** Plain-words explanation. */
-  readonly message: string;
+  /** Plain-words explanation (a notice: rendered in the reader's units). */
+  readonly message: Notice;
   /** Climb check at V2. */
   readonly climb: ClimbResult;
   /** All-engines figures, when the all-engines takeoff itself is possible. */

@@ -7,7 +7,7 @@
  */
 import type { AircraftFiguresView } from '../../templates/aircraft/index.js';
 import {
-  InputDomainError, analyseTakeoff, classifyAircraft, referenceLandingSpeed, type AircraftProfile,
+  InputDomainError, analyseTakeoff, classifyAircraft, notice, referenceLandingSpeed, type AircraftProfile,
 } from '../../core/index.js';
 
 /** Key figures of a catalogue aircraft; the view type lives with the template that shows it. */
@@ -31,7 +31,7 @@ function computeFigures(a: AircraftProfile): AircraftFigures {
   try {
     const vref_mps = referenceLandingSpeed({ aircraft: a });
     const to = analyseTakeoff({ aircraft: a, mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry' });
-    if (!to.feasible) return { vref_mps, note: `No reference field length: ${to.message}` };
+    if (!to.feasible) return { vref_mps, note: notice('aircraft.noReferenceFieldLength')`No reference field length: ${to.message}` };
     const c = classifyAircraft(a, { arfl_m: to.required_m, vref_mps });
     return {
       arfl_m: to.required_m,

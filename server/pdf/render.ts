@@ -346,7 +346,7 @@ class Writer {
       }
       if ('note' in r) {
         doc.font(FONT.italic).fontSize(size - 0.4);
-        return this.height(r.note, CONTENT_W - 2 * pad - NOTE_INDENT) + 2 * pad;
+        return this.height(say(r.note, this.units), CONTENT_W - 2 * pad - NOTE_INDENT) + 2 * pad;
       }
       return Math.max(...texts[k]!.map((t, i) => {
         doc.font(isBold(r.cells[i]!) ? FONT.bold : FONT.regular).fontSize(size);
@@ -408,7 +408,7 @@ class Writer {
         this.boxText(r.group, MARGIN.left + pad, y + pad, CONTENT_W - 2 * pad);
       } else if ('note' in r) {
         doc.font(FONT.italic).fontSize(size - 0.4).fillColor(MUTED);
-        this.text(r.note, MARGIN.left + pad + NOTE_INDENT, y + pad, { width: CONTENT_W - 2 * pad - NOTE_INDENT });
+        this.text(say(r.note, this.units), MARGIN.left + pad + NOTE_INDENT, y + pad, { width: CONTENT_W - 2 * pad - NOTE_INDENT });
         doc.fillColor(INK);
       } else {
         r.cells.forEach((c, i) => {

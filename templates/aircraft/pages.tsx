@@ -4,12 +4,12 @@
  */
 import {
   CERTIFICATION_BASES, ENGINE_TYPES, GEAR_LAYOUTS, THRUST_LAPSE_MODELS,
-  type AircraftProfile, type UnitSystem,
+  type AircraftProfile, type Notice as CoreNotice, type UnitSystem,
 } from '../../core/index.js';
 import { AIRCRAFT_FORM_FIELDS, AIRCRAFT_LABELS, AIRCRAFT_TEXT_FIELDS, FORM_SECTIONS } from './fields.js';
 import { ActionButton, Facts, ImportProblems, Notice, PostForm } from '../components.js';
 import { ErrorSummary, Field, Section, SelectField, type Errors, type Values } from '../forms.js';
-import { fmt, fmtInput, fmtLengthBoth } from '../format.js';
+import { fmt, fmtInput, fmtLengthBoth, say } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 import { WhatIfPanel, type WhatIfProps } from '../whatif/index.js';
@@ -23,7 +23,8 @@ export interface AircraftFiguresView {
   readonly approachCategory?: string;
   readonly designGroup?: string | null;
   readonly runwayDesignCode?: string | null;
-  readonly note?: string;
+  /** Why there are no figures (rendered in the reader's units). */
+  readonly note?: CoreNotice | string;
 }
 
 const ENGINE_LABEL: Record<string, string> = { turbofan: 'turbofan', turboprop: 'turboprop', piston: 'piston' };
@@ -139,7 +140,7 @@ export function AircraftResults(p: AircraftListProps) {
                     <td>{CERT_LABEL[a.certification] ?? a.certification}</td>
                     <td class="num">{fmt(a.mtow_kg, 'mass', units)}</td>
                     <td class="num">{fmt(a.wingspan_m, 'shortLength', units)}</td>
-                    <td class="num">{f.arfl_m === undefined ? <span title={f.note}>—</span> : fmt(f.arfl_m, 'length', units)}</td>
+                    <td class="num">{f.arfl_m === undefined ? <span title={f.note === undefined ? undefined : say(f.note, units)}>—</span> : fmt(f.arfl_m, 'length', units)}</td>
                     <td>{f.aerodromeCode ?? '—'}</td>
                     <td>{f.approachCategory ?? '—'}</td>
                     <td>{f.designGroup ?? '—'}</td>
@@ -286,7 +287,7 @@ export function AircraftDetailPage(p: AircraftDetailProps) {
           ['Engines', engineText(a)],
           ['Certification', CERT_LABEL[a.certification] ?? a.certification],
           ['MTOW / MLW / OEW', `${fmt(a.mtow_kg, 'mass', units)} / ${fmt(a.mlw_kg, 'mass', units)} / ${fmt(a.oew_kg, 'mass', units)}`],
-          ['Reference field length (MTOW, sea level, ISA)', f.arfl_m === undefined ? (f.note ?? '—') : fmtLengthBoth(f.arfl_m, units)],
+          ['Reference field length (MTOW, sea level, ISA)', f.arfl_m === undefined ? (f.note === undefined ? '—' : say(f.note, units)) : fmtLengthBoth(f.arfl_m, units)],
           ['VREF at MLW (sea level, ISA)', fmt(f.vref_mps, 'speed', units)],
           ['Aerodrome reference code', f.aerodromeCode ?? '—'],
           ['Approach category / design group', `${f.approachCategory ?? '—'} / ${f.designGroup ?? '—'}`],

@@ -6,6 +6,7 @@ import { scaleBand, scaleLinear } from 'd3-scale';
 import { line, curveLinear, curveStepAfter } from 'd3-shape';
 import type { ChartModel, UnitSystem } from '../../core/index.js';
 import { unitOf } from '../../core/index.js';
+import { say } from '../format.js';
 
 export interface Box { readonly width: number; readonly height: number; readonly left: number; readonly right: number; readonly top: number; readonly bottom: number }
 
@@ -77,7 +78,7 @@ export function layoutChart(model: ChartModel, system: UnitSystem, boxIn?: Box):
         const top = y(cy.f(p.y));
         return { x: (band(p.x) ?? x0) + (inner(k) ?? 0), y: Math.min(top, base), width: inner.bandwidth(), height: Math.abs(base - top) };
       });
-      return { name: s.name, path: '', markers: [], bars, emphasis: s.emphasis ?? false, colour: PALETTE[i % PALETTE.length]!, dash: '' };
+      return { name: say(s.name, system), path: '', markers: [], bars, emphasis: s.emphasis ?? false, colour: PALETTE[i % PALETTE.length]!, dash: '' };
     });
     const rules = model.rules.filter((r) => r.axis === 'y').map((r, k) => ({ x1: x0, y1: y(cy.f(r.value)), x2: x1, y2: y(cy.f(r.value)), label: r.label, lx: k % 2 === 0 ? x0 + 4 : x1 - 4, ly: y(cy.f(r.value)) - 4, anchor: k % 2 === 0 ? 'start' as const : 'end' as const }));
     return {
@@ -92,7 +93,7 @@ export function layoutChart(model: ChartModel, system: UnitSystem, boxIn?: Box):
   const series = model.series.map((s, i) => {
     const pts = s.points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y)).map((p) => ({ x: x(cx.f(p.x)), y: y(cy.f(p.y)) }));
     return {
-      name: s.name,
+      name: say(s.name, system),
       path: s.style === 'points' || pts.length < 2 ? '' : gen(s.style)(pts) ?? '',
       markers: s.style === 'line' && pts.length > 24 ? [] : pts,
       bars: [],

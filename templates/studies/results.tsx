@@ -132,7 +132,7 @@ function ExistingCell(p: { e: RowResult['existing'][number]; designMass_kg: numb
     if (e.rangePenalty_km !== undefined && e.rangePenalty_km > 0) parts.push(`or range −${fmt(e.rangePenalty_km * 1000, 'distance', units)}`);
   }
   if (!e.landingOk) parts.push(`landing short: needs ${fmt(e.landingNeeded_m, 'length', units)}, LDA ${fmt(e.lda_m, 'length', units)}`);
-  return <td class="short" title={needed}>{parts.join('; ')}{e.note ? <span class="muted"> ({e.note})</span> : null}</td>;
+  return <td class="short" title={needed}>{parts.join('; ')}{e.note ? <span class="muted"> ({e.note.map((n) => say(n, units)).join(' ')})</span> : null}</td>;
 }
 
 function ExistingAssessment(p: { s: ScenarioResult; index: number }) {

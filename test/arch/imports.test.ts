@@ -2,7 +2,8 @@
  * Dependency direction (DEVELOPERS.md, "Architecture"): core imports nothing outside core (and no
  * node: or package imports); templates never import db or server; db never imports server or
  * templates; nothing imports server except server itself, tests and bench; a feature folder (aircraft/,
- * sites/, studies/, whatif/ in server and templates) is imported from outside only through its index.ts.
+ * sites/, studies/, whatif/ in server and templates) is imported from outside only through its index.ts;
+ * core/index.ts lists core's public names one by one, and the application uses each of them.
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve, dirname, sep } from 'node:path';
@@ -48,6 +49,14 @@ function violations(folder: string, rule: (t: { folder?: string; pkg?: string; p
 
 const CORE_ALLOWED_PACKAGES = new Set(['csv-parse/sync']);
 
+/** The application's folders: they see core only through its public face, core/index.ts. */
+const APP_FOLDERS = ['server', 'templates', 'db', 'scripts'];
+
+/** Names in an import or export list ("a, type B, c as d" → a, B, c). */
+function names(list: string): string[] {
+  return list.split(',').map((n) => n.trim().replace(/^type\s+/, '').split(/\s+as\s+/)[0]!.trim()).filter(Boolean);
+}
+
 describe('dependency direction (DEVELOPERS.md)', () => {
   it('core imports only core (plus the CSV parser for climate files)', () => {
     expect(
@@ -66,10 +75,23 @@ describe('dependency direction (DEVELOPERS.md)', () => {
     });
   }
 
-  it('server, templates, db, bench and scripts import core only through core/index.ts', () => {
-    const v = ['server', 'templates', 'db', 'bench', 'scripts'].flatMap((folder) =>
+  it('server, templates, db and scripts import core only through core/index.ts (tests and benchmarks may reach the internals)', () => {
+    const v = APP_FOLDERS.flatMap((folder) =>
       violations(folder, (t) => (t.folder === 'core' && t.path !== 'core/index.js' ? 'import core through core/index.ts' : undefined)));
     expect(v).toEqual([]);
+  });
+
+  it('core/index.ts is the public face of core: it names its exports one by one, and each is used by server, templates, db or scripts', () => {
+    const index = readFileSync(join(root, 'core/index.ts'), 'utf8');
+    expect(index).not.toMatch(/export \*/);
+    const exported = [...index.matchAll(/export\s*\{([^}]*)\}/g)].flatMap((m) => names(m[1]!));
+    expect(exported.length).toBeGreaterThan(50);
+    const used = new Set(APP_FOLDERS.flatMap((folder) => files(folder)).flatMap((f) => {
+      const src = readFileSync(join(root, f), 'utf8');
+      return [...src.matchAll(/import\s+(?:type\s+)?\{([^}]*)\}\s+from\s+['"]([^'"]*core\/index\.js)['"]/g)].flatMap((m) => names(m[1]!))
+        .concat([...src.matchAll(/import\('[^']*core\/index\.js'\)\.(\w+)/g)].map((m) => m[1]!));
+    }));
+    expect(exported.filter((n) => !used.has(n)), 'exported from core/index.ts but used by none of server, templates, db, scripts: make it internal').toEqual([]);
   });
 
   it('inside core, only the study engine and the report model import core/study (the models stand below it)', () => {

@@ -1,3 +1,4 @@
+import { siText } from '../../core/notices.js';
 /**
  * Calibration of the takeoff and landing models against reference lengths (core/calibrate.ts).
  *
@@ -22,7 +23,7 @@ const ALBATROSS = byId('albatross-nb180');
 const CURLEW = byId('curlew-rt70');
 
 function ok(r: TakeoffCalibrationResult) {
-  if (r.status !== 'ok') throw new Error(`expected a calibration, got ${r.reason}: ${r.message}`);
+  if (r.status !== 'ok') throw new Error(`expected a calibration, got ${r.reason}: ${siText(r.message)}`);
   return r;
 }
 
@@ -45,7 +46,7 @@ describe('takeoff calibration round trip (derived; tolerance 0.5 % by issue 4)',
       expect(c.factor).toBeGreaterThanOrEqual(DEFAULT_CALIBRATION_BAND.min);
       expect(c.factor).toBeLessThanOrEqual(DEFAULT_CALIBRATION_BAND.max);
       const r = predictCalibrated({ aircraft: a, mass_kg: a.mtow_kg, ...TAKEOFF_REFERENCE_CONDITION, calibration: c });
-      if (!r.feasible) throw new Error(r.message);
+      if (!r.feasible) throw new Error(siText(r.message));
       expectClose(r.required_m, ref, { rel: 0.005 }, 'round trip');
       expect(Math.abs(c.residual_pct)).toBeLessThan(0.5);
       expectClose(c.residual_m, r.required_m - ref, { abs: 1e-9 }, 'reported residual');
@@ -70,7 +71,7 @@ describe('takeoff calibration round trip (derived; tolerance 0.5 % by issue 4)',
     const c = ok(calibrateTakeoff({ aircraft: CURLEW, reference_m: 1400 }));
     expect(c.referenceSource).toBe('given');
     const r = analyseTakeoff({ aircraft: CURLEW, mass_kg: CURLEW.mtow_kg, ...TAKEOFF_REFERENCE_CONDITION, thrustScale: c.factor });
-    if (!r.feasible) throw new Error(r.message);
+    if (!r.feasible) throw new Error(siText(r.message));
     expectClose(r.required_m, 1400, { rel: 0.005 }, 'curlew 1400 m');
   });
 });
@@ -95,7 +96,7 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
     expect(r.status).toBe('refused');
     if (r.status === 'refused') {
       expect(r.reason).toBe('no-reference');
-      expect(r.message).toContain('curlew-rt70');
+      expect(siText(r.message)).toContain('curlew-rt70');
     }
   });
 
@@ -109,7 +110,7 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
     expect(r.factorNeeded!).toBeGreaterThan(1.3);
     // The reported factor does reproduce the reference (derived).
     const t = analyseTakeoff({ aircraft: TERN, mass_kg: TERN.mtow_kg, ...TAKEOFF_REFERENCE_CONDITION, thrustScale: r.factorNeeded! });
-    if (!t.feasible) throw new Error(t.message);
+    if (!t.feasible) throw new Error(siText(t.message));
     expectClose(t.required_m, 1300, { rel: 0.005 }, 'factor needed');
   });
 
@@ -120,7 +121,7 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
     expect(r.reason).toBe('outside-band');
     expect(r.side).toBe('below');
     expect(r.factorNeeded!).toBeLessThan(0.95);
-    expect(r.message).toMatch(/outside the plausible band 0\.95–1\.3/);
+    expect(siText(r.message)).toMatch(/outside the plausible band 0\.95–1\.3/);
   });
 
   it('a reference no factor up to the model limit (thrust × 2) reaches → refused without a factor', () => {
@@ -128,7 +129,7 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
     expect(r.status === 'refused' && r.reason).toBe('outside-band');
     if (r.status === 'refused') {
       expect(r.factorNeeded).toBeUndefined();
-      expect(r.message).toMatch(/above 2/);
+      expect(siText(r.message)).toMatch(/above 2/);
     }
   });
 
@@ -149,7 +150,7 @@ describe('takeoff calibration refusals (results, not exceptions; band 0.7–1.3 
     expect(r.status).toBe('refused');
     if (r.status === 'refused') {
       expect(r.reason).toBe('no-solution');
-      expect(r.message).toMatch(/longer than any the model gives before it becomes infeasible/);
+      expect(siText(r.message)).toMatch(/longer than any the model gives before it becomes infeasible/);
     }
   });
 
@@ -187,9 +188,9 @@ describe('landing calibration (braking factor; derived)', () => {
   for (const a of [TERN, ALBATROSS]) {
     it(`${a.id}: round trip within 0.5 % of the reference landing length`, () => {
       const c = calibrateLanding({ aircraft: a });
-      if (c.status !== 'ok') throw new Error(c.message);
+      if (c.status !== 'ok') throw new Error(siText(c.message));
       const r = predictCalibratedLanding({ aircraft: a, mass_kg: a.mlw_kg, ...LANDING_REFERENCE_CONDITION, calibration: c });
-      if (r.status !== 'ok') throw new Error(r.reason);
+      if (r.status !== 'ok') throw new Error(siText(r.reason));
       expectClose(r.required_m, a.reference!.landing_m!, { rel: 0.005 }, 'landing round trip');
       allFinite(c);
     });
@@ -197,7 +198,7 @@ describe('landing calibration (braking factor; derived)', () => {
   it('a longer reference needs less braking; no reference → refused', () => {
     const f = [1600, 1700, 1800].map((ref) => {
       const c = calibrateLanding({ aircraft: TERN, reference_m: ref });
-      if (c.status !== 'ok') throw new Error(c.message);
+      if (c.status !== 'ok') throw new Error(siText(c.message));
       return c.factor;
     });
     expect(f[1]!).toBeLessThan(f[0]!);

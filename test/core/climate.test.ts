@@ -1,4 +1,4 @@
-import { siText } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import { describe, expect, it } from 'vitest';
 import {
   ClimateFileError,

@@ -1,4 +1,4 @@
-import { siText } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { AircraftProfile } from '../../core/aircraft.js';
@@ -186,7 +186,7 @@ describe('braking integral: closed form and Gauss–Legendre quadrature (derived
   it('cannot stop: downhill slope with idle thrust beating poor friction is a result with a reason', () => {
     const r = landingBrakingDistance({ ...inp, brakingFriction: 0.05, slope: -0.05, thrust_N: 10000 });
     expect(r.status).toBe('cannot-stop');
-    if (r.status === 'cannot-stop') expect(r.reason).toMatch(/Net deceleration/);
+    if (r.status === 'cannot-stop') expect(siText(r.reason)).toMatch(/Net deceleration/);
   });
 });
 
@@ -291,13 +291,13 @@ describe('analyseLanding — infeasible results and bad input', () => {
   it('headwind at or above the touchdown airspeed is a result with a reason', () => {
     const r = analyseLanding(base(k, { headwind_mps: 40 }));
     expect(r.status).toBe('infeasible');
-    if (r.status === 'infeasible') expect(r.reason).toMatch(/Headwind/);
+    if (r.status === 'infeasible') expect(siText(r.reason)).toMatch(/Headwind/);
   });
   it('cannot stop downhill on ice-like friction with high idle thrust', () => {
     const slippery: AircraftProfile = { ...byId('curlew-rt70'), brakingFrictionWet: 0.05, idleThrustFraction: 0.15 };
     const r = analyseLanding(base(slippery, { surface: 'wet', slope: -0.05 }));
     expect(r.status).toBe('infeasible');
-    if (r.status === 'infeasible') expect(r.reason).toMatch(/Net deceleration/);
+    if (r.status === 'infeasible') expect(siText(r.reason)).toMatch(/Net deceleration/);
   });
   it.each([
     ['mass_kg', { mass_kg: Number.NaN }],
@@ -383,7 +383,7 @@ describe('landing properties (fast-check)', () => {
           aircraft: a, mass_kg: a.oew_kg + f * (a.mtow_kg - a.oew_kg), pressureAltitude_m: pa,
           ...(t !== undefined ? { temperature_c: t } : {}), slope: s, headwind_mps: w, surface: surf, glideAngle_deg: glide,
         });
-        if (r.status === 'infeasible') return r.reason.length > 0 && r.trace.every((e) => Number.isFinite(e.value));
+        if (r.status === 'infeasible') return siText(r.reason).length > 0 && r.trace.every((e) => Number.isFinite(e.value));
         const nums = [r.distance_m, r.required_m, r.dryDistance_m, ...Object.values(r.segments), ...Object.values(r.speeds), ...r.trace.map((e) => e.value)];
         return nums.every((x) => Number.isFinite(x)) && Object.values(r.segments).every((x) => x >= 0) && r.required_m >= r.distance_m;
       },

@@ -4,7 +4,10 @@
  * throws ConvergenceError instead of stopping silently.
  */
 import { describe, expect, it } from 'vitest';
-import { ConvergenceError, InputDomainError, bisect, brentRoot, gaussLegendre } from '../../core/index.js';
+import { ConvergenceError, InputDomainError } from '../../core/index.js';
+import { bisect } from '../../core/numeric/bisection.js';
+import { brentRoot } from '../../core/numeric/roots.js';
+import { gaussLegendre } from '../../core/numeric/gaussLegendre.js';
 import { expectClose } from '../helpers/close.js';
 
 describe('Gauss–Legendre rule (Abramowitz & Stegun 25.4.29, Table 25.4)', () => {

@@ -5,13 +5,13 @@
  * dry, 2 875 m wet); 14 CFR 135.385(f) (80 %) and (d) (115 %; on the 80 % length from memory); Part 91
  * (no factor); EU Air Operations CAT.POL.A.230 / .235 / .305 / .325 / .330 (from memory).
  */
-import { siText } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import {
-  InputDomainError, LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT, OPERATING_RULE_SETS, analyseLanding, analyseTakeoff,
-  landingRequirement, maxLandingMassForLda, runStudy, type AircraftProfile, type OperatingRuleSet, type StudyInput,
-} from '../../core/index.js';
+import { InputDomainError, OPERATING_RULE_SETS, analyseLanding, analyseTakeoff, runStudy, type AircraftProfile, type OperatingRuleSet, type StudyInput } from '../../core/index.js';
+import { LIGHT_LANDING_FACTOR_DEFAULT, LIGHT_TAKEOFF_FACTOR_DEFAULT } from '../../core/operatingRules.js';
+import { landingRequirement } from '../../core/landing.js';
+import { maxLandingMassForLda } from '../../core/runwayCheck.js';
 import { expectClose } from '../helpers/close.js';
 
 const demoDoc = () => JSON.parse(readFileSync(new URL('../../examples/demo-study.json', import.meta.url), 'utf8'));
@@ -87,11 +87,11 @@ describe('light-aircraft planning factors (takeoff × 1.25, landing ÷ 0.70; CAT
   it('a light profile without its own factor takes them; its own factor replaces both', () => {
     expect(kestrel.lightAircraftFactor).toBeUndefined();
     const t = analyseTakeoff({ aircraft: kestrel, ...at });
-    if (!t.feasible) throw new Error(t.message);
+    if (!t.feasible) throw new Error(siText(t.message));
     expectClose(t.required_m, 1.25 * t.allEngines!.toScreen_m, { rel: 1e-12 });
     expect(t.trace.some((e) => e.label.includes('planning default') && e.value === 1.25)).toBe(true);
     const l = analyseLanding({ aircraft: kestrel, mass_kg: kestrel.mlw_kg, pressureAltitude_m: 0, slope: 0, headwind_mps: 0, surface: 'dry' });
-    if (l.status !== 'ok') throw new Error(l.reason);
+    if (l.status !== 'ok') throw new Error(siText(l.reason));
     expectClose(l.required_m, l.distance_m / 0.7, { rel: 1e-12 });
     expect(l.assumptions.some((x) => x.includes('CAT.POL.A.325'))).toBe(true);
     const own = { ...kestrel, lightAircraftFactor: 1 };

@@ -14,7 +14,7 @@
  * carry one; the distance is from memory / common practice). The pinned values below are the forward
  * evaluation of that model.
  */
-import { siText } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -1,4 +1,4 @@
-import { siText } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputDomainError } from '../../core/errors.js';

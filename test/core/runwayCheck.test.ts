@@ -1,3 +1,4 @@
+import { siText, type Notice } from '../../core/notices.js';
 /**
  * Existing-runway check (core/runwayCheck.ts): field-length components, greatest takeoff and landing
  * masses for declared distances, route penalties, and the assembled check.
@@ -24,6 +25,9 @@ import { analyseLanding } from '../../core/landing.js';
 import { analyseTakeoff } from '../../core/takeoff/index.js';
 import { expectClose } from '../helpers/close.js';
 import { byId, fleet, numbers } from './takeoff/fixtures.js';
+
+/** A runway-check note list as SI text. */
+const notesText = (ns?: readonly Notice[]): string => (ns ?? []).map(siText).join(' ');
 
 const TERN = byId('tern-rj90');
 const CURLEW = byId('curlew-rt70');
@@ -139,7 +143,7 @@ describe('declared needs agree with the takeoff engine\'s 25.113 pieces (derived
   for (const a of fleet.filter((x) => x.certification !== 'normal')) {
     it(a.id, () => {
       const r = analyseTakeoff({ aircraft: a, mass_kg: 0.95 * a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry' });
-      if (!r.feasible) throw new Error(r.message);
+      if (!r.feasible) throw new Error(siText(r.message));
       const n = declaredNeeds(r);
       expect(n.basis).toBe('field-components');
       expectClose(n.takeoffRun_m, r.declared.takeoffRun_m, { rel: 1e-12 }, 'TOR');
@@ -224,7 +228,7 @@ describe('maxTakeoffMassForRunway — binding limits', () => {
     expect(m.status).toBe('none-feasible');
     expect(m.limitedBy).toBe('none-feasible');
     expect(m.maxTakeoffMass_kg).toBeUndefined();
-    expect(m.message.length).toBeGreaterThan(0);
+    expect(siText(m.message).length).toBeGreaterThan(0);
     allFinite(m);
   });
 
@@ -315,7 +319,7 @@ describe('routePenalty (route payloadForRange / rangeForPayload; derived)', () =
     const p = routePenalty({ aircraft: TERN, takeoffMass_kg: limit, stageLength_m: 1.2 * reach, payload_kg: 2000, reserves: C45 });
     expect(p.status).toBe('beyond-reach');
     expect(p.payloadAtMass_kg).toBe(0);
-    expect(p.note).toMatch(/beyond reach/);
+    expect(notesText(p.note)).toMatch(/beyond reach/);
     allFinite(p);
   });
 
@@ -324,7 +328,7 @@ describe('routePenalty (route payloadForRange / rangeForPayload; derived)', () =
     const p = routePenalty({ aircraft: TERN, takeoffMass_kg: 36_000, stageLength_m: 1.1 * reach, payload_kg: 2000, reserves: C45 });
     expect(p.status).toBe('beyond-reach');
     expect(p.payloadPenalty_kg).toBe(0);
-    expect(p.note).toMatch(/even at MTOW/);
+    expect(notesText(p.note)).toMatch(/even at MTOW/);
   });
 });
 
@@ -367,7 +371,7 @@ describe('assessExistingRunway — the demo site (examples/demo-study.json; deri
     expect(r.payloadPenalty_kg!).toBeGreaterThan(0);
     expectClose(r.passengersPenalty!, r.payloadPenalty_kg! / 95, { rel: 1e-12 }, 'passengers');
     expect(r.rangePenalty_km!).toBeGreaterThan(0);
-    expect(r.note).toMatch(/climb/);
+    expect(notesText(r.note)).toMatch(/climb/);
   });
 
   it('albatross-nb180 on runway 22 (1400 m): no mass fits (even at OEW the accelerate-stop exceeds ASDA), said in the note; no NaN', () => {
@@ -378,10 +382,10 @@ describe('assessExistingRunway — the demo site (examples/demo-study.json; deri
     allFinite(r);
     expect(r.takeoffOk).toBe(false);
     expect(r.maxTakeoffMass_kg).toBeUndefined();
-    expect(r.note).toMatch(/No mass from [\d,]+ kg to [\d,]+ kg fits the declared distances/);
+    expect(notesText(r.note)).toMatch(/No mass from [\d,]+ kg to [\d,]+ kg fits the declared distances/);
     const m = maxTakeoffMassForRunway({ aircraft: ALBATROSS, ...SITE, slope: SLOPE_22, direction: RWY_22 });
     expect(m.status).toBe('none-feasible');
-    expect(m.message).toMatch(/exceeds ASDA/);
+    expect(siText(m.message)).toMatch(/exceeds ASDA/);
   });
 
   it('bad input: slope missing, partial route, zero TORA', () => {

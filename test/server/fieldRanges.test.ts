@@ -4,13 +4,14 @@
  * the unit. Check cases are the defects found by the robustness review (issue 12, finding 4); the
  * physical limits are stated in core/fields.ts (common practice, chosen for this project).
  */
-import { siText, type Notice } from '../../core/index.js';
+import { type Notice } from '../../core/index.js';
+import { siText } from '../../core/notices.js';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import {
-  ALTERNATE_DISTANCE_RANGE_KM, InputDomainError, MONTHLY_MEAN_MAX_RANGE, RESERVE_ALTERNATE_DISTANCE_RANGE,
-  approachCategory, designTemperatureFromMonthly, resolveReserves, siteConditions, type StudyInput,
-} from '../../core/index.js';
+import { InputDomainError, MONTHLY_MEAN_MAX_RANGE, designTemperatureFromMonthly, siteConditions, type StudyInput } from '../../core/index.js';
+import { ALTERNATE_DISTANCE_RANGE_KM } from '../../core/fields.js';
+import { RESERVE_ALTERNATE_DISTANCE_RANGE, resolveReserves } from '../../core/route/reserves.js';
+import { approachCategory } from '../../core/classify.js';
 import { parseStudyDocument, studyOutput } from '../../server/studies/document.js';
 
 const minimal = readFileSync(new URL('../../examples/minimal-study.json', import.meta.url), 'utf8');

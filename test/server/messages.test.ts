@@ -5,7 +5,8 @@
  * (issue 12, finding 7: they used to say "undefined is not allowed" and "Infinity is not a finite number").
  */
 import { describe, expect, it } from 'vitest';
-import { InputDomainError, inRange, readMonthlyNormalsCsv } from '../../core/index.js';
+import { InputDomainError, readMonthlyNormalsCsv } from '../../core/index.js';
+import { inRange } from '../../core/validate.js';
 import { readNumber, type FieldErrors } from '../../server/common/formFields.js';
 import { aircraftToCsv, parseAircraftCsv } from '../../server/io/csv.js';
 import { num, oneOf, parseAll } from '../../server/common/schema.js';

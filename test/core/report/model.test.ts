@@ -3,7 +3,7 @@
  * unrounded (checked against the result they come from, derived); every input value is listed; the
  * structure is the one the appendix promises.
  */
-import { siText } from '../../../core/index.js';
+import { siText } from '../../../core/notices.js';
 import { describe, expect, it } from 'vitest';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import { runStudy, type StudyInput } from '../../../core/index.js';
@@ -164,7 +164,7 @@ function text(c: Cell): string {
 
 describe('appendix listing: every study option, from the one option table (issue 14)', () => {
   it('lists one fact per row of STUDY_OPTION_FIELDS, with the value of every option the study sets', async () => {
-    const { STUDY_OPTION_FIELDS, optionValue } = await import('../../../core/index.js');
+    const { STUDY_OPTION_FIELDS, optionValue } = await import('../../../core/studyFields.js');
     const doc = structuredClone(demo) as { options: Record<string, unknown> };
     Object.assign(doc.options, {
       method: 'reference-icao', referenceOverrideReason: 'Listed in full for the test.', landingMass: 'route',

@@ -5,16 +5,17 @@
  * paved runways (common practice, from memory). The case: an invented single-engine commuter at
  * 3 500 m / 45 °C (test/core/study/impractical.fixture.ts), which the takeoff model sizes beyond the bound on the ground run (about 6.4 km at 45 °C).
  */
-import { siText } from '../../../core/index.js';
+import { siText, type Notice } from '../../../core/notices.js';
 import { describe, expect, it } from 'vitest';
-import {
-  PLAUSIBILITY_CAP_M, PLAUSIBILITY_RATIO, aircraftPlausibilityBound, analyseTakeoff, assessExistingRunway,
-  checkPlausibility, maxTakeoffMassForRunway, plausibilityBound, runStudy, STUDY_METHOD_VERSION,
-  type AircraftProfile, type StudyInput,
-} from '../../../core/index.js';
+import { analyseTakeoff, runStudy, STUDY_METHOD_VERSION, type AircraftProfile, type StudyInput } from '../../../core/index.js';
+import { PLAUSIBILITY_CAP_M, PLAUSIBILITY_RATIO, aircraftPlausibilityBound, checkPlausibility, plausibilityBound } from '../../../core/plausibility.js';
+import { assessExistingRunway, maxTakeoffMassForRunway } from '../../../core/runwayCheck.js';
 import { whatIf } from '../../../core/index.js';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import { impracticalDoc, SINGLE_COMMUTER_ID, SINGLE_COMMUTER_MASS_KG } from './impractical.fixture.js';
+
+/** A runway-check note list as SI text. */
+const notesText = (ns?: readonly Notice[]): string => (ns ?? []).map(siText).join(' ');
 
 const inputOf = (t: number): StudyInput => impracticalDoc(t) as StudyInput;
 const single = (): AircraftProfile => inputOf(45).aircraft.find((a) => a.id === SINGLE_COMMUTER_ID)!;
@@ -117,7 +118,7 @@ describe('the same bound guards the sweeps, the what-if and the existing-runway 
     expect(far.takeoffOk).toBe(false);
     expect(far.takeoffRunNeeded_m).toBeUndefined();
     expect(far.takeoffDistanceNeeded_m).toBeUndefined();
-    expect(far.note).toContain('cannot practically operate here: the takeoff needs');
+    expect(notesText(far.note)).toContain('cannot practically operate here: the takeoff needs');
     // 7 175 kg at 45 °C needs about 5 600 m: within a 6 000 m runway but beyond the bound.
     const m = 7175;
     const t = analyseTakeoff({ aircraft: a, mass_kg: m, pressureAltitude_m: 3500, temperature_c: 45, slope: 0, headwind_mps: 0, surface: 'dry' });
@@ -125,7 +126,7 @@ describe('the same bound guards the sweeps, the what-if and the existing-runway 
     const near = assessExistingRunway({ ...common, temperature_c: 45, takeoffMass_kg: m });
     expect(near.takeoffOk).toBe(false);
     expect(near.takeoffDistanceNeeded_m).toBeUndefined();
-    expect(near.note).toContain('more than the plausibility bound of 5,500 m');
+    expect(notesText(near.note)).toContain('more than the plausibility bound of 5,500 m');
   });
 
   it('the greatest-mass search treats a mass beyond the bound as refused (limit "plausibility")', () => {
@@ -137,6 +138,6 @@ describe('the same bound guards the sweeps, the what-if and the existing-runway 
     expect(mt.limitedBy).toBe('plausibility');
     expect(mt.needs!.takeoffDistance_m).toBeLessThanOrEqual(5500);
     expect(mt.needs!.takeoffDistance_m).toBeGreaterThan(5000);
-    expect(mt.message).toContain('plausibility bound of 5,500 m');
+    expect(siText(mt.message)).toContain('plausibility bound of 5,500 m');
   });
 });

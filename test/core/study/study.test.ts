@@ -4,12 +4,10 @@
  * Regular Use Determination", 2017, §1); the critical aircraft is the regular-use aircraft with the
  * greatest requirement (same AC); rounding up to a planning increment is common practice.
  */
-import { siText } from '../../../core/index.js';
+import { siText } from '../../../core/notices.js';
 import { describe, expect, it } from 'vitest';
-import {
-  criticalRow, operationsServed, roundUpToIncrement, runStudy, InputDomainError,
-  type RowResult, type StudyInput,
-} from '../../../core/index.js';
+import { runStudy, InputDomainError, type RowResult, type StudyInput } from '../../../core/index.js';
+import { criticalRow, operationsServed, roundUpToIncrement } from '../../../core/study/run.js';
 import demo from '../../../examples/demo-study.json' with { type: 'json' };
 import minimal from '../../../examples/minimal-study.json' with { type: 'json' };
 import { parseStudyDocument } from '../../../server/studies/document.js';

@@ -1,4 +1,4 @@
-import { siText } from '../../../core/index.js';
+import { siText } from '../../../core/notices.js';
 import { describe, expect, it } from 'vitest';
 import { InputDomainError } from '../../../core/errors.js';
 import { analyseTakeoff, engineFailureAt } from '../../../core/takeoff/index.js';
@@ -54,7 +54,7 @@ describe('analyseTakeoff on the invented demo fleet (structure and internal cons
     const input = at(byId('albatross-nb180'), { pressureAltitude_m: 300, temperature_c: 25 });
     const r = feasible(analyseTakeoff(input));
     const p = engineFailureAt({ ...input, v1_mps: r.speeds.v1_mps! });
-    if (!p.feasible) throw new Error(p.message);
+    if (!p.feasible) throw new Error(siText(p.message));
     expectClose(p.continued_m, r.engineOut!.continued_m, { rel: 1e-12 });
     expectClose(p.accelerateStop_m, r.engineOut!.accelerateStop_m, { rel: 1e-12 });
     expectClose(p.vef_mps, r.speeds.vef_mps!, { rel: 1e-12 });
@@ -162,7 +162,7 @@ describe('Infeasible cases are results with a reason (design brief, "What it mus
   const checkClean = (r: ReturnType<typeof analyseTakeoff>): void => {
     for (const [path, v] of numbers(r)) expect(Number.isFinite(v), path).toBe(true);
     expect(r.feasible).toBe(false);
-    if (!r.feasible) expect(r.message.length).toBeGreaterThan(20);
+    if (!r.feasible) expect(siText(r.message).length).toBeGreaterThan(20);
   };
 
   it('thrust too low: cannot reach lift-off speed', () => {

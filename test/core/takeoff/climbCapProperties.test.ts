@@ -8,7 +8,7 @@
  * - every study row that is not sized carries a reason, and no number is NaN or Infinity.
  * Directions are common practice in performance work (more mass, higher or hotter air need more runway).
  */
-import { siText } from '../../../core/index.js';
+import { siText } from '../../../core/notices.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -103,7 +103,7 @@ describe('air segments stay inside their guards; infeasible results carry a reas
       for (const [path, v] of numbers(r)) expect(Number.isFinite(v), path).toBe(true);
       if (!r.feasible) {
         expect(r.reason.length).toBeGreaterThan(0);
-        expect(r.message.length).toBeGreaterThan(20);
+        expect(siText(r.message).length).toBeGreaterThan(20);
         refused++;
         return;
       }

@@ -4,7 +4,7 @@
  * time, and the brake-energy and tyre-speed checks. Each block names its source; a value from memory
  * says so. Demo aircraft are invented (examples/demo-study.json).
  */
-import { siText } from '../../../core/index.js';
+import { siText } from '../../../core/notices.js';
 import { describe, expect, it } from 'vitest';
 import { analyseTakeoff, energyAirborne, engineOutAirInput, MAX_ENGINE_OUT_AIR_M, takeoffSetup } from '../../../core/takeoff/index.js';
 import { validateAircraft } from '../../../core/aircraft.js';
@@ -109,7 +109,7 @@ describe('engine-out air segment by the energy method (item 2; Anderson §5.11, 
       if (r.feasible) {
         expect(r.engineOut!.airborne_m, id).toBeLessThanOrEqual(MAX_ENGINE_OUT_AIR_M);
       } else {
-        expect(r.message.length, id).toBeGreaterThan(20);
+        expect(siText(r.message).length, id).toBeGreaterThan(20);
       }
       for (const [path, v] of numbers(r)) expect(Number.isFinite(v), `${id} ${path}`).toBe(true);
     }
@@ -188,7 +188,7 @@ describe('accelerate-stop activation time and brake/tyre checks (items 9, 11)', 
     expect(refused.feasible).toBe(false);
     if (!refused.feasible) {
       expect(refused.reason).toBe('brake-energy-limit');
-      expect(refused.message).toMatch(/brakes cannot absorb/);
+      expect(siText(refused.message)).toMatch(/brakes cannot absorb/);
     }
   });
 

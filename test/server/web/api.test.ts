@@ -51,6 +51,17 @@ describe('JSON API', () => {
     expect(out.inputDigest).toMatch(/^[0-9a-f]{64}$/);
     const after = JSON.parse((await c.json('GET', `/api/studies/${id}/results`)).text) as typeof out;
     expect(after.scenarios.map((s) => s.recommendedLength_m)).toEqual(out.scenarios.map((s) => s.recommendedLength_m));
+    // Warnings are notices with their sentence: code, message (no unrendered object), text and args.
+    for (const body of [run.text, JSON.stringify(after)]) {
+      const warnings = (JSON.parse(body) as { scenarios: { rows: { warnings: Record<string, unknown>[] }[] }[] })
+        .scenarios.flatMap((s) => s.rows.flatMap((r) => r.warnings));
+      expect(warnings.length).toBeGreaterThan(0);
+      for (const w of warnings) {
+        expect(w.code).toMatch(/^[a-z][A-Za-z]*\.[a-z][A-Za-z0-9]*$/);
+        expect(typeof w.message).toBe('string');
+        expect(w.message).not.toMatch(/\[object Object\]|NaN|Infinity/);
+      }
+    }
     // The study reads back as a study file that validates and gives the same digest.
     const doc = JSON.parse((await c.json('GET', `/api/studies/${id}`)).text);
     expect(doc.format).toBe('runwright-study');

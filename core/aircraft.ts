@@ -298,11 +298,27 @@ function checkEnum<T extends string>(field: string, v: unknown, allowed: readonl
   }
 }
 
+declare const VALIDATED: unique symbol;
+
 /**
- * Validates a profile (ranges and cross-field rules); returns it unchanged or throws InputDomainError
- * naming the field (prefixed by `path`), the value and the allowed range.
+ * A profile that has passed validateAircraft. Core's models and solvers take it without checking it
+ * again: a study validates each profile once, not at every analysis of every bisection step.
  */
-export function validateAircraft(a: AircraftProfile, path = 'aircraft'): AircraftProfile {
+export type ValidAircraft = AircraftProfile & { readonly [VALIDATED]: true };
+
+/**
+ * Profiles that have passed, by identity. Profiles are values (every member is readonly): one that
+ * changes is a new object and is checked again.
+ */
+const PASSED = new WeakSet<AircraftProfile>();
+
+/**
+ * Validates a profile (ranges and cross-field rules); returns it unchanged, typed as validated, or
+ * throws InputDomainError naming the field (prefixed by `path`), the value and the allowed range. A
+ * profile object that has already passed is returned at once.
+ */
+export function validateAircraft(a: AircraftProfile, path = 'aircraft'): ValidAircraft {
+  if (PASSED.has(a)) return a as ValidAircraft;
   const rec = a as unknown as Record<string, unknown>;
   check(typeof a.id === 'string' && IDENTIFIER_PATTERN.test(a.id), `${path}.id`, a.id, `an identifier: ${IDENTIFIER_RULE}`);
   check(typeof a.name === 'string' && a.name.trim().length > 0 && a.name.length <= 120, `${path}.name`, a.name, 'a non-empty name of at most 120 characters');
@@ -339,7 +355,8 @@ export function validateAircraft(a: AircraftProfile, path = 'aircraft'): Aircraf
     }
   }
   if (a.reference !== undefined) validateReference(a.reference, `${path}.reference`);
-  return a;
+  PASSED.add(a);
+  return a as ValidAircraft;
 }
 
 function validateReference(r: ReferenceLengths, path: string): void {

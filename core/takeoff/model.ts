@@ -26,7 +26,7 @@
  */
 import { notice, type Notice } from '../notices.js';
 import { airAt } from '../atmosphere.js';
-import { stallSpeed, validateAircraft, type AircraftProfile } from '../aircraft.js';
+import { stallSpeed, validateAircraft, type AircraftProfile, type ValidAircraft } from '../aircraft.js';
 import { check, inRange } from '../validate.js';
 import { InputDomainError } from '../errors.js';
 import { RUNWAY_SLOPE_RANGE } from '../fields.js';
@@ -114,7 +114,7 @@ export const TAKEOFF_INPUT_RANGES = {
 } as const;
 
 export interface TakeoffSetup {
-  readonly aircraft: AircraftProfile;
+  readonly aircraft: ValidAircraft;
   readonly mass_kg: number;
   readonly weight_N: number;
   readonly air: PropulsionAir & { readonly densityAltitude_m: number; readonly isaDeviation_k: number };

@@ -18,7 +18,7 @@ import {
 } from './fields.js';
 import { OPERATING_RULE_SETS } from './operatingRules.js';
 import { SURFACES } from './surface.js';
-import type { DisplayKind, QuantityKind } from './units.js';
+import { displayInputValue, type DisplayKind, type QuantityKind, type UnitSystem } from './units.js';
 
 export interface OptionFieldSpec {
   /** Path inside `options` of the study file, e.g. "reserves.alternate_km". */
@@ -92,50 +92,77 @@ export function optionFieldByForm(form: string): OptionFieldSpec {
 // Site, climate, runway and fleet fields: the numbers a study file holds outside the options.
 // ---------------------------------------------------------------------------------------------
 
-/** One numeric field of a site, a monthly climate value, a runway or a fleet row. */
+/**
+ * One numeric field of a site, a monthly climate value, a runway or a fleet row. The study file's
+ * schema, the web forms (label, unit, hint, range, required), core validation and the appendix's
+ * listing are all read from these rows.
+ */
 export interface InputFieldSpec {
   /** Member name in its object (study file and core input alike). */
   readonly key: string;
+  /**
+   * Name of its web-form field; repeated groups prefix it (month m: `m{m}_{form}`, direction i:
+   * `d{i}_{form}`, fleet row i: `r{i}_{form}`).
+   */
+  readonly form: string;
   readonly label: string;
   readonly kind: QuantityKind;
   readonly range: FieldRange;
   readonly integer?: boolean;
   readonly optional?: boolean;
   readonly help: string;
+  /**
+   * File value per SI unit when the file holds another unit than SI (0.001 for a stage length in km);
+   * the range is in the file's unit.
+   */
+  readonly fileScale?: number;
+}
+
+/** Prefilled form text of a field-table value held in the study file's unit (blank when absent). */
+export function fieldInputText(f: InputFieldSpec, value: number | undefined, system: UnitSystem): string {
+  return value === undefined ? '' : displayInputValue(value / (f.fileScale ?? 1), f.kind, system);
+}
+
+/** A field's range in SI (metres where the file holds kilometres). */
+export function siRangeOf(f: InputFieldSpec): { readonly min: number; readonly max: number } {
+  const k = f.fileScale ?? 1;
+  return { min: f.range.min / k, max: f.range.max / k };
 }
 
 export const SITE_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'elevation_m', label: 'Elevation', kind: 'altitude', range: SITE_ELEVATION_RANGE, help: 'Aerodrome elevation, taken as the design pressure altitude.' },
-  { key: 'designTemperature_c', label: 'Design temperature (given)', kind: 'temperature', range: DESIGN_TEMPERATURE_RANGE, optional: true,
-    help: 'Given design temperature; when absent it is derived from the monthly climate (ICAO Annex 14 §2.4.1).' },
+  { key: 'elevation_m', form: 'elevation', label: 'Aerodrome elevation', kind: 'altitude', range: SITE_ELEVATION_RANGE,
+    help: 'Highest point of the landing area; taken as the design pressure altitude.' },
+  { key: 'designTemperature_c', form: 'designTemperature', label: 'Design temperature (given)', kind: 'temperature', range: DESIGN_TEMPERATURE_RANGE, optional: true,
+    help: 'When blank, derived from the monthly climate: the mean daily maximum of the hottest month (ICAO Annex 14 §2.4.1).' },
 ];
 
 export const CLIMATE_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'years', label: 'Climate years', kind: 'count', range: CLIMATE_YEARS_RANGE, integer: true, optional: true, help: 'Years of record behind the monthly values.' },
+  { key: 'years', form: 'climateYears', label: 'Years of record', kind: 'count', range: CLIMATE_YEARS_RANGE, integer: true, optional: true, help: 'Years of record behind the monthly values.' },
 ];
 
 export const MONTHLY_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'meanMax_c', label: 'Mean daily max', kind: 'temperature', range: MONTHLY_MEAN_MAX_RANGE, help: 'Monthly mean of the daily maximum temperature.' },
-  { key: 'meanMin_c', label: 'Mean daily min', kind: 'temperature', range: MONTHLY_MEAN_MIN_RANGE, optional: true, help: 'Monthly mean of the daily minimum temperature.' },
-  { key: 'mean_c', label: 'Mean', kind: 'temperature', range: MONTHLY_MEAN_RANGE, optional: true, help: 'Monthly mean temperature (ranks the months).' },
+  { key: 'meanMax_c', form: 'max', label: 'Mean daily maximum', kind: 'temperature', range: MONTHLY_MEAN_MAX_RANGE, help: 'Monthly mean of the daily maximum temperature.' },
+  { key: 'meanMin_c', form: 'min', label: 'Mean daily minimum', kind: 'temperature', range: MONTHLY_MEAN_MIN_RANGE, optional: true, help: 'Monthly mean of the daily minimum temperature.' },
+  { key: 'mean_c', form: 'mean', label: 'Mean', kind: 'temperature', range: MONTHLY_MEAN_RANGE, optional: true, help: 'Monthly mean temperature (ranks the months).' },
 ];
 
 export const PROFILE_POINT_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'chainage_m', label: 'Chainage', kind: 'length', range: RUNWAY_CHAINAGE_RANGE, help: 'Distance along the centreline from the first threshold.' },
-  { key: 'elevation_m', label: 'Elevation', kind: 'altitude', range: RUNWAY_POINT_ELEVATION_RANGE, help: 'Centreline elevation at the chainage.' },
+  { key: 'chainage_m', form: 'chainage', label: 'Chainage', kind: 'length', range: RUNWAY_CHAINAGE_RANGE, help: 'Distance along the centreline from the first threshold.' },
+  { key: 'elevation_m', form: 'elevation', label: 'Elevation', kind: 'altitude', range: RUNWAY_POINT_ELEVATION_RANGE, help: 'Centreline elevation at the chainage.' },
 ];
 
 export const DIRECTION_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'tora_m', label: 'TORA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff run available.' },
-  { key: 'toda_m', label: 'TODA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff distance available (TORA plus clearway).' },
-  { key: 'asda_m', label: 'ASDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Accelerate-stop distance available (TORA plus stopway).' },
-  { key: 'lda_m', label: 'LDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Landing distance available.' },
+  { key: 'tora_m', form: 'tora', label: 'TORA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff run available.' },
+  { key: 'toda_m', form: 'toda', label: 'TODA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Takeoff distance available (TORA plus clearway).' },
+  { key: 'asda_m', form: 'asda', label: 'ASDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Accelerate-stop distance available (TORA plus stopway).' },
+  { key: 'lda_m', form: 'lda', label: 'LDA', kind: 'length', range: DECLARED_LENGTH_RANGE, help: 'Landing distance available.' },
 ];
 
 export const FLEET_FIELDS: readonly InputFieldSpec[] = [
-  { key: 'annualOperations', label: 'Annual operations', kind: 'count', range: ANNUAL_OPERATIONS_RANGE, integer: true, help: 'Takeoffs and landings a year of this aircraft in the scenario.' },
-  { key: 'stageLength_km', label: 'Stage length', kind: 'distance', range: STAGE_LENGTH_RANGE_KM, help: 'Longest regular stage, km (great-circle trip distance).' },
-  { key: 'payload_kg', label: 'Payload', kind: 'mass', range: FLEET_PAYLOAD_RANGE, help: "Payload on that stage (at most the aircraft's maximum payload)." },
+  { key: 'annualOperations', form: 'ops', label: 'Annual operations', kind: 'count', range: ANNUAL_OPERATIONS_RANGE, integer: true, help: 'Takeoffs and landings a year of this aircraft in the scenario.' },
+  { key: 'stageLength_km', form: 'stage', label: 'Stage length', kind: 'distance', range: STAGE_LENGTH_RANGE_KM, fileScale: 0.001,
+    help: 'Longest regular stage (great-circle trip distance); the study file holds it in km.' },
+  { key: 'payload_kg', form: 'payload', label: 'Payload', kind: 'mass', range: FLEET_PAYLOAD_RANGE, help: "Payload on that stage (at most the aircraft's maximum payload)." },
 ];
 
 /** A field by key in a table. */

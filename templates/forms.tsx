@@ -4,7 +4,7 @@
  * them (and answers 422 with the raw values), so the browser never silently refuses what was typed.
  */
 import type { Child } from 'hono/jsx';
-import type { DisplayKind } from '../core/index.js';
+import type { DisplayKind, InputFieldSpec } from '../core/index.js';
 import { unitSymbol } from './format.js';
 import { useView } from './view.js';
 
@@ -57,6 +57,17 @@ export function Field(p: FieldProps) {
       {p.hint ? <p class="hint" id={`${fieldId(p.name)}-hint`}>{p.hint}</p> : null}
       {err ? <p class="error" id={errorId(p.name)}>{err}</p> : null}
     </div>
+  );
+}
+
+/**
+ * The input of a row of a field table (core/studyFields.ts): label, unit, hint and required mark come
+ * from the row. `name` overrides the field name in repeated groups; `required` overrides the row's.
+ */
+export function SpecField(p: { spec: InputFieldSpec; name?: string; label?: string; values: Values; errors: Errors; required?: boolean }) {
+  return (
+    <Field name={p.name ?? p.spec.form} label={p.label ?? p.spec.label} kind={p.spec.kind} hint={p.spec.help}
+      required={p.required ?? !p.spec.optional} values={p.values} errors={p.errors} />
   );
 }
 

@@ -4,7 +4,9 @@
  * The zod schemas (the features' schema.ts files) then check the converted object; their messages, written in SI,
  * are restated in the user's units by `localiseMessage`.
  */
-import { displayLimit as fmtLimit, unitOf, type DisplayKind, type UnitSystem } from '../../core/index.js';
+import {
+  displayLimit as fmtLimit, siRangeOf, unitOf, type DisplayKind, type InputFieldSpec, type UnitSystem,
+} from '../../core/index.js';
 
 /** Form values as submitted: field name → raw text (first value for repeated names). */
 export type FormValues = Readonly<Record<string, string>>;
@@ -149,3 +151,23 @@ export function localiseMessage(message: string, system: UnitSystem): string {
   }
   return out;
 }
+
+/**
+ * Reads the form field of a row of a field table (core/studyFields.ts): its unit, range, whole-number
+ * rule and whether it is required come from the row. `name` overrides the field name (repeated groups
+ * such as months, directions and fleet rows prefix it); `max` narrows the range (SI, e.g. the
+ * aircraft's maximum payload). Gives the value in the unit the study file holds, or undefined with
+ * the error recorded.
+ */
+export function readSpecField(
+  values: FormValues, spec: InputFieldSpec, system: UnitSystem, errors: FieldErrors,
+  o: { readonly name?: string; readonly required?: boolean; readonly max?: number } = {},
+): number | undefined {
+  const r = siRangeOf(spec);
+  const si = readNumber(values, {
+    name: o.name ?? spec.form, kind: spec.kind, min: r.min, max: o.max === undefined ? r.max : Math.min(r.max, o.max),
+    required: o.required ?? !spec.optional, ...(spec.integer ? { integer: true } : {}),
+  }, system, errors);
+  return si === undefined ? undefined : si * (spec.fileScale ?? 1);
+}
+

@@ -6,16 +6,15 @@
  */
 import { z } from 'zod';
 import {
-  CLIMATE_YEARS_RANGE, DECLARED_LENGTH_RANGE, DESIGN_TEMPERATURE_RANGE, MONTHLY_MEAN_MAX_RANGE, MONTHLY_MEAN_MIN_RANGE,
-  MONTHLY_MEAN_RANGE, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE, SITE_ELEVATION_RANGE,
-  InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances,
+  CLIMATE_FIELDS, DIRECTION_FIELDS, DESIGN_TEMPERATURE_RANGE, MONTHLY_FIELDS, RUNWAY_CHAINAGE_RANGE, RUNWAY_POINT_ELEVATION_RANGE,
+  SITE_ELEVATION_RANGE, SITE_FIELDS, inputField, InputDomainError, analyseRunwayProfile, checkRunwayDeclaredDistances,
   type MonthlyClimate, type ProfilePoint, type RunwayDirectionInput, type RunwayInput, type SiteClimate, type UnitSystem,
   unitOf,
 } from '../../core/index.js';
 import { climateSchema, runwaySchema } from './schema.js';
 import { numIn, text } from '../common/schema.js';
 import type { FormResult } from '../common/formFields.js';
-import { localiseMessage, parseTyped, rangeText, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
+import { localiseMessage, parseTyped, rangeText, readChoice, readSpecField, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
 
 export interface SiteFields {
   readonly name: string;
@@ -25,7 +24,12 @@ export interface SiteFields {
 }
 
 export const MONTH_KEYS = Array.from({ length: 12 }, (_, i) => i + 1);
+/** Form field of a monthly value: `which` is the `form` of its row of MONTHLY_FIELDS. */
 export const monthField = (m: number, which: 'max' | 'min' | 'mean'): string => `m${m}_${which}`;
+
+const SITE = { elevation: inputField(SITE_FIELDS, 'elevation_m'), designTemperature: inputField(SITE_FIELDS, 'designTemperature_c') };
+const YEARS = inputField(CLIMATE_FIELDS, 'years');
+const MONTH = { max: inputField(MONTHLY_FIELDS, 'meanMax_c'), min: inputField(MONTHLY_FIELDS, 'meanMin_c'), mean: inputField(MONTHLY_FIELDS, 'mean_c') };
 
 /** The site's own fields (the relaxed form: a site may be saved before its runways and climate). */
 export const siteFieldsSchema = z.strictObject({
@@ -40,19 +44,17 @@ const within = (r: { readonly min: number; readonly max: number }) => ({ min: r.
 export function readSiteForm(values: FormValues, system: UnitSystem): FormResult<SiteFields> {
   const errors: FieldErrors = {};
   const name = readText(values, 'name', { required: true, max: 120 }, errors);
-  const elevation_m = readNumber(values, { name: 'elevation', kind: 'altitude', ...within(SITE_ELEVATION_RANGE), required: true }, system, errors);
-  const designTemperature_c = readNumber(values, { name: 'designTemperature', kind: 'temperature', ...within(DESIGN_TEMPERATURE_RANGE), required: false }, system, errors);
+  const elevation_m = readSpecField(values, SITE.elevation, system, errors);
+  const designTemperature_c = readSpecField(values, SITE.designTemperature, system, errors);
   const anyClimate = MONTH_KEYS.some((m) => (['max', 'min', 'mean'] as const).some((w) => (values[monthField(m, w)] ?? '').trim() !== ''))
     || (values.climateSource ?? '').trim() !== '';
   let climate: SiteClimate | undefined;
   if (anyClimate) {
     const source = readText(values, 'climateSource', { required: true, max: 300 }, errors);
-    const years = readNumber(values, { name: 'climateYears', kind: 'count', ...within(CLIMATE_YEARS_RANGE), required: false, integer: true }, system, errors);
+    const years = readSpecField(values, YEARS, system, errors);
     const monthly: MonthlyClimate[] = [];
     for (const m of MONTH_KEYS) {
-      const max = readNumber(values, { name: monthField(m, 'max'), kind: 'temperature', ...within(MONTHLY_MEAN_MAX_RANGE), required: true }, system, errors);
-      const min = readNumber(values, { name: monthField(m, 'min'), kind: 'temperature', ...within(MONTHLY_MEAN_MIN_RANGE), required: false }, system, errors);
-      const mean = readNumber(values, { name: monthField(m, 'mean'), kind: 'temperature', ...within(MONTHLY_MEAN_RANGE), required: false }, system, errors);
+      const [max, min, mean] = (['max', 'min', 'mean'] as const).map((w) => readSpecField(values, MONTH[w], system, errors, { name: monthField(m, w) }));
       if (max !== undefined && min !== undefined && min > max) errors[monthField(m, 'min')] = 'the mean daily minimum is above the mean daily maximum';
       if (max !== undefined && min === undefined && mean === undefined && errors[monthField(m, 'min')] === undefined && errors[monthField(m, 'mean')] === undefined) {
         errors[monthField(m, 'min')] = 'missing; give the mean daily minimum or the mean: months are ranked by their mean temperature';
@@ -68,7 +70,7 @@ export function readSiteForm(values: FormValues, system: UnitSystem): FormResult
     for (const i of r.error.issues) {
       const [head, a, b, c] = i.path;
       const field = head === 'climate' && a === 'monthly' && typeof b === 'number' ? monthField(b + 1, c === 'meanMin_c' ? 'min' : c === 'mean_c' ? 'mean' : 'max')
-        : head === 'elevation_m' ? 'elevation' : head === 'designTemperature_c' ? 'designTemperature' : head === 'climate' ? 'climateSource' : String(head ?? 'name');
+        : SITE_FIELDS.find((x) => x.key === head)?.form ?? (head === 'climate' ? (a === 'years' ? YEARS.form : 'climateSource') : String(head ?? 'name'));
       errors[field] ??= localiseMessage(i.message, system);
     }
     return { ok: false, errors };
@@ -103,8 +105,8 @@ export function readProfileText(raw: string, system: UnitSystem, errors: FieldEr
   return points;
 }
 
-const DIRECTION_FIELDS = ['tora', 'toda', 'asda', 'lda'] as const;
-export const directionField = (i: number, f: 'designator' | (typeof DIRECTION_FIELDS)[number]): string => `d${i}_${f}`;
+/** Form field of direction i: 'designator' or the `form` of a row of DIRECTION_FIELDS. */
+export const directionField = (i: number, f: string): string => `d${i}_${f}`;
 
 export function readRunwayForm(values: FormValues, system: UnitSystem): FormResult<RunwayInput> {
   const errors: FieldErrors = {};
@@ -114,13 +116,13 @@ export function readRunwayForm(values: FormValues, system: UnitSystem): FormResu
   const directions: RunwayDirectionInput[] = [];
   for (const i of [0, 1]) {
     const designator = (values[directionField(i, 'designator')] ?? '').trim().toUpperCase();
-    const given = designator !== '' || DIRECTION_FIELDS.some((f) => (values[directionField(i, f)] ?? '').trim() !== '');
+    const given = designator !== '' || DIRECTION_FIELDS.some((f) => (values[directionField(i, f.form)] ?? '').trim() !== '');
     if (!given && i === 1) continue;
     if (designator === '') errors[directionField(i, 'designator')] = 'missing; a runway designator 01 to 36, optionally L, C or R';
     const d: Record<string, number> = {};
     for (const f of DIRECTION_FIELDS) {
-      const v = readNumber(values, { name: directionField(i, f), kind: 'length', ...within(DECLARED_LENGTH_RANGE), required: true }, system, errors);
-      if (v !== undefined) d[`${f}_m`] = v;
+      const v = readSpecField(values, f, system, errors, { name: directionField(i, f.form) });
+      if (v !== undefined) d[f.key] = v;
     }
     if (designator !== '' && Object.keys(d).length === 4) directions.push({ designator, ...(d as { tora_m: number; toda_m: number; asda_m: number; lda_m: number }) });
   }
@@ -130,7 +132,8 @@ export function readRunwayForm(values: FormValues, system: UnitSystem): FormResu
   if (!r.success) {
     for (const i of r.error.issues) {
       const [head, idx, f] = i.path;
-      const field = head === 'directions' && typeof idx === 'number' ? directionField(idx, (String(f ?? 'designator').replace(/_m$/, '') as 'designator')) : String(head ?? 'name');
+      const spec = DIRECTION_FIELDS.find((x) => x.key === f);
+      const field = head === 'directions' && typeof idx === 'number' ? directionField(idx, spec?.form ?? 'designator') : String(head ?? 'name');
       errors[field] ??= localiseMessage(i.message, system);
     }
     return { ok: false, errors };
@@ -147,7 +150,7 @@ export function readRunwayForm(values: FormValues, system: UnitSystem): FormResu
   } catch (e) {
     if (!(e instanceof InputDomainError)) throw e;
     const m = /^directions\[(\d)\]\.(\w+?)(_m)?$/.exec(e.field);
-    const field = m ? directionField(Number(m[1]), m[2] as 'designator') : directionField(0, 'designator');
+    const field = m ? directionField(Number(m[1]), m[2]!) : directionField(0, 'designator');
     const typed = (values[field] ?? '').trim() || String(e.value);
     errors[field] = localiseMessage(`${typed} is not allowed; expected ${e.allowed}`, system);
   }

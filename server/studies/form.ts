@@ -3,14 +3,15 @@
  * converted from the user's units; the options are then checked by the study file's zod schema.
  */
 import {
-  ANNUAL_OPERATIONS_RANGE, DEFAULT_OPERATING_RULES, FLEET_PAYLOAD_RANGE, OPERATING_RULE_SETS, RESERVE_POLICIES,
-  STAGE_LENGTH_RANGE_KM, STUDY_METHODS, SURFACES, optionFieldByForm,
+  DEFAULT_OPERATING_RULES, FLEET_FIELDS, OPERATING_RULE_SETS, RESERVE_POLICIES, STUDY_METHODS, SURFACES, fieldInputText, inputField, optionFieldByForm,
   displayInputValue as fmtInput, type FleetRowInput, type StudyOptions, type UnitSystem,
 } from '../../core/index.js';
 import { optionsSchema } from './schema.js';
 import { ident } from '../common/schema.js';
 import type { FormResult } from '../common/formFields.js';
-import { localiseMessage, readChoice, readNumber, readText, type FieldErrors, type FormValues } from '../common/formFields.js';
+import {
+  localiseMessage, readChoice, readNumber, readSpecField, readText, type FieldErrors, type FormValues,
+} from '../common/formFields.js';
 
 export interface StudyFields {
   readonly name: string;
@@ -114,7 +115,12 @@ export function newStudyValues(system: UnitSystem, siteId?: number): Record<stri
   };
 }
 
-export const rowField = (i: number, f: 'aircraft' | 'ops' | 'stage' | 'payload'): string => `r${i}_${f}`;
+/** Form field of fleet row i: 'aircraft' or the `form` of a row of FLEET_FIELDS. */
+export const rowField = (i: number, f: string): string => `r${i}_${f}`;
+
+const FLEET = {
+  ops: inputField(FLEET_FIELDS, 'annualOperations'), stage: inputField(FLEET_FIELDS, 'stageLength_km'), payload: inputField(FLEET_FIELDS, 'payload_kg'),
+};
 
 /**
  * Reads a scenario form: its name and up to `rows` fleet rows; a row left entirely blank is skipped.
@@ -127,17 +133,17 @@ export function readScenarioForm(
   const name = readText(values, 'name', { required: true, max: 120 }, errors);
   const fleet: FleetRowInput[] = [];
   for (let i = 0; i < rows; i++) {
-    const fields = (['aircraft', 'ops', 'stage', 'payload'] as const).map((f) => (values[rowField(i, f)] ?? '').trim());
+    const fields = ['aircraft', ...FLEET_FIELDS.map((f) => f.form)].map((f) => (values[rowField(i, f)] ?? '').trim());
     if (fields.every((v) => v === '')) continue;
     const aircraft = fields[0]!;
     if (aircraft === '') errors[rowField(i, 'aircraft')] = 'choose an aircraft';
     else if (!ident.safeParse(aircraft).success || !catalogue.has(aircraft)) errors[rowField(i, 'aircraft')] = `"${aircraft}" is not in the catalogue`;
-    const ops = readNumber(values, { name: rowField(i, 'ops'), kind: 'count', min: ANNUAL_OPERATIONS_RANGE.min, max: ANNUAL_OPERATIONS_RANGE.max, required: true, integer: true }, system, errors);
-    const stage_m = readNumber(values, { name: rowField(i, 'stage'), kind: 'distance', min: STAGE_LENGTH_RANGE_KM.min * 1000, max: STAGE_LENGTH_RANGE_KM.max * 1000, required: true }, system, errors);
-    const maxPayload = catalogue.get(aircraft)?.maxPayload_kg ?? FLEET_PAYLOAD_RANGE.max;
-    const payload = readNumber(values, { name: rowField(i, 'payload'), kind: 'mass', min: 0, max: maxPayload, required: true }, system, errors);
-    if (ops !== undefined && stage_m !== undefined && payload !== undefined && errors[rowField(i, 'aircraft')] === undefined) {
-      fleet.push({ aircraft, annualOperations: ops, stageLength_km: stage_m / 1000, payload_kg: payload });
+    const ops = readSpecField(values, FLEET.ops, system, errors, { name: rowField(i, FLEET.ops.form) });
+    const stage_km = readSpecField(values, FLEET.stage, system, errors, { name: rowField(i, FLEET.stage.form) });
+    const maxPayload = catalogue.get(aircraft)?.maxPayload_kg;
+    const payload = readSpecField(values, FLEET.payload, system, errors, { name: rowField(i, FLEET.payload.form), ...(maxPayload === undefined ? {} : { max: maxPayload }) });
+    if (ops !== undefined && stage_km !== undefined && payload !== undefined && errors[rowField(i, 'aircraft')] === undefined) {
+      fleet.push({ aircraft, annualOperations: ops, stageLength_km: stage_km, payload_kg: payload });
     }
   }
   if (fleet.length > 200) errors.name = 'at most 200 fleet rows per scenario';
@@ -150,9 +156,7 @@ export function scenarioFormValues(s: { name: string; fleet: readonly FleetRowIn
   const out: Record<string, string> = { name: s.name };
   s.fleet.forEach((r, i) => {
     out[rowField(i, 'aircraft')] = r.aircraft;
-    out[rowField(i, 'ops')] = String(r.annualOperations);
-    out[rowField(i, 'stage')] = fmtInput(r.stageLength_km * 1000, 'distance', system);
-    out[rowField(i, 'payload')] = fmtInput(r.payload_kg, 'mass', system);
+    for (const f of FLEET_FIELDS) out[rowField(i, f.form)] = fieldInputText(f, r[f.key as keyof FleetRowInput] as number, system);
   });
   return out;
 }

@@ -5,17 +5,21 @@
  */
 import type { ChartModel, RunwayInput, SiteInput, UnitSystem, Notice as CoreNotice } from '../../core/index.js';
 import { ListPager, listCaption, type ListPaging } from '../pager.js';
-import { monthName } from '../../core/index.js';
+import { CLIMATE_FIELDS, DIRECTION_FIELDS, MONTHLY_FIELDS, SITE_FIELDS, fieldInputText, inputField, monthName } from '../../core/index.js';
 import { ChartSvg } from '../charts/svg.js';
 import { ImportProblems, Notice, PostForm, Warnings } from '../components.js';
-import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
+import { ErrorSummary, Field, Section, SelectField, SpecField, fieldId, type Errors, type Values } from '../forms.js';
 import { fmt, fmtInput, fmtLengthBoth, fmtSlope, unitSymbol } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 
 export const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
-const mf = (m: number, w: 'max' | 'min' | 'mean'): string => `m${m}_${w}`;
+const mf = (m: number, w: string): string => `m${m}_${w}`;
 const df = (i: number, f: string): string => `d${i}_${f}`;
+/** The site form's numeric fields, from the field tables (core/studyFields.ts). */
+const ELEVATION = inputField(SITE_FIELDS, 'elevation_m');
+const DESIGN_TEMPERATURE = inputField(SITE_FIELDS, 'designTemperature_c');
+const YEARS = inputField(CLIMATE_FIELDS, 'years');
 
 export interface SiteListItem {
   readonly id: number;
@@ -59,24 +63,21 @@ export function SitesListPage(p: { sites: readonly SiteListItem[]; deleted?: str
 export function siteFormValues(s: SiteInput, system: UnitSystem): Record<string, string> {
   const out: Record<string, string> = {
     name: s.name,
-    elevation: fmtInput(s.elevation_m, 'altitude', system),
-    designTemperature: fmtInput(s.designTemperature_c, 'temperature', system),
+    [ELEVATION.form]: fieldInputText(ELEVATION, s.elevation_m, system),
+    [DESIGN_TEMPERATURE.form]: fieldInputText(DESIGN_TEMPERATURE, s.designTemperature_c, system),
     climateSource: s.climate?.source ?? '',
-    climateYears: s.climate?.years === undefined ? '' : String(s.climate.years),
+    [YEARS.form]: fieldInputText(YEARS, s.climate?.years, system),
   };
   for (const m of s.climate?.monthly ?? []) {
-    out[mf(m.month, 'max')] = fmtInput(m.meanMax_c, 'temperature', system);
-    out[mf(m.month, 'min')] = fmtInput(m.meanMin_c, 'temperature', system);
-    out[mf(m.month, 'mean')] = fmtInput(m.mean_c, 'temperature', system);
+    for (const f of MONTHLY_FIELDS) out[mf(m.month, f.form)] = fieldInputText(f, m[f.key as 'meanMax_c'], system);
   }
   return out;
 }
 
 const SITE_LABELS: Record<string, string> = {
-  name: 'Name', elevation: 'Elevation', designTemperature: 'Design temperature', climateSource: 'Climate source', climateYears: 'Years of record',
-  ...Object.fromEntries([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12].flatMap((m) => [
-    [mf(m, 'max'), `${monthName(m)} mean daily maximum`], [mf(m, 'min'), `${monthName(m)} mean daily minimum`], [mf(m, 'mean'), `${monthName(m)} mean`],
-  ])),
+  name: 'Name', climateSource: 'Climate source',
+  ...Object.fromEntries([ELEVATION, DESIGN_TEMPERATURE, YEARS].map((f) => [f.form, f.label])),
+  ...Object.fromEntries([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12].flatMap((m) => MONTHLY_FIELDS.map((f) => [mf(m, f.form), `${monthName(m)} ${f.label.toLowerCase()}`]))),
 };
 
 function MonthInput(p: { name: string; label: string; values: Values; errors: Errors }) {
@@ -101,28 +102,25 @@ export function SiteFormPage(p: { mode: 'new' | 'edit'; action: string; values: 
         <Section legend="Site">
           <div class="grid">
             <Field name="name" label="Name" values={p.values} errors={p.errors} required />
-            <Field name="elevation" label="Aerodrome elevation" kind="altitude" values={p.values} errors={p.errors} required hint="Highest point of the landing area." />
-            <Field name="designTemperature" label="Design temperature (override)" kind="temperature" values={p.values} errors={p.errors}
-              hint="Leave blank to derive it from the monthly climate (mean daily maximum of the hottest month)." />
+            <SpecField spec={ELEVATION} values={p.values} errors={p.errors} />
+            <SpecField spec={DESIGN_TEMPERATURE} values={p.values} errors={p.errors} />
           </div>
         </Section>
         <Section legend="Monthly climate">
           <p class="hint">Enter twelve monthly values, or leave the whole table blank and import a station file from the site page. The mean is optional (default: the average of maximum and minimum).</p>
           <div class="grid">
             <Field name="climateSource" label="Source" values={p.values} errors={p.errors} hint="Station, product and period." />
-            <Field name="climateYears" label="Years of record" values={p.values} errors={p.errors} type="number" />
+            <SpecField spec={YEARS} values={p.values} errors={p.errors} />
           </div>
           <div class="scroll">
             <table class="month-table">
               <caption>Monthly temperatures ({t})</caption>
-              <thead><tr><th scope="col">Month</th><th scope="col">Mean daily maximum</th><th scope="col">Mean daily minimum</th><th scope="col">Mean (optional)</th></tr></thead>
+              <thead><tr><th scope="col">Month</th>{MONTHLY_FIELDS.map((f) => <th scope="col" title={f.help}>{f.label}</th>)}</tr></thead>
               <tbody>
                 {MONTHS.map((name, i) => (
                   <tr>
                     <th scope="row">{name}</th>
-                    <MonthInput name={mf(i + 1, 'max')} label={`${monthName(i + 1)} mean daily maximum (${t})`} values={p.values} errors={p.errors} />
-                    <MonthInput name={mf(i + 1, 'min')} label={`${monthName(i + 1)} mean daily minimum (${t})`} values={p.values} errors={p.errors} />
-                    <MonthInput name={mf(i + 1, 'mean')} label={`${monthName(i + 1)} mean (${t})`} values={p.values} errors={p.errors} />
+                    {MONTHLY_FIELDS.map((f) => <MonthInput name={mf(i + 1, f.form)} label={`${monthName(i + 1)} ${f.label.toLowerCase()} (${t})`} values={p.values} errors={p.errors} />)}
                   </tr>
                 ))}
               </tbody>
@@ -330,10 +328,7 @@ export function runwayFormValues(r: RunwayInput, system: UnitSystem): Record<str
   };
   r.directions.forEach((d, i) => {
     out[df(i, 'designator')] = d.designator;
-    out[df(i, 'tora')] = fmtInput(d.tora_m, 'length', system);
-    out[df(i, 'toda')] = fmtInput(d.toda_m, 'length', system);
-    out[df(i, 'asda')] = fmtInput(d.asda_m, 'length', system);
-    out[df(i, 'lda')] = fmtInput(d.lda_m, 'length', system);
+    for (const f of DIRECTION_FIELDS) out[df(i, f.form)] = fieldInputText(f, d[f.key as 'tora_m'], system);
   });
   return out;
 }
@@ -341,8 +336,7 @@ export function runwayFormValues(r: RunwayInput, system: UnitSystem): Record<str
 const RUNWAY_LABELS: Record<string, string> = {
   name: 'Runway name', pavement: 'Pavement', profile: 'Centreline profile',
   ...Object.fromEntries([0, 1].flatMap((i) => [
-    [df(i, 'designator'), `Direction ${i + 1} designator`], [df(i, 'tora'), `Direction ${i + 1} TORA`], [df(i, 'toda'), `Direction ${i + 1} TODA`],
-    [df(i, 'asda'), `Direction ${i + 1} ASDA`], [df(i, 'lda'), `Direction ${i + 1} LDA`],
+    [df(i, 'designator'), `Direction ${i + 1} designator`], ...DIRECTION_FIELDS.map((f) => [df(i, f.form), `Direction ${i + 1} ${f.label}`]),
   ])),
 };
 
@@ -370,10 +364,7 @@ export function RunwayFormPage(p: { mode: 'new' | 'edit'; siteName: string; acti
           <Section legend={`Direction ${i + 1}${i === 1 ? ' (optional)' : ''}: declared distances`}>
             <div class="grid">
               <Field name={df(i, 'designator')} label="Designator" values={p.values} errors={p.errors} required={i === 0} hint="01 to 36, optionally L, C or R." />
-              <Field name={df(i, 'tora')} label="TORA" kind="length" values={p.values} errors={p.errors} required={i === 0} />
-              <Field name={df(i, 'toda')} label="TODA" kind="length" values={p.values} errors={p.errors} required={i === 0} />
-              <Field name={df(i, 'asda')} label="ASDA" kind="length" values={p.values} errors={p.errors} required={i === 0} />
-              <Field name={df(i, 'lda')} label="LDA" kind="length" values={p.values} errors={p.errors} required={i === 0} />
+              {DIRECTION_FIELDS.map((f) => <SpecField spec={f} name={df(i, f.form)} values={p.values} errors={p.errors} required={i === 0} />)}
             </div>
           </Section>
         ))}

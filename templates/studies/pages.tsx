@@ -1,5 +1,5 @@
 /** Study pages: list, study form (name, site, options), overview with scenarios, scenario (fleet) form. */
-import { DEFAULT_OPERATING_RULES, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, STUDY_OPTION_FIELDS, SURFACES, SURFACE_LABELS, optionFieldByForm, type FleetRowInput, type StudyOptions } from '../../core/index.js';
+import { FLEET_FIELDS, DEFAULT_OPERATING_RULES, OPERATING_RULE_SETS, OPERATING_RULE_SET_INFO, STUDY_OPTION_FIELDS, SURFACES, SURFACE_LABELS, optionFieldByForm, type FleetRowInput, type StudyOptions } from '../../core/index.js';
 import { ImportProblems, Notice, PostForm } from '../components.js';
 import { IDS } from '../ids.js';
 import { ErrorSummary, Field, Section, SelectField, fieldId, type Errors, type Values } from '../forms.js';
@@ -254,9 +254,7 @@ export function ScenarioFormPage(p: ScenarioFormProps) {
   const labels: Record<string, string> = { name: 'Scenario name' };
   for (let i = 0; i < p.rows; i++) {
     labels[rf(i, 'aircraft')] = `Row ${i + 1} aircraft`;
-    labels[rf(i, 'ops')] = `Row ${i + 1} annual operations`;
-    labels[rf(i, 'stage')] = `Row ${i + 1} stage length`;
-    labels[rf(i, 'payload')] = `Row ${i + 1} payload`;
+    for (const f of FLEET_FIELDS) labels[rf(i, f.form)] = `Row ${i + 1} ${f.label.toLowerCase()}`;
   }
   const cell = (name: string, label: string) => {
     const err = p.errors[name];
@@ -277,7 +275,7 @@ export function ScenarioFormPage(p: ScenarioFormProps) {
         <div class="scroll">
           <table class="fleet-table">
             <caption>Fleet: one row per aircraft; blank rows are ignored. The design route is the longest regular route.</caption>
-            <thead><tr><th scope="col">#</th><th scope="col">Aircraft</th><th scope="col">Annual operations</th><th scope="col">Stage length ({unitSymbol('distance', units)})</th><th scope="col">Payload ({unitSymbol('mass', units)})</th></tr></thead>
+            <thead><tr><th scope="col">#</th><th scope="col">Aircraft</th>{FLEET_FIELDS.map((f) => <th scope="col" title={f.help}>{f.label}{unitSymbol(f.kind, units) ? ` (${unitSymbol(f.kind, units)})` : ''}</th>)}</tr></thead>
             <tbody>
               {Array.from({ length: p.rows }, (_, i) => {
                 const err = p.errors[rf(i, 'aircraft')];
@@ -300,9 +298,7 @@ export function ScenarioFormPage(p: ScenarioFormProps) {
                       )}
                       {err ? <span class="error small">{err}</span> : null}
                     </td>
-                    {cell(rf(i, 'ops'), `Row ${i + 1} annual operations`)}
-                    {cell(rf(i, 'stage'), `Row ${i + 1} stage length (${unitSymbol('distance', units)})`)}
-                    {cell(rf(i, 'payload'), `Row ${i + 1} payload (${unitSymbol('mass', units)})`)}
+                    {FLEET_FIELDS.map((f) => cell(rf(i, f.form), `Row ${i + 1} ${f.label.toLowerCase()}${unitSymbol(f.kind, units) ? ` (${unitSymbol(f.kind, units)})` : ''}`))}
                   </tr>
                 );
               })}

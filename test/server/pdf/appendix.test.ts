@@ -152,7 +152,7 @@ describe('appendix in US customary units', () => {
       expect(length).toMatch(/^[\d,]+ ft \([\d,]+ m\)$/);
       expect(all).toContain(length);
     }
-    expect(all).toMatch(/Elevation\s+4416\.01 ft/); // 1346 m / 0.3048 (derived)
+    expect(all).toMatch(/Aerodrome elevation\s+4416\.01 ft/); // 1346 m / 0.3048 (derived)
     expect(all).toContain('US customary (ft, lb, °F)');
   });
 });

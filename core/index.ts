@@ -85,7 +85,7 @@ export { type ChartModel } from './report/chart.js';
 
 // The study engine
 export {
-  runStudy, siteConditions, siteDesignTemperature, STUDY_METHOD_VERSION, validateStudy
+  runStudy, siteConditions, siteDesignTemperature, STUDY_METHOD_VERSION, validateStudy, type ValidStudyInput
 } from './study/run.js';
 
 // Study charts (from the saved result)

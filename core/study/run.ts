@@ -853,23 +853,36 @@ function sensitivityCurves(ev: Evaluator, input: StudyInput, scenarios: readonly
   return out;
 }
 
-/** Study-level checks the file schema also makes; repeated here so core never trusts its caller. */
-export function validateStudy(input: StudyInput): void {
+declare const VALID_STUDY: unique symbol;
+
+/** A study input that has passed validateStudy (its aircraft are validated profiles too). */
+export type ValidStudyInput = StudyInput & { readonly [VALID_STUDY]: true };
+
+/** Study inputs that have passed, by identity (inputs are values: a changed one is a new object). */
+const PASSED_STUDIES = new WeakSet<StudyInput>();
+
+/**
+ * Study-level checks the file schema also makes; repeated here so core never trusts its caller. An
+ * input that has passed is returned at once (the parse at the edge validates it, the run does not
+ * again). Linear in the fleet size; messages are built only when a check fails.
+ */
+export function validateStudy(input: StudyInput): ValidStudyInput {
+  if (PASSED_STUDIES.has(input)) return input as ValidStudyInput;
   check(typeof input.name === 'string' && input.name.trim().length > 0, 'name', input.name, 'a non-empty study name');
   check(input.aircraft.length > 0, 'aircraft', input.aircraft.length, 'at least one aircraft');
   check(input.scenarios.length > 0, 'scenarios', input.scenarios.length, 'at least one scenario');
-  const ids = new Set<string>();
+  const byId = new Map<string, AircraftProfile>();
   input.aircraft.forEach((a, i) => {
     validateAircraft(a, `aircraft[${i}]`);
-    check(!ids.has(a.id), `aircraft[${i}].id`, a.id, 'an id not used by another aircraft');
-    ids.add(a.id);
+    if (byId.has(a.id)) check(false, `aircraft[${i}].id`, a.id, 'an id not used by another aircraft');
+    byId.set(a.id, a);
   });
   input.scenarios.forEach((s, i) => {
     check(s.fleet.length > 0, `scenarios[${i}].fleet`, s.fleet.length, 'at least one fleet row');
     s.fleet.forEach((r, j) => {
-      check(ids.has(r.aircraft), `scenarios[${i}].fleet[${j}].aircraft`, r.aircraft, `one of the study's aircraft ids (${[...ids].join(', ')})`);
-      const a = input.aircraft.find((x) => x.id === r.aircraft)!;
-      inRange(`scenarios[${i}].fleet[${j}].payload_kg`, r.payload_kg, { min: 0, max: a.maxPayload_kg, unit: 'kg' });
+      const a = byId.get(r.aircraft);
+      if (a === undefined) check(false, `scenarios[${i}].fleet[${j}].aircraft`, r.aircraft, `one of the study's aircraft ids (${[...byId.keys()].join(', ')})`);
+      inRange(`scenarios[${i}].fleet[${j}].payload_kg`, r.payload_kg, { min: 0, max: a!.maxPayload_kg, unit: 'kg' });
     });
   });
   const o = input.options;
@@ -880,4 +893,6 @@ export function validateStudy(input: StudyInput): void {
   if (r.alternate_km !== undefined) inRange('options.reserves.alternate_km', r.alternate_km, ALTERNATE_DISTANCE_RANGE_KM);
   if (r.holding_min !== undefined) inRange('options.reserves.holding_min', r.holding_min, RESERVE_TIME_RANGE_MIN);
   if (r.contingencyFraction !== undefined) inRange('options.reserves.contingencyFraction', r.contingencyFraction, CONTINGENCY_FRACTION_RANGE);
+  PASSED_STUDIES.add(input);
+  return input as ValidStudyInput;
 }

@@ -3,7 +3,7 @@
  * the canonical input so a report or a file can be traced back to exactly what produced it.
  */
 import { createHash } from 'node:crypto';
-import { InputDomainError, domainProblemText, runStudy, siteConditions, validateStudy, type StudyInput, type StudyResult } from '../../core/index.js';
+import { InputDomainError, domainProblemText, runStudy, siteConditions, validateStudy, type StudyInput, type StudyResult, type ValidStudyInput } from '../../core/index.js';
 import { echoValue, fieldPath, formatPath, parseAll, type Problem } from '../common/schema.js';
 import { studyCrossProblems, studyFileSchema, studyInputOf } from './schema.js';
 
@@ -61,12 +61,12 @@ export function problemFromDomainError(e: InputDomainError, path: string = e.fie
  * schema, core's own study and site checks run too (they are the schema's rules, restated so core never
  * trusts its caller): whatever the engine would refuse is a problem here, with its path in the file.
  */
-export function parseStudyDocument(doc: unknown): { ok: true; input: StudyInput } | { ok: false; problems: Problem[] } {
+export function parseStudyDocument(doc: unknown): { ok: true; input: ValidStudyInput } | { ok: false; problems: Problem[] } {
   const r = parseAll(studyFileSchema, doc);
   if (r.ok) {
-    const input = studyInputOf(r.value);
+    let input: ValidStudyInput;
     try {
-      validateStudy(input);
+      input = validateStudy(studyInputOf(r.value));
       siteConditions(input);
     } catch (e) {
       if (!(e instanceof InputDomainError)) throw e;

@@ -42,3 +42,17 @@ describe('validateAircraft: once per profile', () => {
     expect(() => validateAircraft(bad)).toThrow(InputDomainError);
   });
 });
+
+describe('validateStudy: once per study input', () => {
+  it('returns the input itself; a copy with a fleet row naming an unknown aircraft is refused with the ids allowed', async () => {
+    const { validateStudy } = await import('../../core/study/run.js');
+    const { parseStudyDocument } = await import('../../server/studies/document.js');
+    const parsed = parseStudyDocument(structuredClone(demoStudy));
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    expect(validateStudy(parsed.input)).toBe(parsed.input);
+    const s0 = parsed.input.scenarios[0]!;
+    const bad = { ...parsed.input, scenarios: [{ ...s0, fleet: [{ ...s0.fleet[0]!, aircraft: 'nobody' }] }] };
+    expect(() => validateStudy(bad)).toThrow(/scenarios\[0\]\.fleet\[0\]\.aircraft: "?nobody"?.*one of the study's aircraft ids \(kestrel-ut1, /);
+  });
+});

@@ -12,7 +12,7 @@ export {
 } from './errors.js';
 
 // Warnings as data (code, sentence, quantities) and their rendering
-export { notice, noticeJsonReplacer, noticeText, plainFormat, type Notice, type QuantityFormat } from './notices.js';
+export { notice, noticeJson, noticeText, plainFormat, type Notice, type QuantityFormat } from './notices.js';
 
 // Input ranges shared by forms, schemas and validation
 export {

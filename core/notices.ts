@@ -141,12 +141,30 @@ function isNotice(v: unknown): v is Notice {
 }
 
 /**
- * A JSON.stringify replacer for files readers open (the CLI's JSON, results.json, the API): every
- * notice gains its sentence in the given units as `message`, beside its code and SI values.
+ * JSON text of a value for files readers open (the CLI's JSON, results.json, the API): every notice in
+ * it, nested ones included, gains its sentence in the given units as `message`, beside its code and SI
+ * parts. The notices are given their message for the time of the (synchronous) stringify and restored
+ * after it, which is about twice as fast on a large result as a replacer function called for every key.
  */
-export function noticeJsonReplacer(system: UnitSystem): (key: string, value: unknown) => unknown {
+export function noticeJson(value: unknown, system: UnitSystem, space?: number): string {
   const format = plainFormat(system);
-  return function (this: unknown, _key: string, value: unknown): unknown {
-    return isNotice(value) ? { code: value.code, message: noticeText(value, format), text: value.text, args: value.args } : value;
+  const decorated: Notice[] = [];
+  const visit = (v: unknown): void => {
+    if (typeof v !== 'object' || v === null) return;
+    if (Array.isArray(v)) {
+      for (const x of v) visit(x);
+      return;
+    }
+    if (isNotice(v) && !Object.prototype.hasOwnProperty.call(v, 'message')) {
+      (v as { message?: string }).message = noticeText(v, format);
+      decorated.push(v);
+    }
+    for (const k in v) visit((v as Record<string, unknown>)[k]);
   };
+  visit(value);
+  try {
+    return JSON.stringify(value, null, space);
+  } finally {
+    for (const n of decorated) delete (n as { message?: string }).message;
+  }
 }

@@ -4,9 +4,10 @@
  * file; problems come back as 422 `{ error: "invalid", problems: [{ path, field, value, message }] }`.
  * Endpoints and examples: docs/web.md ("JSON API").
  */
+import { setImmediate as nextTurn } from 'node:timers/promises';
 import { Hono, type Context } from 'hono';
 import { z } from 'zod';
-import { InputDomainError, noticeJsonReplacer, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput, type UnitSystem } from '../core/index.js';
+import { InputDomainError, noticeJson, OPERATING_RULE_SETS, SURFACES, whatIf, TAKEOFF_INPUT_RANGES, type AircraftProfile, type OperatingRuleSet, type StudyInput, type UnitSystem } from '../core/index.js';
 import { AircraftInUseError, DuplicateIdError } from '../db/errors.js';
 import {
   AIRCRAFT_SEARCH_MAX, countAircraftMatching, createAircraftMany, deleteAircraft, getAircraft, pageAircraft, updateAircraft,
@@ -34,7 +35,7 @@ export interface ApiRouteDeps {
 
 /** A JSON answer whose notices carry their sentence (`message`) beside their code and SI values. */
 function jsonWithNotices(c: Context, body: unknown, units: UnitSystem): Response {
-  return c.body(JSON.stringify(body, noticeJsonReplacer(units)), 200, { 'content-type': 'application/json; charset=utf-8' });
+  return c.body(noticeJson(body, units), 200, { 'content-type': 'application/json; charset=utf-8' });
 }
 
 const invalid = (c: Context, problems: readonly Problem[]) =>
@@ -249,6 +250,8 @@ export function apiRoutes(deps: ApiRouteDeps): Hono<AppEnv> {
     if (state.problems.length > 0) return c.json({ error: 'invalid', message: 'the study cannot be computed yet', problems: state.problems }, 422);
     const saved = await service.compute(state);
     const loaded = service.load(id, saved);
+    // Reading the snapshot back and writing the answer are two long steps on a large result: a turn between.
+    await nextTurn();
     return jsonWithNotices(c, { savedAt: saved.createdAt, ...loaded.output }, loaded.output.options.units);
   });
 

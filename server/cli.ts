@@ -8,7 +8,7 @@
  * The same input gives the same output bytes.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
-import { InputDomainError, noticeJsonReplacer, type UnitSystem } from '../core/index.js';
+import { InputDomainError, noticeJson, type UnitSystem } from '../core/index.js';
 import { resultsCsv } from './studies/index.js';
 import { jsonDepthExcess, jsonDepthMessage } from './io/text.js';
 import { formatProblem } from './common/schema.js';
@@ -121,7 +121,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
   }
   const units = args.units ?? parsed.input.options.units;
   let data: string | Uint8Array;
-  if (args.format === 'json') data = JSON.stringify(out, noticeJsonReplacer(units), 2) + '\n';
+  if (args.format === 'json') data = noticeJson(out, units, 2) + '\n';
   else if (args.format === 'csv') data = resultsCsv(out, units);
   else {
     if (!io.renderPdf) {

@@ -5,7 +5,7 @@
  */
 import { Hono, type Context } from 'hono';
 import {
-  InputDomainError, noticeJsonReplacer, siteConditions, type AircraftProfile, type StudyInput, type UnitSystem,
+  InputDomainError, noticeJson, siteConditions, type AircraftProfile, type StudyInput, type UnitSystem,
 } from '../../core/index.js';
 import { aircraftByIds, aircraftChoices, aircraftNames, countAircraft } from '../../db/repos/aircraft.js';
 import { getSite, listSites } from '../../db/repos/sites.js';
@@ -362,7 +362,7 @@ export function studyRoutes(deps: StudyRouteDeps): Hono<AppEnv> {
     const units = viewOf(c, x.study.options.units).units;
     const key = `json:${x.latest.loaded.saved.id}:${units}`;
     let bytes = files.get(key);
-    if (bytes === undefined) files.set(key, (bytes = Buffer.from(`${JSON.stringify(x.latest.loaded.output, noticeJsonReplacer(units), 2)}\n`, 'utf8')));
+    if (bytes === undefined) files.set(key, (bytes = Buffer.from(`${noticeJson(x.latest.loaded.output, units, 2)}\n`, 'utf8')));
     return download(c, bytes, 'application/json; charset=utf-8', `${x.study.name}-results.json`);
   });
 

@@ -5,6 +5,7 @@
  * one computation). Saved results never change, so their parsed form and chart models are cached by
  * saved-result id.
  */
+import { setImmediate as nextTurn } from 'node:timers/promises';
 import { sql } from 'drizzle-orm';
 import type { ChartModel, StudyInput } from '../../core/index.js';
 import { STUDY_METHOD_VERSION, studyCharts } from '../../core/index.js';
@@ -168,11 +169,17 @@ export class StudyService {
     const digest = state.digest;
     const job = (async () => {
       const output = await this.jobs.run('study', input);
+      // A large result arrives as one structured clone; saving it (stringify, insert, read back) is a
+      // second long step: give the loop a turn between them so other requests are not held behind both.
+      await nextTurn();
       if (!getStudy(this.db, state.studyId)) throw new NotFoundError('study', state.studyId);
       const saved = saveStudyResult(this.db, {
         studyId: state.studyId, input, inputDigest: digest, result: output, methodVersion: output.methodVersion, createdAt: this.clock(),
       });
       const { input: _i, result: _r, ...summary } = saved;
+      // The first view reads the snapshot back from the database with its check (load); give the loop
+      // a turn before that long step too.
+      await nextTurn();
       return summary;
     })();
     this.running.set(key, job);

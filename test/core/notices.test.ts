@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import type { AircraftProfile } from '../../core/aircraft.js';
 import { analyseLanding } from '../../core/landing.js';
 import {
-  notice, noticeCodes, noticeJsonReplacer, noticeText, plainFormat, qty, scoped, siText, uniqueNotices, type Notice,
+  notice, noticeCodes, noticeJson, noticeText, plainFormat, qty, scoped, siText, uniqueNotices, type Notice,
 } from '../../core/notices.js';
 import demoStudy from '../../examples/demo-study.json' with { type: 'json' };
 
@@ -91,12 +91,18 @@ describe('rendering in the reader\'s units', () => {
 describe('notices in JSON', () => {
   it('each notice carries its code, its sentence in the file\'s units as message, and its SI parts', () => {
     const n: Notice = notice('test.json')`Landing mass ${qty.mass(20000)} exceeds MLW.`;
-    const parsed = JSON.parse(JSON.stringify({ warnings: [n] }, noticeJsonReplacer('us'))) as { warnings: Record<string, unknown>[] };
+    const body = { warnings: [n], nested: { reason: notice('test.outer')`because ${[n]}` } };
+    const parsed = JSON.parse(noticeJson(body, 'us')) as { warnings: Record<string, unknown>[]; nested: { reason: { message: string; args: Record<string, unknown>[][] } } };
     expect(parsed.warnings[0]).toEqual({
       code: 'test.json',
       message: 'Landing mass 44,092 lb exceeds MLW.',
       text: ['Landing mass ', ' exceeds MLW.'],
       args: [{ kind: 'mass', si: 20000 }],
     });
+    expect(parsed.nested.reason.message).toBe('because Landing mass 44,092 lb exceeds MLW.');
+    expect(parsed.nested.reason.args[0]![0]!.message).toBe('Landing mass 44,092 lb exceeds MLW.');
+    // The value itself is left as it was: no message stays behind on the notices.
+    expect(Object.keys(n)).toEqual(['code', 'text', 'args']);
+    expect(JSON.stringify(body)).not.toContain('message');
   });
 });

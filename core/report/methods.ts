@@ -332,7 +332,7 @@ export const METHOD_ENTRIES: readonly MethodEntry[] = [
       'bound = max(2.5 × ARFL, 5500 m)',
       'impractical when any checked distance > bound',
     ],
-    symbols: 'ARFL: aeroplane reference field length (flight-manual value, else the model at MTOW, sea level, ISA, dry); an ARFL above 5500 m does not raise the bound.',
+    symbols: 'ARFL: aeroplane reference field length (the profile’s planning figure when it gives one, else the physics model at MTOW, sea level, ISA, dry; the appendix says which); an ARFL above 5500 m does not raise the bound.',
     limits: 'The factor 2.5 is a project convention (well beyond the 35 % at which the percentage corrections ask for a specific study); 5500 m is the length class of the longest paved runways (common practice, from memory).',
     sources: ['AN14', 'ADM1'],
     doc: 'study.md',

@@ -554,6 +554,7 @@ export function componentSections(rows: readonly RowResult[]): ComponentSection[
     { label: 'Required length', value: (r) => (ok(r) ? q(r.required_m, 'length') : undefined), bold: true },
     { label: 'ICAO aerodrome reference code', value: (r) => t(r.classification.aerodromeCode) },
     { label: 'Aeroplane reference field length', value: (r) => q(r.classification.arfl_m, 'length') },
+    { label: 'Aeroplane reference field length from', value: (r) => t(r.classification.arfl_m === undefined ? 'none: the physics model finds no takeoff at MTOW, sea level, ISA' : r.classification.arflSource) },
     { label: 'Approach category (VREF at MLW)', value: (r) => t(r.classification.approachCategory) },
     { label: 'Design group', value: (r) => t(r.classification.designGroup) },
   ]);

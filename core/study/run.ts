@@ -66,7 +66,7 @@ const NO_CRUISE_DATA: Notice = notice('study.noCruiseData')`The profile has no c
  * whenever a number or the result's structure can change (a saved result of another version is
  * recomputed, never shown as current).
  */
-export const STUDY_METHOD_VERSION = 'runwright-methods-6';
+export const STUDY_METHOD_VERSION = 'runwright-methods-7';
 
 /** Temperature sweep around the design temperature, °C. */
 export const SENSITIVITY_TEMPERATURE_SPAN_C = PEAK_SCAN_SPAN_C;
@@ -314,7 +314,7 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
   // Aeroplane reference field length: the flight-manual value when the profile carries one, else the
   // model at MTOW, sea level, ISA, still air, zero slope, dry paved runway (ICAO Annex 14 definition),
   // whatever the study's design surface.
-  const arfl = ev.arfl(a).arfl_m;
+  const { arfl_m: arfl, source } = ev.arfl(a);
   const vref = referenceLandingSpeed({ aircraft: a });
   const c = classifyAircraft(a, { arfl_m: arfl ?? 9999, vref_mps: vref });
   const out: AircraftClassificationSummary = {
@@ -322,7 +322,8 @@ function classification(ev: Evaluator, a: AircraftProfile, cache: Map<string, Ai
     approachCategory: c.approachCategory,
     designGroup: c.designGroup.group ?? '—',
     runwayDesignCode: c.runwayDesignCode ?? '—',
-    arfl_m: arfl ?? 0,
+    ...(arfl === undefined ? {} : { arfl_m: arfl }),
+    arflSource: source === 'flight-manual' ? 'planning figure' : 'physics model',
     vref_mps: vref,
   };
   cache.set(a.id, out);

@@ -190,8 +190,13 @@ export interface AircraftClassificationSummary {
   readonly approachCategory: string;
   readonly designGroup: string;
   readonly runwayDesignCode: string;
-  /** Aeroplane reference field length used for the code number, m. */
-  readonly arfl_m: number;
+  /**
+   * Aeroplane reference field length used for the code number, m: the profile's planning figure when
+   * it gives one, else the physics model's; absent when neither exists (the model finds no takeoff).
+   */
+  readonly arfl_m?: number;
+  /** Which one `arfl_m` is. */
+  readonly arflSource: 'planning figure' | 'physics model';
   /** VREF at MLW, sea level, ISA, m/s. */
   readonly vref_mps: number;
 }

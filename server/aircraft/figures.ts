@@ -31,10 +31,16 @@ function computeFigures(a: AircraftProfile): AircraftFigures {
   try {
     const vref_mps = referenceLandingSpeed({ aircraft: a });
     const to = analyseTakeoff({ aircraft: a, mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry' });
-    if (!to.feasible) return { vref_mps, note: notice('aircraft.noReferenceFieldLength')`No reference field length: ${to.message}` };
-    const c = classifyAircraft(a, { arfl_m: to.required_m, vref_mps });
+    const planning = a.reference?.takeoff_m;
+    // The aeroplane reference field length is the planning figure when the profile gives one, else
+    // the physics model's (the study uses the same rule, core/plausibility.ts); it says which.
+    if (!to.feasible && planning === undefined) return { vref_mps, note: notice('aircraft.noReferenceFieldLength')`No reference field length: ${to.message}` };
+    const arfl_m = planning !== undefined ? planning : (to as Extract<typeof to, { feasible: true }>).required_m;
+    const c = classifyAircraft(a, { arfl_m, vref_mps });
     return {
-      arfl_m: to.required_m,
+      arfl_m,
+      arflSource: planning === undefined ? 'physics model' : 'planning figure',
+      ...(to.feasible ? { modelArfl_m: to.required_m } : {}),
       vref_mps,
       aerodromeCode: c.aerodromeCode,
       approachCategory: c.approachCategory,

@@ -36,7 +36,7 @@ function sectionOf(g: FieldGroup): FormSection {
 }
 
 const REFERENCE_FIELDS: readonly AircraftFormField[] = [
-  { key: 'takeoff_m', name: 'reference.takeoff_m', label: 'Reference takeoff field length', group: 'reference', section: 'reference', kind: 'length', unit: 'm', min: 100, max: 5000, when: 'optional', doc: 'At MTOW, sea level, ISA, zero wind and slope.' },
+  { key: 'takeoff_m', name: 'reference.takeoff_m', label: 'Planning takeoff field length (the aeroplane reference field length)', group: 'reference', section: 'reference', kind: 'length', unit: 'm', min: 100, max: 5000, when: 'optional', doc: 'From the planning document: at MTOW, sea level, ISA, zero wind and slope. When given, it is the aeroplane reference field length everywhere (classification, plausibility bound); the physics model is shown beside it.' },
   { key: 'landing_m', name: 'reference.landing_m', label: 'Reference landing field length', group: 'reference', section: 'reference', kind: 'length', unit: 'm', min: 100, max: 5000, when: 'optional', doc: 'At MLW, sea level, ISA, as published (already factored).' },
 ];
 

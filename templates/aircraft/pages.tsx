@@ -9,7 +9,7 @@ import {
 import { AIRCRAFT_FORM_FIELDS, AIRCRAFT_LABELS, AIRCRAFT_TEXT_FIELDS, FORM_SECTIONS } from './fields.js';
 import { ActionButton, Facts, ImportProblems, Notice, PostForm } from '../components.js';
 import { ErrorSummary, Field, Section, SelectField, type Errors, type Values } from '../forms.js';
-import { fmt, fmtInput, fmtLengthBoth, say } from '../format.js';
+import { fmt, fmtInput, fmtLengthBoth, fmtPct, say } from '../format.js';
 import { IDS } from '../ids.js';
 import { useView } from '../view.js';
 import { WhatIfPanel, type WhatIfProps } from '../whatif/index.js';
@@ -17,7 +17,11 @@ import { Pager } from '../pager.js';
 
 /** Key figures of a catalogue aircraft (the server's computation, structurally). */
 export interface AircraftFiguresView {
+  /** Aeroplane reference field length: the planning figure when given, else the model's. */
   readonly arfl_m?: number;
+  readonly arflSource?: 'planning figure' | 'physics model';
+  /** The physics model's length at the same condition (MTOW, sea level, ISA), for comparison. */
+  readonly modelArfl_m?: number;
   readonly vref_mps?: number;
   readonly aerodromeCode?: string | null;
   readonly approachCategory?: string;
@@ -123,7 +127,7 @@ export function AircraftResults(p: AircraftListProps) {
         <>
           <div class="scroll">
             <table class="list">
-              <caption>{what}{p.pages > 1 ? `; ${first.toLocaleString('en-US')}–${last.toLocaleString('en-US')} shown` : ''}; reference field length at MTOW, sea level, ISA (physics model)</caption>
+              <caption>{what}{p.pages > 1 ? `; ${first.toLocaleString('en-US')}–${last.toLocaleString('en-US')} shown` : ''}; aeroplane reference field length at MTOW, sea level, ISA: the profile's planning figure where it gives one (P), else the physics model's (M)</caption>
               <thead>
                 <tr>
                   <th scope="col">Name</th><th scope="col">Engines</th><th scope="col">Certification</th>
@@ -140,7 +144,7 @@ export function AircraftResults(p: AircraftListProps) {
                     <td>{CERT_LABEL[a.certification] ?? a.certification}</td>
                     <td class="num">{fmt(a.mtow_kg, 'mass', units)}</td>
                     <td class="num">{fmt(a.wingspan_m, 'shortLength', units)}</td>
-                    <td class="num">{f.arfl_m === undefined ? <span title={f.note === undefined ? undefined : say(f.note, units)}>—</span> : fmt(f.arfl_m, 'length', units)}</td>
+                    <td class="num">{f.arfl_m === undefined ? <span title={f.note === undefined ? undefined : say(f.note, units)}>—</span> : <>{fmt(f.arfl_m, 'length', units)} <abbr class="muted" title={f.arflSource}>{f.arflSource === 'planning figure' ? 'P' : 'M'}</abbr></>}</td>
                     <td>{f.aerodromeCode ?? '—'}</td>
                     <td>{f.approachCategory ?? '—'}</td>
                     <td>{f.designGroup ?? '—'}</td>
@@ -287,7 +291,8 @@ export function AircraftDetailPage(p: AircraftDetailProps) {
           ['Engines', engineText(a)],
           ['Certification', CERT_LABEL[a.certification] ?? a.certification],
           ['MTOW / MLW / OEW', `${fmt(a.mtow_kg, 'mass', units)} / ${fmt(a.mlw_kg, 'mass', units)} / ${fmt(a.oew_kg, 'mass', units)}`],
-          ['Reference field length (MTOW, sea level, ISA)', f.arfl_m === undefined ? (f.note === undefined ? '—' : say(f.note, units)) : fmtLengthBoth(f.arfl_m, units)],
+          ['Aeroplane reference field length (MTOW, sea level, ISA)', f.arfl_m === undefined ? (f.note === undefined ? '—' : say(f.note, units)) : `${fmtLengthBoth(f.arfl_m, units)}, ${f.arflSource ?? 'physics model'}`],
+          ...(f.arflSource === 'planning figure' ? [['Physics model at the same condition', f.modelArfl_m === undefined ? 'no takeoff found' : `${fmtLengthBoth(f.modelArfl_m, units)} (${fmtPct((f.modelArfl_m - f.arfl_m!) / f.arfl_m!)} against the planning figure)`] as [string, string]] : []),
           ['VREF at MLW (sea level, ISA)', fmt(f.vref_mps, 'speed', units)],
           ['Aerodrome reference code', f.aerodromeCode ?? '—'],
           ['Approach category / design group', `${f.approachCategory ?? '—'} / ${f.designGroup ?? '—'}`],

@@ -40,7 +40,7 @@ export interface OptionFieldSpec {
   readonly default?: number | string;
 }
 
-export const STUDY_METHODS = ['physics', 'reference-icao', 'reference-authority', 'calibrated'] as const;
+export const STUDY_METHODS = ['physics', 'reference-icao', 'reference-authority', 'calibrated', 'planning'] as const;
 export const RESERVE_POLICIES = ['cruise-45min', 'international', 'custom'] as const;
 
 export const STUDY_OPTION_FIELDS: readonly OptionFieldSpec[] = [
@@ -50,7 +50,7 @@ export const STUDY_OPTION_FIELDS: readonly OptionFieldSpec[] = [
     help: 'The recommended length is rounded up to this step (default 50 m, or 100 ft in US units).' },
   { path: 'surface', form: 'surface', label: 'Design surface', kind: 'choice', choices: SURFACES, default: 'dry',
     help: 'Runway surface of the design case.' },
-  { path: 'method', form: 'method', label: 'Method', kind: 'choice', choices: STUDY_METHODS, default: 'physics',
+  { path: 'method', form: 'method', label: 'Method', kind: 'choice', choices: STUDY_METHODS, default: 'planning',
     help: 'Primary takeoff method; the others are shown beside it.' },
   { path: 'units', form: 'units', label: 'Units of the study', kind: 'choice', choices: ['si', 'us'], default: 'si',
     help: 'Study pages, the CSV results and the appendix use these units (display only: no number changes).' },

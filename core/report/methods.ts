@@ -362,6 +362,7 @@ export const STUDY_METHOD_LABEL: Readonly<Record<StudyMethod, string>> = {
   'reference-icao': 'Reference lengths with the ICAO percentage corrections, the performance model shown beside them',
   'reference-authority': 'Reference lengths with the authority adjustments, the performance model shown beside them',
   calibrated: 'Performance model calibrated to each aircraft\'s reference length, then applied at the site',
+  planning: 'Planning data first: the aircraft\'s planning chart where the design condition lies inside it; elsewhere the performance model calibrated to its planning chart or planning takeoff length; the uncalibrated model only for an aircraft without planning figures, and then flagged',
 };
 
 /** The references cited by `entries`, in the order of METHOD_REFERENCES. */

@@ -537,6 +537,7 @@ export function componentSections(rows: readonly RowResult[]): ComponentSection[
     { label: 'Torenbeek balanced field length (indicative)', value: (r) => (ok(r) && r.takeoff?.torenbeek_m !== undefined ? q(r.takeoff.torenbeek_m, 'length') : undefined) },
     { label: 'Roskam takeoff length (indicative)', value: (r) => (ok(r) && r.takeoff?.roskam_m !== undefined ? q(r.takeoff.roskam_m, 'length') : undefined) },
     { label: 'Takeoff governing case', value: (r) => (ok(r) && r.takeoff ? t(r.takeoff.governing) : undefined) },
+    { label: 'Takeoff requirement from', value: (r) => (ok(r) && r.takeoff ? t(r.takeoff.source ?? 'physics model') : undefined) },
     { label: 'Takeoff requirement', value: (r) => (ok(r) && r.takeoff ? q(r.takeoff.required_m, 'length') : undefined), bold: true },
   ]);
   section('Landing', [

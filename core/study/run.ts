@@ -27,7 +27,8 @@
  * planning-increment step.
  */
 import { notice, qty, scoped, uniqueNotices, type Notice } from '../notices.js';
-import type { AircraftProfile } from '../aircraft.js';
+import type { AircraftProfile, ReferenceTable } from '../aircraft.js';
+import { fitTakeoffChart, type ChartFitResult, type ChartPoint } from '../chartFit.js';
 import { airAt, standardTemperatureC } from '../atmosphere.js';
 import { classifyAircraft } from '../classify.js';
 import { checkDerivedDesignTemperature, designTemperatureFromMonthly } from '../climate/index.js';
@@ -38,7 +39,7 @@ import {
   RESERVE_TIME_RANGE_MIN, SITE_ELEVATION_RANGE, STAGE_LENGTH_RANGE_KM,
 } from '../fields.js';
 import { analyseLanding, landingRuleLabel, referenceLandingSpeed, roskamLandingFieldLength } from '../landing.js';
-import { referenceLengthAtSite } from '../reference.js';
+import { referenceLengthAtSite, referenceTableAtSite } from '../reference.js';
 import { requiredLength } from '../requirement.js';
 import {
   aeroplaneReferenceFieldLength, checkPlausibility, plausibilityBound, takeoffDistances,
@@ -55,7 +56,7 @@ import { assessExistingRunway, existingRunwayCheckOf, type MaxLandingMassResult,
 import type {
   AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint, PayloadRangeSeries,
   RouteSummary, RowResult, RunwaySummary, ScenarioResult, SensitivityCurve, SiteConditions, StudyInput,
-  StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
+  StudyMethod, StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
 } from './types.js';
 
 /** The project's own words when a profile has no cruise data (route column and row warning). */
@@ -204,10 +205,74 @@ interface Conditions {
   readonly slope: number;
 }
 
+/** The takeoff model a row runs (see Evaluator.model). */
+interface TakeoffModel {
+  readonly profile: AircraftProfile;
+  readonly thrustScale: number;
+  readonly clMaxScale: number;
+  /** Where the model comes from, in words for the row ("physics model calibrated to 12 chart points"). */
+  readonly source: string;
+  /** The fit behind it (planning data first), for the row's trace and the appendix. */
+  readonly fit?: ChartFitResult;
+  /** Why the model is not calibrated although the method asks for it. */
+  readonly notCalibrated?: Notice;
+}
+
+/** Every node of a planning chart as a fit point. */
+function chartPoints(t: ReferenceTable): ChartPoint[] {
+  const out: ChartPoint[] = [];
+  t.mass_kg.forEach((m, i) => t.elevation_m.forEach((h, j) => t.temperature_c.forEach((c, k) => {
+    out.push({ mass_kg: m, pressureAltitude_m: h, temperature_c: c, length_m: t.length_m[i]![j]![k]! });
+  })));
+  return out;
+}
+
+function takeoffModelOf(a: AircraftProfile, method: StudyMethod, calibration: () => TakeoffCalibrationResult): TakeoffModel {
+  const plain = { profile: a, thrustScale: 1, clMaxScale: 1 };
+  if (method === 'calibrated') {
+    const c = calibration();
+    return c.status === 'ok'
+      ? { ...plain, thrustScale: c.factor, source: `physics model, thrust calibrated to the reference length (× ${c.factor.toFixed(3)})` }
+      : { ...plain, source: 'physics model (uncalibrated)' };
+  }
+  if (method !== 'planning') return { ...plain, source: 'physics model' };
+  const table = a.reference?.table;
+  const ref = a.reference?.takeoff_m;
+  if (table === undefined && ref === undefined) {
+    return {
+      ...plain, source: 'physics model (uncalibrated: no planning figures)',
+      notCalibrated: notice('study.noPlanningData')`No planning figures in the profile (no planning takeoff length or chart): the uncalibrated physics model sizes this aircraft. Check it against the manufacturer's planning data.`,
+    };
+  }
+  const points = table !== undefined
+    ? chartPoints(table).filter((p) => p.mass_kg >= a.oew_kg && p.mass_kg <= a.mtow_kg)
+    : [{ mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, length_m: ref! }];
+  const fit = fitTakeoffChart({ aircraft: a, points });
+  if (fit.status !== 'ok') {
+    return {
+      ...plain, fit, source: 'physics model (uncalibrated: the fit to the planning data was refused)',
+      notCalibrated: notice('study.planningFitRefused')`Calibration to the planning data refused: ${fit.reason!} The uncalibrated physics model sizes this aircraft.`,
+    };
+  }
+  const thrust = fit.scales?.thrustScale ?? 1;
+  return {
+    profile: fit.profile!, thrustScale: thrust, clMaxScale: fit.scales?.clMaxScale ?? 1, fit,
+    source: table !== undefined
+      ? `physics model calibrated to ${points.length} planning-chart points (largest residual ${(fit.maxAbs * 100).toFixed(2)} %)`
+      : `physics model calibrated to the planning takeoff length (thrust × ${thrust.toFixed(3)})`,
+  };
+}
+
+/** Scales of a model for the existing-runway check (which takes the profile as given plus scales). */
+function modelScales(m: TakeoffModel): { aircraft: AircraftProfile; thrustScale: number; clMaxScale?: number } {
+  return { aircraft: m.profile, thrustScale: m.thrustScale, ...(m.clMaxScale === 1 ? {} : { clMaxScale: m.clMaxScale }) };
+}
+
 /** Memoised evaluations for one study run (pure: keyed by value). */
 class Evaluator {
   private readonly takeoffCache = new Map<string, TakeoffResult>();
   private readonly calibrations = new Map<string, TakeoffCalibrationResult>();
+  private readonly models = new Map<string, TakeoffModel>();
   /** Greatest takeoff and landing masses per aircraft and runway direction (independent of the row). */
   readonly solvedMasses = new Map<string, { takeoffMass: MaxTakeoffMassResult; landingMass: MaxLandingMassResult }>();
   private readonly arfls = new Map<string, ReturnType<typeof aeroplaneReferenceFieldLength>>();
@@ -242,19 +307,33 @@ class Evaluator {
     return c;
   }
 
-  thrustScale(a: AircraftProfile): number {
-    if (this.options.method !== 'calibrated') return 1;
-    const c = this.calibration(a);
-    return c.status === 'ok' ? c.factor : 1;
+  /**
+   * The takeoff model of an aircraft under the study's method: the profile as given (physics and the
+   * reference methods), with the single-factor thrust calibration (calibrated), or, for planning data
+   * first, fitted to the profile's planning chart (every node) or to its planning takeoff length (one
+   * point, thrust alone; core/chartFit.ts). Says where it comes from.
+   */
+  model(a: AircraftProfile): TakeoffModel {
+    let m = this.models.get(a.id);
+    if (!m) {
+      m = takeoffModelOf(a, this.options.method, () => this.calibration(a));
+      this.models.set(a.id, m);
+    }
+    return m;
   }
 
-  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, thrustScale = this.thrustScale(a), surface = this.options.surface): TakeoffResult {
-    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${thrustScale}|${surface}`;
+  thrustScale(a: AircraftProfile): number {
+    return this.model(a).thrustScale;
+  }
+
+  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, surface = this.options.surface): TakeoffResult {
+    const m = this.model(a);
+    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${surface}`;
     let r = this.takeoffCache.get(key);
     if (!r) {
       r = analyseTakeoff({
-        aircraft: a, mass_kg, pressureAltitude_m: c.pressureAltitude_m, temperature_c: c.temperature_c,
-        slope: c.slope, headwind_mps: 0, surface, thrustScale,
+        aircraft: m.profile, mass_kg, pressureAltitude_m: c.pressureAltitude_m, temperature_c: c.temperature_c,
+        slope: c.slope, headwind_mps: 0, surface, thrustScale: m.thrustScale, ...(m.clMaxScale === 1 ? {} : { clMaxScale: m.clMaxScale }),
       });
       this.takeoffCache.set(key, r);
     }
@@ -424,6 +503,7 @@ function evaluateRow(
     -readonly [K in keyof TakeoffSummary]: TakeoffSummary[K];
   } = {
     method: opts.method,
+    source: ev.model(a).source,
     required_m: t.required_m,
     governing: TAKEOFF_GOVERNING_LABELS[t.governing],
     components: takeoffComponents(t),
@@ -467,6 +547,26 @@ function evaluateRow(
     }
   } else if (opts.method === 'reference-icao' || opts.method === 'reference-authority') {
     warnings.push(notice('study.noReferenceLength')`No reference takeoff length in the profile: the physics model is used for this aircraft.`);
+  }
+  if (opts.method === 'planning') {
+    const m = ev.model(a);
+    if (m.notCalibrated) warnings.push(m.notCalibrated);
+    if (m.fit?.status === 'ok') summary.calibrationFactor = m.thrustScale;
+    // Inside the planning chart the chart itself gives the length (multilinear interpolation at the
+    // design mass, elevation and temperature; the ICAO gradient step for the slope); outside it, the
+    // calibrated model's length stands. The chart is never extrapolated.
+    if (a.reference?.table !== undefined && takeoffRequired === t.required_m) {
+      const chart = referenceTableAtSite({ aircraft: a, mass_kg: mass, site: refSite, set: 'icao' });
+      if (chart.status === 'ok') {
+        takeoffRequired = chart.length_m;
+        summary.required_m = chart.length_m;
+        summary.source = 'planning chart (multilinear interpolation) + ICAO gradient step';
+        summary.governing = 'planning chart';
+        summary.chart_m = chart.length_m;
+      } else if (chart.status === 'outside-data') {
+        warnings.push(notice('study.outsidePlanningChart')`The design condition lies outside the planning chart (${chart.field} ${chart.value.toFixed(1)}; the chart covers ${chart.min} to ${chart.max}): the chart is not extrapolated, the calibrated model gives the length.`);
+      }
+    }
   }
   if (opts.method === 'calibrated') {
     const c = ev.calibration(a);
@@ -543,7 +643,6 @@ function evaluateRow(
       const solvedKey = `${a.id}|${rw.name}|${d.designator}|${landingMass}`;
       const solved = ev.solvedMasses.get(solvedKey);
       const assessment = assessExistingRunway({
-        aircraft: a,
         runway: rw.name,
         direction: d,
         pressureAltitude_m: ev.site.pressureAltitude_m,
@@ -553,7 +652,7 @@ function evaluateRow(
         surface: opts.surface,
         takeoffMass_kg: mass,
         landingMass_kg: landingMass,
-        thrustScale: ev.thrustScale(a),
+        ...modelScales(ev.model(a)),
         // The route penalty needs the route model: only for profiles with cruise data.
         ...(a.cruise ? { stageLength_m: row.stageLength_km * 1000, payload_kg: row.payload_kg, reserves: reservePolicyOf(opts.reserves) } : {}),
         passengerMass_kg: opts.passengerMass_kg,

@@ -70,7 +70,7 @@ export interface ScenarioInput {
   readonly fleet: readonly FleetRowInput[];
 }
 
-export type StudyMethod = 'physics' | 'reference-icao' | 'reference-authority' | 'calibrated';
+export type StudyMethod = 'physics' | 'reference-icao' | 'reference-authority' | 'calibrated' | 'planning';
 export type ReservePolicyName = 'cruise-45min' | 'international' | 'custom';
 
 export interface StudyReserves {
@@ -203,6 +203,8 @@ export interface AircraftClassificationSummary {
 
 export interface TakeoffSummary {
   readonly method: StudyMethod;
+  /** Which source gave the takeoff requirement, in words (planning chart, calibrated model, model, reference length …). */
+  readonly source: string;
   readonly required_m: number;
   readonly governing: string;
   /** Named components for the results table and the appendix (SI). */
@@ -220,8 +222,10 @@ export interface TakeoffSummary {
   /** Temperature below the design temperature at which a climb-limited requirement peaks (the row is sized there), °C. */
   readonly peakTemperature_c?: number;
   readonly reference_m?: number;
-  /** Calibration factor applied (calibrated method). */
+  /** Calibration factor applied (calibrated method; the fitted thrust scale under planning data first). */
   readonly calibrationFactor?: number;
+  /** The planning chart's length at the design condition, m (planning data first, inside the chart). */
+  readonly chart_m?: number;
   /** Indicative empirical cross-checks, m. */
   readonly torenbeek_m?: number;
   readonly roskam_m?: number;

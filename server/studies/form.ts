@@ -38,7 +38,7 @@ export function readStudyForm(values: FormValues, system: UnitSystem, siteIds: r
   const regularUseThreshold = readNumber(values, { name: 'regularUseThreshold', kind: 'count', ...limits('regularUseThreshold'), required: true, integer: true }, system, errors);
   const roundingIncrement_m = readNumber(values, { name: 'roundingIncrement', kind: 'length', ...limits('roundingIncrement'), required: true }, system, errors);
   const surface = readChoice(values, 'surface', SURFACES, errors, 'dry');
-  const method = readChoice(values, 'method', METHODS, errors, 'physics');
+  const method = readChoice(values, 'method', METHODS, errors, 'planning');
   const policy = readChoice(values, 'reservePolicy', POLICIES, errors, 'cruise-45min');
   const alternate_m = readNumber(values, { name: 'alternate', kind: 'distance', ...limits('alternate', 1000), required: policy === 'custom' }, system, errors);
   const holding_min = readNumber(values, { name: 'holding', kind: 'count', ...limits('holding'), required: policy === 'custom' }, system, errors);
@@ -106,7 +106,7 @@ export function newStudyValues(system: UnitSystem, siteId?: number): Record<stri
     regularUseThreshold: '500',
     roundingIncrement: system === 'us' ? '100' : '50',
     surface: 'dry',
-    method: 'physics',
+    method: 'planning',
     reservePolicy: 'cruise-45min',
     passengerMass: fmtInput(95, 'mass', system),
     landingTemperature: 'isa',

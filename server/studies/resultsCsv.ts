@@ -19,7 +19,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
   const header = [
     'scenario', 'aircraft_id', 'aircraft', 'annual_operations', 'group_operations', 'regular_use', 'status', 'reason',
     `takeoff_mass_${mass.symbol}`, `required_takeoff_${len.symbol}`, `required_landing_${len.symbol}`, `required_${len.symbol}`,
-    'governing_side', 'takeoff_governing_case', 'runway_design_code', 'aerodrome_code', 'critical',
+    'governing_side', 'takeoff_governing_case', 'takeoff_source', 'runway_design_code', 'aerodrome_code', 'critical',
     `recommended_length_${len.symbol}`,
     // The spread between methods: the physics takeoff, the corrected reference length and the
     // indicative cross-checks (never governing), and the landing rule with its source.
@@ -37,7 +37,7 @@ export function resultsCsv(out: StudyOutput, units: UnitSystem): string {
         // Why a row has no requirement (cannot operate, or beyond the plausibility bound): never a bare blank.
         r.reason ? noticeText(r.reason, text) : '',
         M(r.takeoffMass_kg), ok ? L(r.requiredTakeoff_m) : '', ok ? L(r.requiredLanding_m) : '', ok ? L(r.required_m) : '',
-        ok ? r.governing : '', r.takeoff?.governing ?? '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
+        ok ? r.governing : '', r.takeoff?.governing ?? '', ok ? r.takeoff?.source ?? '' : '', r.classification.runwayDesignCode, r.classification.aerodromeCode,
         critical ? 'yes' : 'no', critical ? L(s.recommendedLength_m) : '',
         // A row that cannot operate carries its reason only: no method figure that could read as a length.
         ...(ok

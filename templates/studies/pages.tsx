@@ -50,6 +50,7 @@ export function StudiesListPage(p: { studies: readonly StudyListItem[]; deleted?
 }
 
 const METHOD_LABELS: Record<string, string> = {
+  planning: 'Planning data first (chart, else the model calibrated to the planning data; recommended)',
   physics: 'Physics model (first principles)',
   'reference-icao': 'Reference lengths with ICAO corrections',
   'reference-authority': 'Reference lengths with the authority adjustments',

@@ -98,7 +98,7 @@ function ScenarioTable(p: { s: ScenarioResult; index: number; studyId: number })
                         <td class="num">{fmt(r.requiredTakeoff_m, 'length', units)}</td>
                         <td class="num">{fmt(r.requiredLanding_m, 'length', units)}</td>
                         <td class="num"><strong>{fmt(r.required_m, 'length', units)}</strong></td>
-                        <td>{r.governing}{r.governing === 'takeoff' && r.takeoff ? `: ${r.takeoff.governing}` : ''}</td>
+                        <td>{r.governing}{r.governing === 'takeoff' && r.takeoff ? `: ${r.takeoff.governing}` : ''}{r.takeoff?.source ? <div class="muted small" data-testid="takeoff-source">Takeoff from: {r.takeoff.source}</div> : null}</td>
                       </>
                     ) : (
                       <td colspan={5} class="cannot">{r.plausibility && r.reason ? say(r.reason, units) : `Cannot operate: ${r.reason ? say(r.reason, units) : ''}`}</td>

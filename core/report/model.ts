@@ -21,7 +21,7 @@ import { DEFAULT_OPERATING_RULES, LIGHT_FACTOR_SOURCE, LIGHT_LANDING_FACTOR_DEFA
 import { monthName } from '../climate/index.js';
 import { notice, qty, scoped, type Notice } from '../notices.js';
 import type {
-  RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
+  MethodFigure, RowResult, ScenarioResult, StudyInput, StudyResult, TraceItem,
 } from '../study/types.js';
 import type { ChartModel } from './chart.js';
 import { METHOD_ENTRIES, STUDY_METHOD_LABEL, referencesFor } from './methods.js';
@@ -549,6 +549,28 @@ export function componentSections(rows: readonly RowResult[]): ComponentSection[
     { label: 'Factor on the landing distance', value: (r) => (ok(r) && r.landing ? q(r.landing.factor, 'ratio') : undefined) },
     { label: 'Roskam landing field length (indicative)', value: (r) => (ok(r) && r.landing?.roskam_m !== undefined ? q(r.landing.roskam_m, 'length') : undefined) },
     { label: 'Landing requirement', value: (r) => (ok(r) && r.landing ? q(r.landing.required_m, 'length') : undefined), bold: true },
+  ]);
+  // Every method's takeoff figure at the design conditions and mass, with the reason for a gap or a
+  // large difference (the row's own method in bold).
+  const methodLabels = [...new Set(rows.flatMap((r) => (ok(r) ? r.takeoff?.spread ?? [] : []).map((f) => f.label)))];
+  const figure = (r: RowResult, label: string): MethodFigure | undefined => (ok(r) ? r.takeoff?.spread?.find((f) => f.label === label) : undefined);
+  section('Takeoff by method at design conditions', [
+    ...methodLabels.map((label): ComponentLine => ({
+      label,
+      value: (r) => {
+        const f = figure(r, label);
+        if (!f) return undefined;
+        if (f.length_m === undefined) return f.note ? { notice: f.note } : t('—');
+        return f.note ? { notice: notice('report.methodFigure')`${qty.length(f.length_m)} (${f.note})`, bold: f.governs } : { ...q(f.length_m, 'length'), ...(f.governs ? { bold: true } : {}) } as Cell;
+      },
+    })),
+    {
+      label: 'Spread of the figures (largest − smallest)',
+      value: (r) => {
+        const ls = (ok(r) ? r.takeoff?.spread ?? [] : []).flatMap((f) => (f.length_m === undefined ? [] : [f.length_m]));
+        return ls.length < 2 ? undefined : q(Math.max(...ls) - Math.min(...ls), 'length');
+      },
+    },
   ]);
   section('Requirement and classification', [
     { label: 'Governing', value: (r) => (ok(r) ? t(r.governing) : undefined) },

@@ -56,7 +56,7 @@ import { assessExistingRunway, existingRunwayCheckOf, type MaxLandingMassResult,
 import type {
   AircraftClassificationSummary, ExistingRunwayCheck, FleetRowInput, LandingSummary, OperationsServedPoint, PayloadRangeSeries,
   RouteSummary, RowResult, RunwaySummary, ScenarioResult, SensitivityCurve, SiteConditions, StudyInput,
-  StudyMethod, StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
+  MethodFigure, StudyMethod, StudyOptions, StudyReserves, StudyResult, TakeoffSummary, TraceItem,
 } from './types.js';
 
 /** The project's own words when a profile has no cruise data (route column and row warning). */
@@ -263,6 +263,79 @@ function takeoffModelOf(a: AircraftProfile, method: StudyMethod, calibration: ()
   };
 }
 
+/** Share by which a method's figure may differ from the row's requirement before the table says why. */
+const SPREAD_NOTE_SHARE = 0.1;
+
+/**
+ * Every method's takeoff requirement for a row at its design conditions and mass: the planning chart,
+ * the model calibrated to the planning data, the uncalibrated model, the reference length with the
+ * ICAO and the authority corrections, and the indicative Torenbeek and Roskam estimates. A missing
+ * figure says why; a figure more than 10 % from the row's requirement gets its likely reason.
+ */
+function methodSpread(
+  ev: Evaluator, a: AircraftProfile, mass: number, cond: Conditions,
+  refSite: Parameters<typeof referenceLengthAtSite>[0]['site'], t: Extract<TakeoffResult, { feasible: true }>,
+  required: number, summary: { readonly source: string; readonly chart_m?: number }, climbOffload: number | undefined,
+): MethodFigure[] {
+  const run = (m: TakeoffModel): number | undefined => {
+    const r = analyseTakeoff({
+      aircraft: m.profile, mass_kg: mass, pressureAltitude_m: cond.pressureAltitude_m, temperature_c: cond.temperature_c,
+      slope: cond.slope, headwind_mps: 0, surface: ev.options.surface, thrustScale: m.thrustScale, ...(m.clMaxScale === 1 ? {} : { clMaxScale: m.clMaxScale }),
+    });
+    return r.feasible ? r.required_m : undefined;
+  };
+  const out: MethodFigure[] = [];
+  const add = (method: MethodFigure['method'], label: string, length_m: number | undefined, note?: Notice, governs = false): void => {
+    out.push({ method, label, ...(length_m === undefined ? {} : { length_m }), ...(note ? { note } : {}), governs });
+  };
+  const NO_CHART = notice('spread.noChart')`no planning chart in the profile`;
+  // Planning chart.
+  if (a.reference?.table === undefined) add('chart', 'Planning chart', undefined, NO_CHART);
+  else {
+    const c = referenceTableAtSite({ aircraft: a, mass_kg: mass, site: refSite, set: 'icao' });
+    if (c.status === 'ok') add('chart', 'Planning chart', c.length_m, undefined, summary.chart_m !== undefined);
+    else add('chart', 'Planning chart', undefined, c.status === 'outside-data'
+      ? notice('spread.outsideChart')`outside the chart (${c.field} ${c.value.toFixed(1)} beyond ${c.min}–${c.max}); never extrapolated`
+      : NO_CHART);
+  }
+  // Calibrated model.
+  const pm = ev.planningModel(a);
+  if (pm.fit?.status === 'ok') add('calibrated-model', 'Model calibrated to the planning data', run(pm), undefined, ev.options.method === 'planning' && summary.chart_m === undefined);
+  else add('calibrated-model', 'Model calibrated to the planning data', undefined, pm.fit !== undefined
+    ? notice('spread.fitRefused')`the fit to the planning data was refused (see the row's warnings)`
+    : notice('spread.noPlanningData')`no planning figures`);
+  // Uncalibrated model.
+  const plain = ev.options.method === 'physics' ? t.required_m : run({ profile: a, thrustScale: 1, clMaxScale: 1, source: '' });
+  add('model', 'Physics model, uncalibrated', plain, undefined, ev.options.method === 'physics' || (ev.options.method === 'planning' && pm.fit?.status !== 'ok' && summary.chart_m === undefined));
+  // Reference length with percentage corrections.
+  for (const set of ['icao', 'authority'] as const) {
+    const method = set === 'icao' ? 'reference-icao' : 'reference-authority';
+    const label = set === 'icao' ? 'Planning takeoff length + ICAO corrections' : 'Planning takeoff length + authority corrections';
+    if (a.reference?.takeoff_m === undefined) { add(method, label, undefined, notice('spread.noReference')`no planning takeoff length`); continue; }
+    const r = referenceLengthAtSite({ aircraft: a, operation: 'takeoff', site: refSite, set });
+    if (r.status !== 'ok') { add(method, label, undefined, notice('spread.referenceUnavailable')`not available here`); continue; }
+    add(method, label, r.length_m, r.specificStudyRequired
+      ? notice('spread.beyond35')`corrections beyond the 35 % limit of the percentage method: indicative only`
+      : notice('spread.referenceAtMtow')`at MTOW: the percentage method does not credit the lighter design mass`, ev.options.method === method && required === r.length_m);
+  }
+  // Indicative empirical estimates.
+  // Statistical estimates: indicative (their label says so), never governing, never given a reason.
+  const NA = notice('spread.notApplicable')`not applicable to this aircraft`;
+  add('torenbeek', 'Torenbeek (indicative)', t.empirical.torenbeek_m, t.empirical.torenbeek_m === undefined ? NA : undefined);
+  add('roskam', 'Roskam (indicative)', t.empirical.roskam_m, t.empirical.roskam_m === undefined ? NA : undefined);
+  // A figure far from the requirement without a reason yet: say what is known.
+  return out.map((f) => {
+    if (f.length_m === undefined || f.note !== undefined || f.governs || f.method === 'torenbeek' || f.method === 'roskam'
+      || Math.abs(f.length_m - required) <= SPREAD_NOTE_SHARE * required) return f;
+    const why = climbOffload !== undefined
+      ? notice('spread.climbLimited')`climb-limited: the row is sized at the climb-limited mass`
+      : f.method === 'model' && pm.fit?.status === 'ok'
+        ? notice('spread.uncalibrated')`the uncalibrated model differs from the planning data by ${((f.length_m / required - 1) * 100).toFixed(0)} %`
+        : notice('spread.differs')`${((f.length_m / required - 1) * 100).toFixed(0)} % from the requirement`;
+    return { ...f, note: why };
+  });
+}
+
 /** Scales of a model for the existing-runway check (which takes the profile as given plus scales). */
 function modelScales(m: TakeoffModel): { aircraft: AircraftProfile; thrustScale: number; clMaxScale?: number } {
   return { aircraft: m.profile, thrustScale: m.thrustScale, ...(m.clMaxScale === 1 ? {} : { clMaxScale: m.clMaxScale }) };
@@ -273,6 +346,7 @@ class Evaluator {
   private readonly takeoffCache = new Map<string, TakeoffResult>();
   private readonly calibrations = new Map<string, TakeoffCalibrationResult>();
   private readonly models = new Map<string, TakeoffModel>();
+  private readonly planningModels = new Map<string, TakeoffModel>();
   /** Greatest takeoff and landing masses per aircraft and runway direction (independent of the row). */
   readonly solvedMasses = new Map<string, { takeoffMass: MaxTakeoffMassResult; landingMass: MaxLandingMassResult }>();
   private readonly arfls = new Map<string, ReturnType<typeof aeroplaneReferenceFieldLength>>();
@@ -318,6 +392,17 @@ class Evaluator {
     if (!m) {
       m = takeoffModelOf(a, this.options.method, () => this.calibration(a));
       this.models.set(a.id, m);
+    }
+    return m;
+  }
+
+  /** The planning-data model of an aircraft whatever the study's method (for the methods table). */
+  planningModel(a: AircraftProfile): TakeoffModel {
+    if (this.options.method === 'planning') return this.model(a);
+    let m = this.planningModels.get(a.id);
+    if (!m) {
+      m = takeoffModelOf(a, 'planning', () => this.calibration(a));
+      this.planningModels.set(a.id, m);
     }
     return m;
   }
@@ -588,6 +673,8 @@ function evaluateRow(
       summary.peakTemperature_c = peak.temperature_c;
     }
   }
+
+  summary.spread = methodSpread(ev, a, mass, cond, refSite, t, takeoffRequired, summary, climbOffload);
 
   // 3. Landing.
   const landingMass = opts.landingMass === 'route' && route ? Math.min(a.mlw_kg, route.loading.arrivalMass_kg) : a.mlw_kg;

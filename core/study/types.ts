@@ -218,6 +218,8 @@ export interface TakeoffSummary {
   readonly climbMaxMass_kg?: number;
   /** The physics model's requirement, when it was computed beside another method, m. */
   readonly physics_m?: number;
+  /** Every method's takeoff requirement at the design conditions and mass, with a reason where one is missing or far off. */
+  readonly spread?: readonly MethodFigure[];
   /** Reference length + corrections, when the aircraft carries reference data, m. */
   /** Temperature below the design temperature at which a climb-limited requirement peaks (the row is sized there), °C. */
   readonly peakTemperature_c?: number;
@@ -229,6 +231,18 @@ export interface TakeoffSummary {
   /** Indicative empirical cross-checks, m. */
   readonly torenbeek_m?: number;
   readonly roskam_m?: number;
+}
+
+/** One method's takeoff requirement at design conditions (the methods table of a row). */
+export interface MethodFigure {
+  readonly method: 'chart' | 'calibrated-model' | 'model' | 'reference-icao' | 'reference-authority' | 'torenbeek' | 'roskam';
+  readonly label: string;
+  /** m; absent when the method gives no figure here (the note says why). */
+  readonly length_m?: number;
+  /** Why the figure is missing, or why it differs by more than 10 % from the row's requirement. */
+  readonly note?: Notice;
+  /** This method gave the row's number. */
+  readonly governs: boolean;
 }
 
 export interface LandingSummary {

@@ -127,3 +127,34 @@ describe('per aircraft, the source of the takeoff number', () => {
     }
   });
 });
+
+describe('the spread between methods, shown and explained', () => {
+  const input = study();
+  const rows = runStudy(input).scenarios.flatMap((s) => s.rows).filter((r) => r.status === 'ok');
+  const METHODS = ['chart', 'calibrated-model', 'model', 'reference-icao', 'reference-authority', 'torenbeek', 'roskam'];
+
+  it('every row lists every method; a missing figure says why; exactly one figure governs and it is the requirement', () => {
+    for (const r of rows) {
+      const s = r.takeoff!.spread!;
+      expect(s.map((f) => f.method)).toEqual(METHODS);
+      for (const f of s) if (f.length_m === undefined) expect(f.note, `${r.aircraft} ${f.method}`).toBeDefined();
+      const g = s.filter((f) => f.governs);
+      expect(g, r.aircraft).toHaveLength(1);
+      // The governing figure is the takeoff requirement (before a climb-limited peak adjustment).
+      if (r.takeoff!.peakTemperature_c === undefined) expectClose(g[0]!.length_m!, r.requiredTakeoff_m!, { rel: 1e-9 }, `${r.aircraft} governing figure`);
+    }
+  });
+
+  it('a figure far from the requirement gets a reason: the uncalibrated model against the planning data, ICAO beyond its 35 % limit', () => {
+    const tern = rows.find((r) => r.aircraft === 'tern-rj90')!;
+    const s = tern.takeoff!.spread!;
+    const model = s.find((f) => f.method === 'model')!;
+    const cal = s.find((f) => f.method === 'calibrated-model')!;
+    expect(cal.governs).toBe(true);
+    expect(Math.abs(model.length_m! / cal.length_m! - 1)).toBeGreaterThan(0.1);
+    expect(model.note!.code).toBe('spread.uncalibrated');
+    const icao = s.find((f) => f.method === 'reference-icao')!;
+    expect(icao.note!.code).toMatch(/^spread\.(beyond35|referenceAtMtow)$/);
+    expect(s.find((f) => f.method === 'chart')!.note!.code).toBe('spread.noChart');
+  });
+});

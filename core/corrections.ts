@@ -111,6 +111,12 @@ export interface IcaoCorrectionInput {
 }
 
 const LENGTH_RANGE = { min: 100, max: 6000, unit: 'm' } as const;
+/**
+ * Length an authority adjustment accepts: a basic length, or one the ICAO elevation and temperature
+ * corrections have already raised (at a high, hot site beyond 6,000 m; the plausibility bound then
+ * says it cannot practically be needed). Project limit, no published source.
+ */
+const ADJUSTED_LENGTH_RANGE = { min: 100, max: 100_000, unit: 'm' } as const;
 const ELEVATION_RANGE = { min: -400, max: 4500, unit: 'm' } as const;
 const ART_RANGE = { min: -40, max: 55, unit: '°C' } as const;
 const GRADIENT_RANGE = RUNWAY_EFFECTIVE_GRADIENT_RANGE;
@@ -237,7 +243,7 @@ export interface AuthorityAdjustmentInput {
  * landing × 1.15 on a wet runway for turbojets. No gradient adjustment for landing.
  */
 export function authorityAdjustments(input: AuthorityAdjustmentInput): CorrectionResult {
-  const l0 = inRange('length_m', input.length_m, LENGTH_RANGE);
+  const l0 = inRange('length_m', input.length_m, ADJUSTED_LENGTH_RANGE);
   check(input.operation === 'takeoff' || input.operation === 'landing', 'operation', input.operation, 'one of takeoff, landing');
   const steps: CorrectionStep[] = [];
   const warnings: Notice[] = [];

@@ -561,7 +561,9 @@ export function componentSections(rows: readonly RowResult[]): ComponentSection[
         const f = figure(r, label);
         if (!f) return undefined;
         if (f.length_m === undefined) return f.note ? { notice: f.note } : t('—');
-        return f.note ? { notice: notice('report.methodFigure')`${qty.length(f.length_m)} (${f.note})`, bold: f.governs } : { ...q(f.length_m, 'length'), ...(f.governs ? { bold: true } : {}) } as Cell;
+        if (f.note) return { notice: notice('report.methodFigure')`${qty.length(f.length_m)} (${f.note})`, bold: f.governs };
+        // The figure that gave the row's number, in bold (a quantity cell has no weight of its own).
+        return f.governs ? { notice: notice('report.methodFigureGoverns')`${qty.length(f.length_m)}`, bold: true } : q(f.length_m, 'length');
       },
     })),
     {

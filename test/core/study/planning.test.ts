@@ -158,3 +158,22 @@ describe('the spread between methods, shown and explained', () => {
     expect(s.find((f) => f.method === 'chart')!.note!.code).toBe('spread.noChart');
   });
 });
+
+describe('a high, hot site (regression: fast-check counterexample, seed 847883296)', () => {
+  for (const method of ['planning', 'reference-authority'] as const) {
+    it(`${method}: the authority adjustments take an ICAO-corrected length beyond 6,000 m; every figure finite`, () => {
+      const input = study((d) => {
+        d.options.method = method;
+        const site = (d as unknown as { site: Record<string, unknown> }).site;
+        site.elevation_m = 3035;
+        site.designTemperature_c = 47.95;
+      });
+      const r = runStudy(input);
+      const figures = r.scenarios.flatMap((s) => s.rows).flatMap((row) => row.takeoff?.spread ?? []);
+      const authority = figures.filter((f) => f.method === 'reference-authority' && f.length_m !== undefined);
+      expect(authority.length).toBeGreaterThan(0);
+      for (const f of figures) if (f.length_m !== undefined) expect(Number.isFinite(f.length_m)).toBe(true);
+      expect(authority.some((f) => f.length_m! > 6000)).toBe(true);
+    });
+  }
+});

@@ -25,6 +25,7 @@
 import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { validateAircraft, type AircraftProfile } from './aircraft.js';
 import { notice, qty, type Notice } from './notices.js';
+import { flatRating } from './propulsion.js';
 import { analyseTakeoff } from './takeoff/index.js';
 import { check, finite, inRange } from './validate.js';
 
@@ -114,11 +115,6 @@ export function chooseFitParameters(a: AircraftProfile, points: readonly ChartPo
   return out.slice(0, points.length);
 }
 
-/** The profile's resolved flat rating as an ISA deviation, K (core/propulsion.ts rule). */
-function profileFlatRatingDelta(a: AircraftProfile): number {
-  return a.flatRatingDeltaIsa_k ?? (a.flatRatingTemp_c !== undefined ? a.flatRatingTemp_c - 15 : 0);
-}
-
 /**
  * The profile with the drag and flat-rating parameters applied; thrust and lift scales stay scales
  * (the takeoff engine's thrustScale and clMaxScale inputs), so no field leaves its own range.
@@ -167,7 +163,7 @@ export function fitTakeoffChart(input: ChartFitInput): ChartFitResult {
   const names = [...(input.parameters ?? chooseFitParameters(a, pts))];
   check(names.length >= 1 && names.length <= Math.min(4, pts.length), 'parameters', names.join(', '), `1 to ${Math.min(4, pts.length)} parameters (no more than the points)`);
   check(new Set(names).size === names.length, 'parameters', names.join(', '), 'each parameter once');
-  const initial = names.map((n) => (n === 'flatRatingDeltaIsa_k' ? Math.min(FIT_PARAMETER_RANGES[n].max, Math.max(FIT_PARAMETER_RANGES[n].min, profileFlatRatingDelta(a))) : 1));
+  const initial = names.map((n) => (n === 'flatRatingDeltaIsa_k' ? Math.min(FIT_PARAMETER_RANGES[n].max, Math.max(FIT_PARAMETER_RANGES[n].min, flatRating(a).deltaIsa_k)) : 1));
   const asRecord = (v: readonly number[]): Partial<Record<FitParameterName, number>> => Object.fromEntries(names.map((n, i) => [n, v[i]!]));
 
   // The solver fits y = f(x) with x the point index and y = 1 (model / chart at a perfect fit). It

@@ -39,6 +39,9 @@ export {
   type FieldSpec, type ReferenceLengths, type ReferenceTable
 } from './aircraft.js';
 
+// The aeroplane reference field length (planning figure first)
+export { aeroplaneReferenceFieldLength } from './plausibility.js';
+
 // Runway surfaces
 export { SURFACE_LABELS, SURFACES, type Surface } from './surface.js';
 

@@ -74,12 +74,13 @@ export function plausibilityBound(arfl_m?: number, arflSource: 'flight-manual' |
  * takeoff model at MTOW, sea level, ISA (15 °C), zero slope, still air, dry paved runway, no thrust
  * factor; undefined when the model finds the takeoff infeasible there.
  */
-export function aeroplaneReferenceFieldLength(a: AircraftProfile): { arfl_m?: number; source: 'flight-manual' | 'model' } {
-  if (a.reference?.takeoff_m !== undefined) return { arfl_m: a.reference.takeoff_m, source: 'flight-manual' };
-  const t = analyseTakeoff({
+export function aeroplaneReferenceFieldLength(a: AircraftProfile): { arfl_m?: number; source: 'flight-manual' | 'model'; model: TakeoffResult } {
+  // The model's figure is always computed: it is shown beside a planning figure.
+  const model = analyseTakeoff({
     aircraft: a, mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry', thrustScale: 1,
   });
-  return t.feasible ? { arfl_m: t.required_m, source: 'model' } : { source: 'model' };
+  if (a.reference?.takeoff_m !== undefined) return { arfl_m: a.reference.takeoff_m, source: 'flight-manual', model };
+  return model.feasible ? { arfl_m: model.required_m, source: 'model', model } : { source: 'model', model };
 }
 
 /** The plausibility bound of an aircraft (computes its reference field length). */

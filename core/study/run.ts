@@ -275,38 +275,35 @@ const SPREAD_NOTE_SHARE = 0.1;
 function methodSpread(
   ev: Evaluator, a: AircraftProfile, mass: number, cond: Conditions,
   refSite: Parameters<typeof referenceLengthAtSite>[0]['site'], t: Extract<TakeoffResult, { feasible: true }>,
-  required: number, summary: { readonly source: string; readonly chart_m?: number }, climbOffload: number | undefined,
+  required: number, takeoffFrom: MethodFigure['method'] | undefined, climbOffload: number | undefined,
 ): MethodFigure[] {
+  // The study's own analyses (cached): the row's model is the same analysis as the row's takeoff.
   const run = (m: TakeoffModel): number | undefined => {
-    const r = analyseTakeoff({
-      aircraft: m.profile, mass_kg: mass, pressureAltitude_m: cond.pressureAltitude_m, temperature_c: cond.temperature_c,
-      slope: cond.slope, headwind_mps: 0, surface: ev.options.surface, thrustScale: m.thrustScale, ...(m.clMaxScale === 1 ? {} : { clMaxScale: m.clMaxScale }),
-    });
+    const r = ev.takeoff(a, mass, cond, undefined, m);
     return r.feasible ? r.required_m : undefined;
   };
   const out: MethodFigure[] = [];
-  const add = (method: MethodFigure['method'], label: string, length_m: number | undefined, note?: Notice, governs = false): void => {
-    out.push({ method, label, ...(length_m === undefined ? {} : { length_m }), ...(note ? { note } : {}), governs });
+  const add = (method: MethodFigure['method'], label: string, length_m: number | undefined, note?: Notice): void => {
+    out.push({ method, label, ...(length_m === undefined ? {} : { length_m }), ...(note ? { note } : {}), governs: method === takeoffFrom });
   };
   const NO_CHART = notice('spread.noChart')`no planning chart in the profile`;
   // Planning chart.
   if (a.reference?.table === undefined) add('chart', 'Planning chart', undefined, NO_CHART);
   else {
     const c = referenceTableAtSite({ aircraft: a, mass_kg: mass, site: refSite, set: 'icao' });
-    if (c.status === 'ok') add('chart', 'Planning chart', c.length_m, undefined, summary.chart_m !== undefined);
+    if (c.status === 'ok') add('chart', 'Planning chart', c.length_m);
     else add('chart', 'Planning chart', undefined, c.status === 'outside-data'
       ? notice('spread.outsideChart')`outside the chart (${c.field} ${c.value.toFixed(1)} beyond ${c.min}–${c.max}); never extrapolated`
       : NO_CHART);
   }
   // Calibrated model.
   const pm = ev.planningModel(a);
-  if (pm.fit?.status === 'ok') add('calibrated-model', 'Model calibrated to the planning data', run(pm), undefined, ev.options.method === 'planning' && summary.chart_m === undefined);
+  if (pm.fit?.status === 'ok') add('calibrated-model', 'Model calibrated to the planning data', run(pm));
   else add('calibrated-model', 'Model calibrated to the planning data', undefined, pm.fit !== undefined
     ? notice('spread.fitRefused')`the fit to the planning data was refused (see the row's warnings)`
     : notice('spread.noPlanningData')`no planning figures`);
   // Uncalibrated model.
-  const plain = ev.options.method === 'physics' ? t.required_m : run({ profile: a, thrustScale: 1, clMaxScale: 1, source: '' });
-  add('model', 'Physics model, uncalibrated', plain, undefined, ev.options.method === 'physics' || (ev.options.method === 'planning' && pm.fit?.status !== 'ok' && summary.chart_m === undefined));
+  add('model', 'Physics model, uncalibrated', run({ profile: a, thrustScale: 1, clMaxScale: 1, source: 'physics model' }));
   // Reference length with percentage corrections.
   for (const set of ['icao', 'authority'] as const) {
     const method = set === 'icao' ? 'reference-icao' : 'reference-authority';
@@ -316,7 +313,7 @@ function methodSpread(
     if (r.status !== 'ok') { add(method, label, undefined, notice('spread.referenceUnavailable')`not available here`); continue; }
     add(method, label, r.length_m, r.specificStudyRequired
       ? notice('spread.beyond35')`corrections beyond the 35 % limit of the percentage method: indicative only`
-      : notice('spread.referenceAtMtow')`at MTOW: the percentage method does not credit the lighter design mass`, ev.options.method === method && required === r.length_m);
+      : notice('spread.referenceAtMtow')`at MTOW: the percentage method does not credit the lighter design mass`);
   }
   // Indicative empirical estimates.
   // Statistical estimates: indicative (their label says so), never governing, never given a reason.
@@ -411,9 +408,9 @@ class Evaluator {
     return this.model(a).thrustScale;
   }
 
-  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, surface = this.options.surface): TakeoffResult {
-    const m = this.model(a);
-    const key = `${a.id}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${surface}`;
+  /** A takeoff analysis with the aircraft's model under the study's method, or with the model given (cached). */
+  takeoff(a: AircraftProfile, mass_kg: number, c: Conditions, surface = this.options.surface, m = this.model(a)): TakeoffResult {
+    const key = `${a.id}|${m.source}|${mass_kg}|${c.pressureAltitude_m}|${c.temperature_c}|${c.slope}|${surface}`;
     let r = this.takeoffCache.get(key);
     if (!r) {
       r = analyseTakeoff({
@@ -603,6 +600,10 @@ function evaluateRow(
     ...(t.empirical.torenbeek_m === undefined ? {} : { torenbeek_m: t.empirical.torenbeek_m }),
     ...(t.empirical.roskam_m === undefined ? {} : { roskam_m: t.empirical.roskam_m }),
   };
+  // Which method of the methods table gives the row's takeoff number (none for the single-factor
+  // calibration, which the table does not list): set where each decision below is taken.
+  let takeoffFrom: MethodFigure['method'] | undefined = opts.method === 'calibrated' ? undefined
+    : ev.model(a).fit?.status === 'ok' ? 'calibrated-model' : 'model';
   const refSite = {
     elevation_m: ev.site.elevation_m, referenceTemperature_c: ev.site.designTemperature_c,
     effectiveGradient: ev.site.designSlope,
@@ -622,6 +623,7 @@ function evaluateRow(
         warnings.push(...ref.warnings);
         warnings.push(notice('study.referenceIndicative')`${ref.label ?? 'Elevation and temperature corrections exceed 35 %: indicative only, a specific study is required.'} The corrected reference length (${qty.length(ref.length_m)}) is shown as indicative only and does not govern; the physics model (${qty.length(t.required_m)}) sizes this aircraft.`);
       } else if (referenceMethod) {
+        takeoffFrom = opts.method === 'reference-authority' ? 'reference-authority' : 'reference-icao';
         takeoffRequired = ref.length_m;
         summary.required_m = ref.length_m;
         summary.governing = `reference length + ${set === 'icao' ? 'ICAO' : 'authority'} corrections${overridden ? ' (override beyond the 35 % limit)' : ''}`;
@@ -647,6 +649,7 @@ function evaluateRow(
         summary.required_m = chart.length_m;
         summary.source = 'planning chart (multilinear interpolation) + ICAO gradient step';
         summary.governing = 'planning chart';
+        takeoffFrom = 'chart';
         summary.chart_m = chart.length_m;
       } else if (chart.status === 'outside-data') {
         warnings.push(notice('study.outsidePlanningChart')`The design condition lies outside the planning chart (${chart.field} ${chart.value.toFixed(1)}; the chart covers ${chart.min} to ${chart.max}): the chart is not extrapolated, the calibrated model gives the length.`);
@@ -674,7 +677,7 @@ function evaluateRow(
     }
   }
 
-  summary.spread = methodSpread(ev, a, mass, cond, refSite, t, takeoffRequired, summary, climbOffload);
+  summary.spread = methodSpread(ev, a, mass, cond, refSite, t, takeoffRequired, takeoffFrom, climbOffload);
 
   // 3. Landing.
   const landingMass = opts.landingMass === 'route' && route ? Math.min(a.mlw_kg, route.loading.arrivalMass_kg) : a.mlw_kg;

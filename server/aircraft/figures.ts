@@ -7,7 +7,7 @@
  */
 import type { AircraftFiguresView } from '../../templates/aircraft/index.js';
 import {
-  InputDomainError, analyseTakeoff, classifyAircraft, notice, referenceLandingSpeed, type AircraftProfile,
+  InputDomainError, aeroplaneReferenceFieldLength, classifyAircraft, notice, referenceLandingSpeed, type AircraftProfile,
 } from '../../core/index.js';
 
 /** Key figures of a catalogue aircraft; the view type lives with the template that shows it. */
@@ -30,16 +30,13 @@ export function aircraftFigures(a: AircraftProfile): AircraftFigures {
 function computeFigures(a: AircraftProfile): AircraftFigures {
   try {
     const vref_mps = referenceLandingSpeed({ aircraft: a });
-    const to = analyseTakeoff({ aircraft: a, mass_kg: a.mtow_kg, pressureAltitude_m: 0, temperature_c: 15, slope: 0, headwind_mps: 0, surface: 'dry' });
-    const planning = a.reference?.takeoff_m;
-    // The aeroplane reference field length is the planning figure when the profile gives one, else
-    // the physics model's (the study uses the same rule, core/plausibility.ts); it says which.
-    if (!to.feasible && planning === undefined) return { vref_mps, note: notice('aircraft.noReferenceFieldLength')`No reference field length: ${to.message}` };
-    const arfl_m = planning !== undefined ? planning : (to as Extract<typeof to, { feasible: true }>).required_m;
+    // The study's rule (core/plausibility.ts): the planning figure when the profile gives one, else the model's.
+    const { arfl_m, source, model: to } = aeroplaneReferenceFieldLength(a);
+    if (arfl_m === undefined) return { vref_mps, note: notice('aircraft.noReferenceFieldLength')`No reference field length: ${to.feasible ? '' : to.message}` };
     const c = classifyAircraft(a, { arfl_m, vref_mps });
     return {
       arfl_m,
-      arflSource: planning === undefined ? 'physics model' : 'planning figure',
+      arflSource: source === 'flight-manual' ? 'planning figure' : 'physics model',
       ...(to.feasible ? { modelArfl_m: to.required_m } : {}),
       vref_mps,
       aerodromeCode: c.aerodromeCode,
